@@ -1,0 +1,91 @@
+package dev.sigmawalk.engine.model;
+
+/**
+ * Sample moments of one estimation window's excess returns, computed once and shared by every
+ * model that uses them. Divisors are L-1 (unbiased), as in METHODS §3. Arrays are owned by this
+ * record and must not be modified by callers.
+ *
+ * @param assets n
+ * @param length L
+ * @param mean x̄_i, length n
+ * @param marketMean m̄
+ * @param marketVariance s_mm = 1/(L-1) Σ (m_t - m̄)²
+ * @param marketCovariance s_im = 1/(L-1) Σ (x_ti - x̄_i)(m_t - m̄), length n
+ * @param covariance S, n×n row-major, both triangles filled
+ */
+public record WindowMoments(int assets, int length, double[] mean, double marketMean, double marketVariance,
+                            double[] marketCovariance, double[] covariance) {
+    public WindowMoments {
+        if (!(length >= 2)) {
+            throw new IllegalArgumentException("window length (" + length + ") must be >= 2");
+        }
+        if (mean.length != assets || marketCovariance.length != assets || covariance.length != assets * assets) {
+            throw new IllegalArgumentException("moment arrays do not match n = " + assets);
+        }
+    }
+
+    /** S_ij. */
+    public double covariance(int i, int j) {
+        return covariance[i * assets + j];
+    }
+
+    /**
+     * Computes the moments directly from a window (two passes: means, then centred
+     * cross-products of the upper triangle, mirrored). O(L n²).
+     */
+    public static WindowMoments of(EstimationWindow w) {
+        int n = w.assetCount();
+        int len = w.length();
+        double[] x = w.excessReturns();
+        double[] m = w.marketExcess();
+        double[] mean = new double[n];
+        double mMean = 0;
+        for (int t = 0; t < len; t++) {
+            mMean += m[t];
+            int base = t * n;
+            for (int i = 0; i < n; i++) {
+                mean[i] += x[base + i];
+            }
+        }
+        mMean /= len;
+        for (int i = 0; i < n; i++) {
+            mean[i] /= len;
+        }
+        double[] centred = new double[len * n];
+        double[] mc = new double[len];
+        for (int t = 0; t < len; t++) {
+            int base = t * n;
+            for (int i = 0; i < n; i++) {
+                centred[base + i] = x[base + i] - mean[i];
+            }
+            mc[t] = m[t] - mMean;
+        }
+        double smm = 0;
+        double[] sim = new double[n];
+        double[] s = new double[n * n];
+        for (int t = 0; t < len; t++) {
+            int base = t * n;
+            double mt = mc[t];
+            smm += mt * mt;
+            for (int i = 0; i < n; i++) {
+                double xi = centred[base + i];
+                sim[i] += xi * mt;
+                int row = i * n;
+                for (int j = i; j < n; j++) {
+                    s[row + j] += xi * centred[base + j];
+                }
+            }
+        }
+        double div = len - 1.0;
+        smm /= div;
+        for (int i = 0; i < n; i++) {
+            sim[i] /= div;
+            for (int j = i; j < n; j++) {
+                double v = s[i * n + j] / div;
+                s[i * n + j] = v;
+                s[j * n + i] = v;
+            }
+        }
+        return new WindowMoments(n, len, mean, mMean, smm, sim, s);
+    }
+}
