@@ -1,0 +1,86 @@
+package dev.sigmawalk.engine.measures;
+
+/**
+ * Plain statistics of return series. Means and standard deviations use two passes for accuracy;
+ * standard deviations divide by N−1.
+ */
+public final class SeriesStats {
+    private SeriesStats() {
+    }
+
+    /** Arithmetic mean; requires at least one value. */
+    public static double mean(double[] x) {
+        if (x.length == 0) {
+            throw new IllegalArgumentException("mean of an empty series");
+        }
+        double s = 0;
+        for (double v : x) {
+            s += v;
+        }
+        return s / x.length;
+    }
+
+    /** Sample standard deviation, divisor N−1; requires at least two values. */
+    public static double sd(double[] x) {
+        if (x.length < 2) {
+            throw new IllegalArgumentException("standard deviation needs at least 2 values, got " + x.length);
+        }
+        double m = mean(x);
+        double s = 0;
+        for (double v : x) {
+            double d = v - m;
+            s += d * d;
+        }
+        return Math.sqrt(s / (x.length - 1));
+    }
+
+    /** a − b element by element. */
+    public static double[] minus(double[] a, double[] b) {
+        if (a.length != b.length) {
+            throw new IllegalArgumentException("series lengths differ: " + a.length + " and " + b.length);
+        }
+        double[] out = new double[a.length];
+        for (int i = 0; i < a.length; i++) {
+            out[i] = a[i] - b[i];
+        }
+        return out;
+    }
+
+    /**
+     * Largest peak-to-trough loss of wealth W_t = Π_{s≤t}(1 + R_s), with W = 1 just before the
+     * first row: max_t (1 − W_t / max_{s≤t} W_s), as a positive fraction (0 when wealth never falls).
+     */
+    public static double maxDrawdown(double[] r) {
+        double wealth = 1;
+        double peak = 1;
+        double worst = 0;
+        for (double v : r) {
+            wealth *= 1 + v;
+            peak = Math.max(peak, wealth);
+            worst = Math.max(worst, 1 - wealth / peak);
+        }
+        return worst;
+    }
+
+    /** Drawdown series 1 − W_t / max_{s≤t} W_s, one value per row. */
+    public static double[] drawdowns(double[] r) {
+        double[] out = new double[r.length];
+        double wealth = 1;
+        double peak = 1;
+        for (int i = 0; i < r.length; i++) {
+            wealth *= 1 + r[i];
+            peak = Math.max(peak, wealth);
+            out[i] = 1 - wealth / peak;
+        }
+        return out;
+    }
+
+    /** Compound annual growth (Π(1 + R_t))^(p/N) − 1, using logs to avoid overflow. */
+    public static double cagr(double[] r, int periodsPerYear) {
+        double logGrowth = 0;
+        for (double v : r) {
+            logGrowth += Math.log1p(v);
+        }
+        return Math.expm1(logGrowth * periodsPerYear / r.length);
+    }
+}

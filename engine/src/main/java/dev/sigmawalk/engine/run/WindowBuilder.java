@@ -1,0 +1,73 @@
+package dev.sigmawalk.engine.run;
+
+import dev.sigmawalk.engine.data.ReturnPanel;
+import dev.sigmawalk.engine.model.EstimationWindow;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+
+/**
+ * Cuts estimation windows out of a panel (METHODS §2-§3): an asset is eligible at τ for window L
+ * when it has a return in every row τ−L+1..τ; the window holds excess returns x = r − rf and
+ * m = r_m − rf over those rows. Only rows up to τ are read, so nothing after τ can reach a model.
+ */
+final class WindowBuilder {
+    private final ReturnPanel panel;
+    /** missingBefore[t * n + i] = rows before t in which asset i has no return (prefix counts). */
+    private final int[] missingBefore;
+
+    WindowBuilder(ReturnPanel panel) {
+        this.panel = panel;
+        int rows = panel.rows();
+        int n = panel.assetCount();
+        double[] r = panel.rawReturns();
+        missingBefore = new int[(rows + 1) * n];
+        for (int t = 0; t < rows; t++) {
+            int from = t * n;
+            int to = from + n;
+            for (int i = 0; i < n; i++) {
+                missingBefore[to + i] = missingBefore[from + i] + (Double.isNaN(r[from + i]) ? 1 : 0);
+            }
+        }
+    }
+
+    /** The panel columns eligible at τ for window L, ascending. */
+    int[] eligible(int tau, int length) {
+        int n = panel.assetCount();
+        int first = tau - length + 1;
+        int[] out = new int[n];
+        int count = 0;
+        for (int i = 0; i < n; i++) {
+            if (missingBefore[(tau + 1) * n + i] - missingBefore[first * n + i] == 0) {
+                out[count++] = i;
+            }
+        }
+        return Arrays.copyOf(out, count);
+    }
+
+    /** The window of length L ending at row τ, over the eligible assets. */
+    EstimationWindow build(int tau, int length) {
+        int[] cols = eligible(tau, length);
+        int n = cols.length;
+        int all = panel.assetCount();
+        double[] r = panel.rawReturns();
+        double[] x = new double[length * n];
+        double[] m = new double[length];
+        int first = tau - length + 1;
+        for (int t = 0; t < length; t++) {
+            int row = first + t;
+            double rf = panel.riskFree(row);
+            m[t] = panel.market(row) - rf;
+            int src = row * all;
+            int dst = t * n;
+            for (int k = 0; k < n; k++) {
+                x[dst + k] = r[src + cols[k]] - rf;
+            }
+        }
+        List<String> ids = new ArrayList<>(n);
+        for (int c : cols) {
+            ids.add(panel.assets().get(c));
+        }
+        return new EstimationWindow(panel.date(tau), tau, ids, cols, x, m, panel.periodsPerYear(), null);
+    }
+}
