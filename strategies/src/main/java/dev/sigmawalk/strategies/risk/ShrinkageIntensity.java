@@ -1,0 +1,163 @@
+package dev.sigmawalk.strategies.risk;
+
+/**
+ * Estimators of the optimal Ledoit-Wolf shrinkage intensity δ for Σ = δF + (1-δ)S, one per
+ * target. All are computed on demeaned window data with divisor-L moments, as the papers define
+ * them (METHODS §3): a divisor-(L-1) quantity q enters as q (L-1)/L. δ is scale-free, so it
+ * applies unchanged to the divisor-(L-1) matrices the caller combines.
+ *
+ * <p>Common notation: x̃_ti and ỹ_t the demeaned asset and market excess returns; s_ij, s_i0,
+ * s_00 the divisor-L moments; f_ij the target; π̂ from {@link ProductVariances};
+ * γ̂ = Σ_ij (f_ij - s_ij)². For the first two targets κ̂ = (π̂ - ρ̂)/γ̂ and
+ * δ = max(0, min(1, κ̂/L)). When γ̂ = 0 the target equals the sample matrix and every δ gives the
+ * same Σ; δ = 0 is then reported.
+ */
+final class ShrinkageIntensity {
+
+    private ShrinkageIntensity() {
+    }
+
+    /**
+     * Ledoit & Wolf (2003, J. Empirical Finance), target F = Σ_SI. From the paper's appendix:
+     * ρ̂_ii = π̂_ii and, for i ≠ j, ρ̂_ij = 1/L Σ_t r_tij with
+     * r_tij = (s_j0 s_00 x̃_ti + s_i0 s_00 x̃_tj - s_i0 s_j0 ỹ_t) ỹ_t x̃_ti x̃_tj / s_00² - f_ij s_ij.
+     *
+     * <p>Summed over i ≠ j (the first two terms are equal after swapping i and j), with
+     * c_t = Σ_j s_j0 x̃_tj:
+     * Σ_{i≠j} ρ̂_ij = (2/s_00) 1/L Σ_t ỹ_t Σ_i x̃_ti² (c_t - s_i0 x̃_ti)
+     * - (1/s_00²) 1/L Σ_t ỹ_t² (c_t² - Σ_i s_i0² x̃_ti²) - Σ_{i≠j} f_ij s_ij, which is O(L n + n²).
+     *
+     * @param target F with divisor L-1 and F_ii = S_ii
+     */
+    static double singleIndex(CentredWindow w, double[] target, ProductVariances pi) {
+        int n = w.assets();
+        int len = w.length();
+        double c = w.toPopulationDivisor();
+        double[] s = w.moments().covariance();
+        double s00 = c * w.moments().marketVariance();
+        double[] si0 = new double[n];
+        for (int i = 0; i < n; i++) {
+            si0[i] = c * w.moments().marketCovariance()[i];
+        }
+        double[] x = new double[n];
+        double cross = 0;
+        double market = 0;
+        for (int t = 0; t < len; t++) {
+            double y = w.row(t, x);
+            double ct = 0;
+            double ownSq = 0;
+            for (int i = 0; i < n; i++) {
+                ct += si0[i] * x[i];
+                ownSq += si0[i] * si0[i] * x[i] * x[i];
+            }
+            double rowCross = 0;
+            for (int i = 0; i < n; i++) {
+                rowCross += x[i] * x[i] * (ct - si0[i] * x[i]);
+            }
+            cross += y * rowCross;
+            market += y * y * (ct * ct - ownSq);
+        }
+        double targetTimesSample = 0;
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                if (i != j) {
+                    targetTimesSample += c * target[i * n + j] * c * s[i * n + j];
+                }
+            }
+        }
+        double rhoOff = 2.0 / s00 * cross / len - market / (s00 * s00 * len) - targetTimesSample;
+        return fromKappa(pi.total(), pi.diagonal() + rhoOff, gamma(w, target), len);
+    }
+
+    /**
+     * Ledoit & Wolf (2004, J. Portfolio Management, appendix on the optimal intensity),
+     * constant-correlation target:
+     * ρ̂ = Σ_i π̂_ii + Σ_{i≠j} (r̄/2)(√(s_jj/s_ii) ϑ̂_ii,ij + √(s_ii/s_jj) ϑ̂_jj,ij) with
+     * ϑ̂_ii,ij = 1/L Σ_t (x̃_ti² - s_ii)(x̃_ti x̃_tj - s_ij) = 1/L Σ_t x̃_ti³ x̃_tj - s_ii s_ij.
+     *
+     * <p>The two halves are equal after swapping i and j, and with g_t = Σ_j √s_jj x̃_tj:
+     * Σ_{i≠j} √(s_jj/s_ii) ϑ̂_ii,ij = 1/L Σ_t [(Σ_i x̃_ti³/√s_ii) g_t - Σ_i x̃_ti⁴]
+     * - Σ_{i≠j} √(s_ii s_jj) s_ij, which is O(L n + n²).
+     *
+     * @param meanCorrelation r̄ (scale-free)
+     * @param target          F with divisor L-1
+     */
+    static double constantCorrelation(CentredWindow w, double meanCorrelation, double[] target, ProductVariances pi) {
+        int n = w.assets();
+        int len = w.length();
+        double c = w.toPopulationDivisor();
+        double[] s = w.moments().covariance();
+        double[] sd = new double[n];
+        for (int i = 0; i < n; i++) {
+            sd[i] = Math.sqrt(c * s[i * n + i]);
+        }
+        double[] x = new double[n];
+        double fourth = 0;
+        for (int t = 0; t < len; t++) {
+            w.row(t, x);
+            double g = 0;
+            double cubes = 0;
+            for (int i = 0; i < n; i++) {
+                double xi = x[i];
+                g += sd[i] * xi;
+                cubes += xi * xi * xi / sd[i];
+                fourth -= xi * xi * xi * xi;
+            }
+            fourth += cubes * g;
+        }
+        double scaled = 0;
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                if (i != j) {
+                    scaled += sd[i] * sd[j] * c * s[i * n + j];
+                }
+            }
+        }
+        double rhoOff = meanCorrelation * (fourth / len - scaled);
+        return fromKappa(pi.total(), pi.diagonal() + rhoOff, gamma(w, target), len);
+    }
+
+    /**
+     * Ledoit & Wolf (2004, J. Multivariate Analysis, section 3, the consistent estimators of m, d²,
+     * b̄² and b²), target F = m I with m = tr(S)/n. In the paper's norm ‖A‖² = tr(AA')/n: d² = ‖S - mI‖² = γ̂/n,
+     * b̄² = 1/L² Σ_t ‖x̃_t x̃_t' - S‖² = π̂/(nL), b² = min(b̄², d²) and δ = b²/d², the weight of mI
+     * in the paper's estimator (b²/d²) mI + (a²/d²) S; it lies in [0, 1] by construction.
+     *
+     * @param target F = (tr S / n) I with divisor L-1
+     */
+    static double identity(CentredWindow w, double[] target, ProductVariances pi) {
+        int n = w.assets();
+        double gamma = gamma(w, target);
+        if (!(gamma > 0)) {
+            return 0.0;
+        }
+        double dSquared = gamma / n;
+        double bBarSquared = Math.max(0.0, pi.total()) / ((double) n * w.length());
+        return Math.min(bBarSquared, dSquared) / dSquared;
+    }
+
+    /** γ̂ = Σ_ij (f_ij - s_ij)² with divisor-L moments. */
+    private static double gamma(CentredWindow w, double[] target) {
+        double c = w.toPopulationDivisor();
+        double[] s = w.moments().covariance();
+        double sum = 0;
+        for (int k = 0; k < s.length; k++) {
+            double diff = c * (target[k] - s[k]);
+            sum += diff * diff;
+        }
+        return sum;
+    }
+
+    /** δ = max(0, min(1, κ̂/L)), κ̂ = (π̂ - ρ̂)/γ̂; 0 when γ̂ = 0. */
+    private static double fromKappa(double pi, double rho, double gamma, int len) {
+        if (!(gamma > 0)) {
+            return 0.0;
+        }
+        double delta = (pi - rho) / gamma / len;
+        if (Double.isNaN(delta)) {
+            throw new ArithmeticException("shrinkage intensity is undefined (pi " + pi + ", rho " + rho
+                    + ", gamma " + gamma + ")");
+        }
+        return Math.max(0.0, Math.min(1.0, delta));
+    }
+}
