@@ -1,0 +1,152 @@
+package dev.sigmawalk.engine.evidence;
+
+import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.model.WindowMoments;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/**
+ * Correlations ρ_ij of the market-model residuals of one estimation window (METHODS §8), the
+ * raw material of the single-index adequacy checks.
+ *
+ * <p>The residuals never need to be formed. With e_i = (x_i - x̄_i) - β_i (m - m̄) and
+ * β_i = s_im / s_mm (least squares with an intercept, so every e_i has mean zero),
+ * <pre>
+ *   cov(e_i, e_j) = S_ij - β_j s_im - β_i s_jm + β_i β_j s_mm = S_ij - s_im s_jm / s_mm,
+ *   d_i = cov(e_i, e_i) = S_ii - s_im² / s_mm,
+ *   ρ_ij = cov(e_i, e_j) / √(d_i d_j),
+ * </pre>
+ * all from the window's shared moments (divisor L-1, which cancels in ρ). Cost O(n²).
+ *
+ * <p>Edge cases: fewer than two assets, a window shorter than 3 rows, a market variance that is
+ * not positive, or an asset whose residual variance is not above 1e-12 of its total variance
+ * (it moves exactly with the market, so ρ is undefined) are rejected with an
+ * {@link IllegalArgumentException} naming the cause. Rounding can push |ρ| a hair past 1; it is
+ * clamped to [-1, 1].
+ */
+public final class ResidualCorrelations {
+    /** A residual variance below this share of the asset's variance counts as zero. */
+    static final double RELATIVE_ZERO_VARIANCE = 1e-12;
+
+    private final List<String> assets;
+    private final int length;
+    private final double[] correlation;
+
+    private ResidualCorrelations(List<String> assets, int length, double[] correlation) {
+        this.assets = assets;
+        this.length = length;
+        this.correlation = correlation;
+    }
+
+    /** The residual correlations of a window, from its shared {@link EstimationWindow#moments()}. */
+    public static ResidualCorrelations of(EstimationWindow window) {
+        return of(window.moments(), window.assets());
+    }
+
+    /**
+     * The residual correlations from sample moments.
+     *
+     * @param moments the window's moments (S, s_im, s_mm, L)
+     * @param assets asset ids in the moments' order
+     */
+    public static ResidualCorrelations of(WindowMoments moments, List<String> assets) {
+        int n = moments.assets();
+        if (assets.size() != n) {
+            throw new IllegalArgumentException("asset ids (" + assets.size() + ") must match the moments' n (" + n + ")");
+        }
+        if (!(n >= 2)) {
+            throw new IllegalArgumentException("residual correlations need >= 2 assets, got " + n);
+        }
+        if (!(moments.length() >= 3)) {
+            throw new IllegalArgumentException("window length (" + moments.length() + ") must be >= 3 for market-model residuals");
+        }
+        double smm = moments.marketVariance();
+        if (!(smm > 0) || Double.isInfinite(smm)) {
+            throw new IllegalArgumentException("market variance (" + smm + ") must be finite and > 0");
+        }
+        double[] sim = moments.marketCovariance();
+        double[] residualSd = new double[n];
+        for (int i = 0; i < n; i++) {
+            double sii = moments.covariance(i, i);
+            double d = sii - sim[i] * sim[i] / smm;
+            if (!(d > RELATIVE_ZERO_VARIANCE * sii) || Double.isInfinite(d)) {
+                throw new IllegalArgumentException("asset '" + assets.get(i) + "' has residual variance " + d
+                        + " of total " + sii + ": it must be finite and > 0 for a residual correlation");
+            }
+            residualSd[i] = Math.sqrt(d);
+        }
+        double[] rho = new double[n * n];
+        for (int i = 0; i < n; i++) {
+            rho[i * n + i] = 1.0;
+            for (int j = i + 1; j < n; j++) {
+                double cov = moments.covariance(i, j) - sim[i] * sim[j] / smm;
+                double r = Math.max(-1.0, Math.min(1.0, cov / (residualSd[i] * residualSd[j])));
+                rho[i * n + j] = r;
+                rho[j * n + i] = r;
+            }
+        }
+        return new ResidualCorrelations(List.copyOf(assets), moments.length(), rho);
+    }
+
+    /** Asset ids, in the order of the indices used here. */
+    public List<String> assets() {
+        return assets;
+    }
+
+    /** n. */
+    public int assetCount() {
+        return assets.size();
+    }
+
+    /** L, the number of rows the residuals span. */
+    public int length() {
+        return length;
+    }
+
+    /** ρ_ij (1 on the diagonal). */
+    public double correlation(int i, int j) {
+        return correlation[i * assets.size() + j];
+    }
+
+    /** The adequacy statistics of METHODS §8 (mean |ρ|, Breusch-Pagan LM, Pesaran CD). */
+    public ResidualDiagnostics diagnostics() {
+        return ResidualDiagnostics.of(this);
+    }
+
+    /**
+     * The k pairs i < j with the largest (signed) residual correlation, largest first; ties keep
+     * the order (i, j) ascending, so the list is deterministic.
+     *
+     * @param k how many, >= 0; fewer are returned when there are fewer pairs
+     */
+    public List<ResidualPair> largestPairs(int k) {
+        if (!(k >= 0)) {
+            throw new IllegalArgumentException("pair count (" + k + ") must be >= 0");
+        }
+        int n = assets.size();
+        List<ResidualPair> pairs = new ArrayList<>(n * (n - 1) / 2);
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                pairs.add(new ResidualPair(assets.get(i), assets.get(j), correlation(i, j)));
+            }
+        }
+        // List.sort is stable: equal correlations keep their (i, j) order.
+        pairs.sort(Comparator.comparingDouble(ResidualPair::correlation).reversed());
+        return List.copyOf(pairs.subList(0, Math.min(k, pairs.size())));
+    }
+
+    /**
+     * Mean residual correlation within each sector and across sectors, to show whose residuals
+     * co-move (a shared sector factor the single index misses).
+     *
+     * @param sectorOf sector of every asset id of this window
+     */
+    public SectorCoMovement bySector(Map<String, String> sectorOf) {
+        Objects.requireNonNull(sectorOf, "sectorOf");
+        return SectorCoMovement.of(this, sectorOf);
+    }
+}

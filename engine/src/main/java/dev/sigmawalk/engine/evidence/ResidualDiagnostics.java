@@ -1,0 +1,71 @@
+package dev.sigmawalk.engine.evidence;
+
+/**
+ * Is the single-index assumption (uncorrelated residuals) holding in one window? METHODS §8.
+ *
+ * <ul>
+ *   <li>mean |ρ_ij| over the n(n-1)/2 pairs i &lt; j;</li>
+ *   <li>Breusch &amp; Pagan (1980, Rev. Econ. Studies 47, 239-253) Lagrange-multiplier test of a
+ *       diagonal residual covariance: LM = L Σ_{i&lt;j} ρ_ij², asymptotically χ² with
+ *       n(n-1)/2 degrees of freedom as L grows with n fixed; p = P(χ² &gt; LM);</li>
+ *   <li>Pesaran (2004, "General diagnostic tests for cross section dependence in panels", CESifo WP 1229) cross-section dependence test:
+ *       CD = √(2L / (n(n-1))) Σ_{i&lt;j} ρ_ij, standard normal under the null; two-sided
+ *       p = P(|Z| &gt; |CD|). Unlike LM it is not over-sized when n is large relative to L,
+ *       but positive and negative correlations can cancel in it.</li>
+ * </ul>
+ *
+ * @param assets n
+ * @param length L
+ * @param meanAbsCorrelation mean |ρ_ij|, in [0, 1]
+ * @param lmStatistic LM >= 0
+ * @param lmDegreesOfFreedom n(n-1)/2
+ * @param lmPValue in [0, 1]
+ * @param cdStatistic CD
+ * @param cdPValue two-sided, in [0, 1]
+ */
+public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelation, double lmStatistic,
+                                  int lmDegreesOfFreedom, double lmPValue, double cdStatistic, double cdPValue) {
+    public ResidualDiagnostics {
+        if (!(assets >= 2)) {
+            throw new IllegalArgumentException("assets (" + assets + ") must be >= 2");
+        }
+        if (lmDegreesOfFreedom != assets * (assets - 1) / 2) {
+            throw new IllegalArgumentException("LM degrees of freedom (" + lmDegreesOfFreedom + ") must be n(n-1)/2 = "
+                    + assets * (assets - 1) / 2);
+        }
+        if (!(meanAbsCorrelation >= 0 && meanAbsCorrelation <= 1)) {
+            throw new IllegalArgumentException("mean |residual correlation| (" + meanAbsCorrelation + ") must be in [0, 1]");
+        }
+        if (!(lmStatistic >= 0) || Double.isInfinite(lmStatistic)) {
+            throw new IllegalArgumentException("LM statistic (" + lmStatistic + ") must be finite and >= 0");
+        }
+        if (Double.isNaN(cdStatistic) || Double.isInfinite(cdStatistic)) {
+            throw new IllegalArgumentException("CD statistic (" + cdStatistic + ") must be finite");
+        }
+        if (!(lmPValue >= 0 && lmPValue <= 1) || !(cdPValue >= 0 && cdPValue <= 1)) {
+            throw new IllegalArgumentException("p-values (LM " + lmPValue + ", CD " + cdPValue + ") must be in [0, 1]");
+        }
+    }
+
+    /** The statistics of a window's residual correlations. */
+    static ResidualDiagnostics of(ResidualCorrelations rho) {
+        int n = rho.assetCount();
+        int length = rho.length();
+        double sum = 0;
+        double sumAbs = 0;
+        double sumSquares = 0;
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                double r = rho.correlation(i, j);
+                sum += r;
+                sumAbs += Math.abs(r);
+                sumSquares += r * r;
+            }
+        }
+        int pairs = n * (n - 1) / 2;
+        double lm = length * sumSquares;
+        double cd = Math.sqrt(2.0 * length / ((double) n * (n - 1))) * sum;
+        return new ResidualDiagnostics(n, length, sumAbs / pairs, lm, pairs,
+                TailProbabilities.chiSquaredUpper(lm, pairs), cd, TailProbabilities.twoSidedNormal(cd));
+    }
+}

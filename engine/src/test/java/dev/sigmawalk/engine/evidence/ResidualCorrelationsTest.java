@@ -1,0 +1,251 @@
+package dev.sigmawalk.engine.evidence;
+
+import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.model.WindowMoments;
+import org.junit.jupiter.api.Test;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+class ResidualCorrelationsTest {
+    /** Relative tolerance for statistics against the reference values. */
+    private static final double STATISTIC_RELATIVE = 1e-10;
+    /** Absolute tolerance for p-values against scipy. */
+    private static final double P_VALUE = 1e-9;
+    /** Hand-computed values are exact decimals; rounding only. */
+    private static final double HAND = 1e-12;
+    /** Correlations against numpy on the same data. */
+    private static final double CORRELATION = 1e-10;
+
+    /**
+     * The shared reference window (60 × 12): mean |ρ| 0.11804932183684894, Breusch-Pagan LM
+     * 84.02820600005185 with 66 df and p 0.06650857500512354, Pesaran CD 0.7331503601798056 with
+     * two-sided p 0.4634667275358153. Source: numpy 1.24.2 {@code corrcoef} of least-squares
+     * residuals; p-values {@code scipy.stats.chi2.sf} and {@code 2 * scipy.stats.norm.sf} (scipy
+     * 1.10.1), reference/values.json.
+     */
+    @Test
+    void referenceWindow_matchesNumpyAndScipy() {
+        ResidualDiagnostics d = ResidualCorrelations.of(ReferenceWindow.load()).diagnostics();
+        assertEquals(12, d.assets());
+        assertEquals(60, d.length());
+        assertRelative(0.11804932183684894, d.meanAbsCorrelation(), "mean |rho|");
+        assertRelative(84.02820600005185, d.lmStatistic(), "LM");
+        assertEquals(66, d.lmDegreesOfFreedom());
+        assertEquals(0.06650857500512354, d.lmPValue(), P_VALUE, "LM p-value");
+        assertRelative(0.7331503601798056, d.cdStatistic(), "CD");
+        assertEquals(0.4634667275358153, d.cdPValue(), P_VALUE, "CD p-value");
+    }
+
+    /**
+     * Hand computation: s_mm = 1, s_im = (1, 1, 1), S = [[2, 1.5, 1], [1.5, 2, 1], [1, 1, 2]],
+     * L = 10. Residual covariance S - s s'/s_mm = [[1, .5, 0], [.5, 1, 0], [0, 0, 1]], so
+     * ρ12 = 0.5, ρ13 = ρ23 = 0; mean |ρ| = 0.5/3; LM = 10 · 0.25 = 2.5 on 3 df;
+     * CD = √(20/6) · 0.5 = 0.9128709291752769. p-values 0.4752910833430205 and
+     * 0.3613104285261787 from scipy.stats.chi2.sf(2.5, 3) and 2·scipy.stats.norm.sf(CD)
+     * (scipy 1.17.1, computed for this test).
+     */
+    @Test
+    void threeAssets_handComputedDiagnostics() {
+        WindowMoments m = new WindowMoments(3, 10, new double[3], 0.0, 1.0, new double[] {1, 1, 1},
+                new double[] {2, 1.5, 1, 1.5, 2, 1, 1, 1, 2});
+        ResidualCorrelations rho = ResidualCorrelations.of(m, List.of("X1", "X2", "X3"));
+        assertEquals(0.5, rho.correlation(0, 1), HAND, "rho12");
+        assertEquals(0.5, rho.correlation(1, 0), HAND, "rho21");
+        assertEquals(0.0, rho.correlation(0, 2), HAND, "rho13");
+        assertEquals(0.0, rho.correlation(1, 2), HAND, "rho23");
+        ResidualDiagnostics d = rho.diagnostics();
+        assertEquals(0.5 / 3, d.meanAbsCorrelation(), HAND);
+        assertEquals(2.5, d.lmStatistic(), HAND);
+        assertEquals(3, d.lmDegreesOfFreedom());
+        assertEquals(Math.sqrt(20.0 / 6.0) * 0.5, d.cdStatistic(), HAND);
+        assertEquals(0.4752910833430205, d.lmPValue(), P_VALUE);
+        assertEquals(0.3613104285261787, d.cdPValue(), P_VALUE);
+    }
+
+    /**
+     * The moment shortcut cov(e_i, e_j) = S_ij - s_im s_jm / s_mm must equal the correlation of
+     * residuals formed explicitly (e = x - α - βm with α, β by least squares), computed here
+     * loop by loop from the raw window.
+     */
+    @Test
+    void momentShortcut_equalsExplicitResiduals() {
+        EstimationWindow w = ReferenceWindow.load();
+        ResidualCorrelations rho = ResidualCorrelations.of(w);
+        double[][] e = explicitResiduals(w);
+        int n = w.assetCount();
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                assertEquals(correlation(e[i], e[j]), rho.correlation(i, j), CORRELATION, "pair " + i + "," + j);
+            }
+        }
+    }
+
+    /**
+     * The four largest residual correlations of the reference window: A09/A12 0.3619898212555115,
+     * A10/A11 0.35808432149094616, A11/A12 0.28857527712287734, A10/A12 0.23170641073565112, from
+     * numpy 2.4.6 {@code corrcoef} of {@code numpy.linalg.lstsq} residuals with an intercept
+     * (computed for this test); the data's README says A09-A12 share a sector shock.
+     */
+    @Test
+    void largestPairs_referenceWindow_areTheSectorShockPairs() {
+        List<ResidualPair> top = ResidualCorrelations.of(ReferenceWindow.load()).largestPairs(4);
+        assertEquals(List.of("A09/A12", "A10/A11", "A11/A12", "A10/A12"),
+                top.stream().map(p -> p.first() + "/" + p.second()).toList());
+        double[] expected = {0.3619898212555115, 0.35808432149094616, 0.28857527712287734, 0.23170641073565112};
+        for (int k = 0; k < expected.length; k++) {
+            assertEquals(expected[k], top.get(k).correlation(), CORRELATION, "pair " + k);
+        }
+    }
+
+    @Test
+    void largestPairs_moreThanExist_returnsAllPairs() {
+        WindowMoments m = new WindowMoments(3, 10, new double[3], 0.0, 1.0, new double[] {1, 1, 1},
+                new double[] {2, 1.5, 1, 1.5, 2, 1, 1, 1, 2});
+        List<ResidualPair> all = ResidualCorrelations.of(m, List.of("X1", "X2", "X3")).largestPairs(10);
+        assertEquals(3, all.size());
+        assertEquals("X1", all.get(0).first());
+        assertEquals("X2", all.get(0).second());
+        // ρ13 = ρ23 = 0: a tie keeps (i, j) order.
+        assertEquals("X1/X3", all.get(1).first() + "/" + all.get(1).second());
+        assertEquals("X2/X3", all.get(2).first() + "/" + all.get(2).second());
+    }
+
+    /**
+     * Sectors of four assets each on the reference window: within A09-A12 the mean residual
+     * correlation is 0.2666215577526063, across sectors -0.019174779017690085 over 48 pairs
+     * (numpy 2.4.6 on lstsq residuals, computed for this test). The pair-weighted mean of all
+     * groups equals the mean over all pairs.
+     */
+    @Test
+    void bySector_referenceWindow_sectorShockStandsOut() {
+        EstimationWindow w = ReferenceWindow.load();
+        ResidualCorrelations rho = ResidualCorrelations.of(w);
+        Map<String, String> sectors = new HashMap<>();
+        for (int i = 0; i < 12; i++) {
+            sectors.put(w.assets().get(i), "S" + (i / 4 + 1));
+        }
+        SectorCoMovement s = rho.bySector(sectors);
+        assertEquals(3, s.withinSectors().size());
+        SectorCorrelation third = s.withinSectors().get(2);
+        assertEquals("S3", third.sector());
+        assertEquals(6, third.pairs());
+        assertEquals(0.2666215577526063, third.meanCorrelation(), CORRELATION);
+        assertEquals(48, s.acrossPairs());
+        assertEquals(-0.019174779017690085, s.acrossMean().orElseThrow(), CORRELATION);
+        double weighted = s.acrossMean().orElseThrow() * s.acrossPairs();
+        for (SectorCorrelation c : s.withinSectors()) {
+            weighted += c.meanCorrelation() * c.pairs();
+        }
+        assertEquals(meanOverPairs(rho), weighted / 66, HAND);
+    }
+
+    /** Hand case: X1, X2 in one sector (ρ = 0.5), X3 alone (no within pairs), across mean 0. */
+    @Test
+    void bySector_singletonSector_hasNoWithinEntry() {
+        WindowMoments m = new WindowMoments(3, 10, new double[3], 0.0, 1.0, new double[] {1, 1, 1},
+                new double[] {2, 1.5, 1, 1.5, 2, 1, 1, 1, 2});
+        SectorCoMovement s = ResidualCorrelations.of(m, List.of("X1", "X2", "X3"))
+                .bySector(Map.of("X1", "P", "X2", "P", "X3", "Q"));
+        assertEquals(List.of(new SectorCorrelation("P", 2, 1, 0.5)), s.withinSectors());
+        assertEquals(2, s.acrossPairs());
+        assertEquals(0.0, s.acrossMean().orElseThrow(), HAND);
+    }
+
+    @Test
+    void bySector_assetWithoutSector_isRejectedByName() {
+        ResidualCorrelations rho = ResidualCorrelations.of(ReferenceWindow.load());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> rho.bySector(Map.of("A01", "S1")));
+        assertTrue(e.getMessage().contains("'A02'"), e.getMessage());
+    }
+
+    /** An asset equal to 2 × market has no residual: ρ is undefined and the window is refused. */
+    @Test
+    void assetThatIsExactlyTheMarket_isRejectedByName() {
+        WindowMoments m = new WindowMoments(2, 10, new double[2], 0.0, 1.0, new double[] {2, 1},
+                new double[] {4, 2, 2, 3});
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> ResidualCorrelations.of(m, List.of("Y1", "Y2")));
+        assertTrue(e.getMessage().contains("'Y1'"), e.getMessage());
+    }
+
+    @Test
+    void zeroMarketVarianceOrOneAsset_isRejected() {
+        WindowMoments flat = new WindowMoments(2, 10, new double[2], 0.0, 0.0, new double[] {0, 0},
+                new double[] {1, 0, 0, 1});
+        assertThrows(IllegalArgumentException.class, () -> ResidualCorrelations.of(flat, List.of("Y1", "Y2")));
+        WindowMoments single = new WindowMoments(1, 10, new double[1], 0.0, 1.0, new double[] {0.5},
+                new double[] {1});
+        assertThrows(IllegalArgumentException.class, () -> ResidualCorrelations.of(single, List.of("Y1")));
+    }
+
+    private static void assertRelative(double expected, double actual, String what) {
+        assertEquals(expected, actual, Math.abs(expected) * STATISTIC_RELATIVE, what);
+    }
+
+    private static double meanOverPairs(ResidualCorrelations rho) {
+        int n = rho.assetCount();
+        double s = 0;
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                s += rho.correlation(i, j);
+            }
+        }
+        return s / (n * (n - 1) / 2.0);
+    }
+
+    /** e_i = x_i - α_i - β_i m with β_i = Σ(x - x̄)(m - m̄) / Σ(m - m̄)², one asset per row. */
+    private static double[][] explicitResiduals(EstimationWindow w) {
+        int n = w.assetCount();
+        int len = w.length();
+        double[] m = w.marketExcess();
+        double[] x = w.excessReturns();
+        double mBar = 0;
+        for (double v : m) {
+            mBar += v / len;
+        }
+        double[][] e = new double[n][len];
+        for (int i = 0; i < n; i++) {
+            double xBar = 0;
+            for (int t = 0; t < len; t++) {
+                xBar += x[t * n + i] / len;
+            }
+            double sxm = 0;
+            double smm = 0;
+            for (int t = 0; t < len; t++) {
+                sxm += (x[t * n + i] - xBar) * (m[t] - mBar);
+                smm += (m[t] - mBar) * (m[t] - mBar);
+            }
+            double beta = sxm / smm;
+            double alpha = xBar - beta * mBar;
+            for (int t = 0; t < len; t++) {
+                e[i][t] = x[t * n + i] - alpha - beta * m[t];
+            }
+        }
+        return e;
+    }
+
+    private static double correlation(double[] a, double[] b) {
+        double ma = 0;
+        double mb = 0;
+        for (int t = 0; t < a.length; t++) {
+            ma += a[t] / a.length;
+            mb += b[t] / b.length;
+        }
+        double sab = 0;
+        double saa = 0;
+        double sbb = 0;
+        for (int t = 0; t < a.length; t++) {
+            sab += (a[t] - ma) * (b[t] - mb);
+            saa += (a[t] - ma) * (a[t] - ma);
+            sbb += (b[t] - mb) * (b[t] - mb);
+        }
+        return sab / Math.sqrt(saa * sbb);
+    }
+}
