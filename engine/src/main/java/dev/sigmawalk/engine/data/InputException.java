@@ -40,6 +40,26 @@ public final class InputException extends RuntimeException {
         this.location = location;
     }
 
+    /**
+     * For a position in a text file given by line and column numbers (a YAML study file), rendered
+     * as {@code demo.yaml line 7, column 3: problem}.
+     *
+     * @param file the file
+     * @param line 1-based line
+     * @param columnNumber 1-based character column
+     * @param problem what is wrong and what was expected
+     */
+    public static InputException at(Path file, int line, int columnNumber, String problem) {
+        Location location = new Location(file, line, null);
+        String where = location.describe() + (columnNumber > 0 ? ", column " + columnNumber : "");
+        return new InputException(location, where + ": " + problem, true);
+    }
+
+    private InputException(Location location, String message, boolean preformatted) {
+        super(message);
+        this.location = location;
+    }
+
     /** For problems with no file position (for example a command-line value). */
     public InputException(String message) {
         super(message);

@@ -1,0 +1,128 @@
+package dev.sigmawalk.engine.data;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.TreeMap;
+
+/**
+ * A user's per-period alphas by asset and date (METHODS §4): the single-index expected return of
+ * asset i at rebalance τ uses the latest alpha dated on or before τ, and 0 where none is given.
+ * Immutable; lookups are a binary search over the asset's dates.
+ */
+public final class AlphaTable {
+    private static final AlphaTable EMPTY = new AlphaTable(Map.of());
+    private static final List<String> HEADER = List.of("date", "asset", "alpha");
+
+    private final Map<String, Series> byAsset;
+
+    private record Series(LocalDate[] dates, double[] alphas) {
+    }
+
+    private AlphaTable(Map<String, Series> byAsset) {
+        this.byAsset = byAsset;
+    }
+
+    /** The table with no alphas: {@link #latest} is 0 everywhere. */
+    public static AlphaTable empty() {
+        return EMPTY;
+    }
+
+    /**
+     * The alpha of {@code asset} dated latest on or before {@code onOrBefore}; 0 when the asset
+     * has none dated that early (or none at all).
+     */
+    public double latest(String asset, LocalDate onOrBefore) {
+        Series s = byAsset.get(asset);
+        if (s == null) {
+            return 0.0;
+        }
+        int i = Arrays.binarySearch(s.dates, onOrBefore);
+        int at = i >= 0 ? i : -i - 2;
+        return at >= 0 ? s.alphas[at] : 0.0;
+    }
+
+    /** The assets that have at least one alpha, sorted. */
+    public List<String> assets() {
+        List<String> out = new ArrayList<>(byAsset.keySet());
+        Collections.sort(out);
+        return out;
+    }
+
+    /** Number of (date, asset) entries. */
+    public int size() {
+        return byAsset.values().stream().mapToInt(s -> s.dates.length).sum();
+    }
+
+    /**
+     * Reads a long CSV with the header {@code date,asset,alpha} (per-period alphas, decimal). Rows
+     * may come in any order; a repeated (date, asset) pair, a non-ISO date, an empty asset or a
+     * missing or non-numeric alpha is an input error naming file, line, column and value.
+     */
+    public static AlphaTable read(Path file) {
+        Map<String, TreeMap<LocalDate, Double>> collected = new HashMap<>();
+        try (CsvSource source = CsvSource.open(file)) {
+            LongCsv.requireHeader(source, HEADER);
+            String[] cells;
+            int rows = 0;
+            while ((cells = source.next()) != null) {
+                int line = source.line();
+                LongCsv.requireWidth(source, cells, HEADER.size(), line);
+                LocalDate date = Cells.date(cells[0], file, line, "date");
+                String asset = LongCsv.requireText(source, cells[1], line, "asset");
+                double alpha = Cells.number(cells[2], file, line, "alpha");
+                if (Double.isNaN(alpha)) {
+                    throw new InputException(new InputException.Location(file, line, "alpha"),
+                            "'' is empty; expected a per-period alpha such as 0.001");
+                }
+                if (collected.computeIfAbsent(asset, a -> new TreeMap<>()).put(date, alpha) != null) {
+                    throw new InputException(new InputException.Location(file, line, "date"),
+                            "'" + cells[0] + "' repeats an alpha for asset '" + asset + "' on that date");
+                }
+                rows++;
+            }
+            if (rows == 0) {
+                throw new InputException(new InputException.Location(file, 1, null),
+                        "the header has no rows below it; expected rows of date,asset,alpha");
+            }
+        }
+        Map<String, Series> byAsset = new HashMap<>();
+        collected.forEach((asset, series) -> {
+            LocalDate[] dates = series.keySet().toArray(new LocalDate[0]);
+            double[] alphas = series.values().stream().mapToDouble(Double::doubleValue).toArray();
+            byAsset.put(asset, new Series(dates, alphas));
+        });
+        return new AlphaTable(Collections.unmodifiableMap(byAsset));
+    }
+
+    @Override
+    public String toString() {
+        return "AlphaTable[" + byAsset.size() + " assets, " + size() + " alphas]";
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        if (!(o instanceof AlphaTable other) || !other.byAsset.keySet().equals(byAsset.keySet())) {
+            return false;
+        }
+        for (Map.Entry<String, Series> e : byAsset.entrySet()) {
+            Series mine = e.getValue();
+            Series theirs = other.byAsset.get(e.getKey());
+            if (!Arrays.equals(mine.dates, theirs.dates) || !Arrays.equals(mine.alphas, theirs.alphas)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    @Override
+    public int hashCode() {
+        return Objects.hash(byAsset.keySet(), size());
+    }
+}

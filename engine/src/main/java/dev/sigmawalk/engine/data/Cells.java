@@ -1,0 +1,106 @@
+package dev.sigmawalk.engine.data;
+
+import java.nio.file.Path;
+import java.time.DateTimeException;
+import java.time.LocalDate;
+
+/**
+ * Parses single CSV cells, throwing an {@link InputException} that names file, line, column and
+ * value. The happy path throws and catches nothing: a number is first screened character by
+ * character, then handed to {@link Double#parseDouble}.
+ */
+final class Cells {
+    private Cells() {
+    }
+
+    /**
+     * An ISO-8601 calendar date {@code YYYY-MM-DD}, nothing else (no times, no other orders,
+     * which would make {@code 01/02/2020} ambiguous).
+     */
+    static LocalDate date(String cell, Path file, int line, String column) {
+        if (cell.length() == 10 && cell.charAt(4) == '-' && cell.charAt(7) == '-' && digitsAt(cell)) {
+            try {
+                return LocalDate.of(Integer.parseInt(cell, 0, 4, 10), Integer.parseInt(cell, 5, 7, 10),
+                        Integer.parseInt(cell, 8, 10, 10));
+            } catch (DateTimeException e) {
+                throw new InputException(new InputException.Location(file, line, column),
+                        "'" + cell + "' is not a calendar date (" + e.getMessage() + ")");
+            }
+        }
+        throw new InputException(new InputException.Location(file, line, column),
+                "'" + cell + "' is not an ISO-8601 date; expected YYYY-MM-DD, for example 2020-01-31");
+    }
+
+    private static boolean digitsAt(String s) {
+        for (int i = 0; i < 10; i++) {
+            if (i != 4 && i != 7 && (s.charAt(i) < '0' || s.charAt(i) > '9')) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /**
+     * A finite decimal number; an empty cell is missing and gives {@code NaN}. Words such as
+     * {@code NaN}, {@code Infinity} or {@code n/a} are rejected, as is an overflow to infinity.
+     */
+    static double number(String cell, Path file, int line, String column) {
+        if (cell.isEmpty()) {
+            return Double.NaN;
+        }
+        if (looksNumeric(cell)) {
+            double v = Double.parseDouble(cell);
+            if (Double.isFinite(v)) {
+                return v;
+            }
+            throw new InputException(new InputException.Location(file, line, column),
+                    "'" + cell + "' is not a finite number");
+        }
+        throw new InputException(new InputException.Location(file, line, column),
+                "'" + cell + "' is not a number; expected a decimal such as 0.0123 or an empty cell");
+    }
+
+    /** Sign, digits with at most one point, optional exponent: exactly what parseDouble accepts of these. */
+    private static boolean looksNumeric(String s) {
+        int i = 0;
+        int n = s.length();
+        if (s.charAt(0) == '+' || s.charAt(0) == '-') {
+            i++;
+        }
+        int digits = 0;
+        boolean point = false;
+        for (; i < n; i++) {
+            char c = s.charAt(i);
+            if (c >= '0' && c <= '9') {
+                digits++;
+            } else if (c == '.' && !point) {
+                point = true;
+            } else {
+                break;
+            }
+        }
+        if (digits == 0) {
+            return false;
+        }
+        if (i == n) {
+            return true;
+        }
+        char e = s.charAt(i);
+        if (e != 'e' && e != 'E') {
+            return false;
+        }
+        i++;
+        if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
+            i++;
+        }
+        int expDigits = 0;
+        for (; i < n; i++) {
+            char c = s.charAt(i);
+            if (c < '0' || c > '9') {
+                return false;
+            }
+            expDigits++;
+        }
+        return expDigits > 0;
+    }
+}

@@ -1,0 +1,135 @@
+package dev.sigmawalk.engine.data;
+
+import dev.sigmawalk.engine.study.ValueKind;
+import java.util.List;
+
+/**
+ * The checks run once the panel exists: completeness of the market and risk-free series over the
+ * rows a study needs (an error), and the warnings of METHODS §1 and the study contract.
+ */
+final class IntakeChecks {
+    /** A period return above +500 % is implausible for any listed asset. */
+    static final double IMPLAUSIBLE_RETURN = 5.0;
+    /** A risk-free rate above 100 % a year is implausible. */
+    static final double IMPLAUSIBLE_ANNUAL_RATE = 1.0;
+    /** METHODS §1: the market "equals" the assets' mean when every row agrees within this. */
+    static final double MEAN_MARKET_TOLERANCE = 1e-10;
+
+    private final ReturnPanel panel;
+    private final ValueKind kind;
+    private final int offset;
+    private final List<String> warnings;
+
+    /**
+     * @param panel the panel, already cut at the end date
+     * @param kind what the assets and market files hold
+     * @param offset file rows before panel row 0 (1 with prices)
+     * @param warnings where warnings are appended
+     */
+    IntakeChecks(ReturnPanel panel, ValueKind kind, int offset, List<String> warnings) {
+        this.panel = panel;
+        this.kind = kind;
+        this.offset = offset;
+        this.warnings = warnings;
+    }
+
+    /**
+     * METHODS §1: the series must have a value in every panel row from {@code firstNeeded}
+     * (τ_0 − L_max + 1) to the last row.
+     *
+     * @param column where the series came from
+     * @param seriesKind prices for a market read as prices; returns otherwise
+     * @param perRow the series per panel row (may be longer than the cut panel)
+     * @throws InputException at the empty cell that causes the first gap
+     */
+    void requireComplete(SeriesColumn column, ValueKind seriesKind, double[] perRow, int firstNeeded, int firstRebalance) {
+        for (int t = firstNeeded; t < panel.rows(); t++) {
+            if (Double.isNaN(perRow[t])) {
+                int fileRow = t + offset;
+                boolean earlierPrice = seriesKind == ValueKind.PRICES && !Double.isNaN(column.values()[fileRow]);
+                int cellRow = earlierPrice ? fileRow - 1 : fileRow;
+                throw new InputException(new InputException.Location(column.file(), column.lines()[cellRow], column.column()),
+                        "'' is missing" + (earlierPrice ? ", so the return to " + panel.date(t) + " cannot be computed" : "")
+                                + "; the " + column.role() + " needs a value on every date from " + panel.date(firstNeeded)
+                                + " (the start of the longest window before the first rebalance on "
+                                + panel.date(firstRebalance) + ") to " + panel.date(panel.rows() - 1));
+            }
+        }
+    }
+
+    /** Warns once per column about period returns above +500 %, naming the first one. */
+    void warnImplausibleReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        for (int k = 0; k < kept.size(); k++) {
+            int count = 0;
+            int first = -1;
+            for (int t = 0; t < panel.rows(); t++) {
+                if (panel.value(t, k) > IMPLAUSIBLE_RETURN) {
+                    count++;
+                    first = first < 0 ? t : first;
+                }
+            }
+            if (count > 0) {
+                String name = table.columns().get(assetCols.get(kept.get(k)));
+                warnings.add(table.file().getFileName() + " line " + table.lines()[first + offset] + ", column '" + name
+                        + "': a return of " + panel.value(first, k) + " is above +500 % in one period"
+                        + (count > 1 ? " (" + count + " such rows in this column)" : "")
+                        + (kind == ValueKind.PRICES ? "; check the prices" : "; check that returns are decimals, not percent"));
+            }
+        }
+    }
+
+    /** Warns about per-period risk-free rates worth more than 100 % a year, (1 + rf)^p − 1 > 1. */
+    void warnImplausibleRiskFree(SeriesColumn column) {
+        int p = panel.periodsPerYear();
+        int count = 0;
+        int first = -1;
+        for (int t = 0; t < panel.rows(); t++) {
+            double annual = Math.pow(1.0 + panel.riskFree(t), p) - 1.0;
+            if (annual > IMPLAUSIBLE_ANNUAL_RATE) {
+                count++;
+                first = first < 0 ? t : first;
+            }
+        }
+        if (count > 0) {
+            warnings.add(column.file().getFileName() + " line " + column.lines()[first + offset] + ", column '"
+                    + column.column() + "': a risk-free rate of " + panel.riskFree(first) + " per period is above 100 % a year"
+                    + (count > 1 ? " (" + count + " such rows)" : "") + "; rates must be per period and decimal");
+        }
+    }
+
+    /**
+     * METHODS §1: warns when, in every row where the market and at least one asset have a
+     * return, the market equals the mean of the assets' returns within 1e-10; the single-index
+     * residuals then sum to zero across assets and the §8 tests are distorted.
+     */
+    void warnMarketIsAssetMean() {
+        int compared = 0;
+        for (int t = 0; t < panel.rows(); t++) {
+            double m = panel.market(t);
+            if (Double.isNaN(m)) {
+                continue;
+            }
+            double sum = 0;
+            int n = 0;
+            for (int j = 0; j < panel.assetCount(); j++) {
+                double r = panel.value(t, j);
+                if (!Double.isNaN(r)) {
+                    sum += r;
+                    n++;
+                }
+            }
+            if (n == 0) {
+                continue;
+            }
+            if (!(Math.abs(sum / n - m) <= MEAN_MARKET_TOLERANCE)) {
+                return;
+            }
+            compared++;
+        }
+        if (compared > 0) {
+            warnings.add("the market '" + panel.marketName() + "' equals the mean of the assets' returns in every row;"
+                    + " use an index measured on its own, or the residual tests are distorted (mean residual"
+                    + " correlation near -1/(n-1))");
+        }
+    }
+}

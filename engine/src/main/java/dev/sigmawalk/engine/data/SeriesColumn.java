@@ -1,0 +1,59 @@
+package dev.sigmawalk.engine.data;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.List;
+
+/**
+ * The market or risk-free series aligned to the assets file's rows, remembering where every value
+ * came from so that a gap can be reported at its own file, line and column.
+ *
+ * @param role "market" or "risk-free", for messages
+ * @param file the file the values were read from
+ * @param column the column's header name in that file
+ * @param values one value per row of the assets file (NaN = empty cell)
+ * @param lines the line in {@code file} of each value
+ */
+record SeriesColumn(String role, Path file, String column, double[] values, int[] lines) {
+
+    /** A column of the assets file itself. */
+    static SeriesColumn fromColumn(String role, WideTable assets, int col) {
+        return new SeriesColumn(role, assets.file(), assets.columns().get(col), assets.column(col),
+                assets.lines().clone());
+    }
+
+    /**
+     * A one-column file {@code date,<name>} joined on the assets' dates: every asset date must
+     * have a row there (further rows are ignored and counted in {@code ignored}).
+     *
+     * @throws InputException at the first asset date the series has no row for
+     */
+    static SeriesColumn join(String role, WideTable series, WideTable assets, List<String> warnings) {
+        if (series.columnCount() != 1) {
+            throw new InputException(new InputException.Location(series.file(), 1, null),
+                    "the " + role + " file has " + series.columnCount() + " value columns; expected one, as in 'date,<name>'");
+        }
+        LocalDate[] want = assets.dates();
+        LocalDate[] have = series.dates();
+        double[] values = new double[want.length];
+        int[] lines = new int[want.length];
+        int k = 0;
+        for (int t = 0; t < want.length; t++) {
+            while (k < have.length && have[k].isBefore(want[t])) {
+                k++;
+            }
+            if (k == have.length || !have[k].equals(want[t])) {
+                throw new InputException(new InputException.Location(assets.file(), assets.lines()[t], "date"),
+                        "'" + want[t] + "' has no row in " + series.file().getFileName() + "; the " + role
+                                + " must have a row for every date of the assets file");
+            }
+            values[t] = series.value(k, 0);
+            lines[t] = series.lines()[k];
+        }
+        int ignored = have.length - want.length;
+        if (ignored > 0) {
+            warnings.add(series.file().getFileName() + ": " + ignored + " dates that the assets file lacks were ignored");
+        }
+        return new SeriesColumn(role, series.file(), series.columns().get(0), values, lines);
+    }
+}

@@ -1,0 +1,245 @@
+package dev.sigmawalk.engine.data;
+
+import dev.sigmawalk.engine.study.Bounds;
+import dev.sigmawalk.engine.study.DataSpec;
+import dev.sigmawalk.engine.study.SeriesSource;
+import dev.sigmawalk.engine.study.StrategySpec;
+import dev.sigmawalk.engine.study.Study;
+import dev.sigmawalk.engine.study.ValueKind;
+import dev.sigmawalk.engine.timeline.Schedule;
+import dev.sigmawalk.engine.timeline.Timeline;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/** The steps of {@link StudyData#load}: read, align, convert, cut, plan, check. One use per study. */
+final class StudyDataLoader {
+    private static final String MARKET = "market";
+    private static final String RISK_FREE = "risk-free";
+
+    private final Study study;
+    private final DataSpec spec;
+    private final List<String> warnings = new ArrayList<>();
+    private final List<FileFingerprint> fingerprints = new ArrayList<>();
+
+    StudyDataLoader(Study study) {
+        this.study = study;
+        this.spec = study.data();
+    }
+
+    StudyData load() {
+        // A risk-free column beside prices holds rates, which may be zero or negative.
+        String rates = spec.riskFree() instanceof SeriesSource.Column c ? c.name() : null;
+        WideTable table = readWide(spec.assets(), spec.values(), rates);
+        SeriesColumn market = series(MARKET, spec.market(), table, spec.values());
+        Optional<SeriesColumn> riskFreeColumn = spec.riskFree() instanceof SeriesSource.AnnualRate
+                ? Optional.empty()
+                : Optional.of(series(RISK_FREE, spec.riskFree(), table, ValueKind.RETURNS));
+        boolean inferred = spec.periodsPerYear().isEmpty();
+        int periods = inferred ? inferPeriods(table) : spec.periodsPerYear().getAsInt();
+
+        int offset = ValueConversion.offset(spec.values());
+        int panelRows = table.rows() - offset;
+        if (panelRows < 1) {
+            throw new InputException(new InputException.Location(table.file(), table.lines()[0], null),
+                    "one row of prices gives no return; expected at least two dated rows");
+        }
+        List<Integer> assetCols = assetColumns(table, market, riskFreeColumn);
+        double[] returns = assetReturns(table, assetCols, panelRows);
+        List<Integer> kept = dropEmpty(table, assetCols, returns, panelRows);
+        if (kept.isEmpty()) {
+            throw new InputException(new InputException.Location(table.file(), 1, null),
+                    "no asset column has a return; expected at least one asset with data");
+        }
+        double[] panelReturns = keepColumns(returns, assetCols.size(), kept, panelRows);
+        List<String> assets = new ArrayList<>();
+        for (int k : kept) {
+            assets.add(table.columns().get(assetCols.get(k)));
+        }
+        double[] marketReturns = ValueConversion.convert(spec.values(), market.values());
+        double[] riskFree = riskFreeColumn
+                .map(rf -> Arrays.copyOfRange(rf.values(), offset, rf.values().length))
+                .orElseGet(() -> annualToPeriod(((SeriesSource.AnnualRate) spec.riskFree()).rate(), periods, panelRows));
+        LocalDate[] dates = Arrays.copyOfRange(table.dates(), offset, table.rows());
+        ReturnPanel panel = cutAtEnd(new ReturnPanel(dates, assets, panelReturns, marketReturns, riskFree,
+                market.column(), periods));
+        Schedule schedule = plan(panel);
+
+        IntakeChecks checks = new IntakeChecks(panel, spec.values(), offset, warnings);
+        int firstNeeded = Math.max(0, schedule.firstRebalance() - study.walkForward().longestWindow() + 1);
+        checks.requireComplete(market, spec.values(), marketReturns, firstNeeded, schedule.firstRebalance());
+        riskFreeColumn.ifPresent(rf -> checks.requireComplete(rf, ValueKind.RETURNS, riskFree, firstNeeded,
+                schedule.firstRebalance()));
+        checks.warnImplausibleReturns(table, assetCols, kept);
+        riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
+        checks.warnMarketIsAssetMean();
+        requireFeasibleBounds(panel.assetCount());
+
+        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(), fingerprints, warnings,
+                AssetCoverage.of(panel));
+    }
+
+    private WideTable readWide(Path file, ValueKind kind, String ratesColumn) {
+        WideTable t = WideCsvReader.read(file, kind, ratesColumn);
+        fingerprints.add(FileFingerprint.of(file));
+        return t;
+    }
+
+    private SeriesColumn series(String role, SeriesSource source, WideTable assets, ValueKind kind) {
+        if (source instanceof SeriesSource.Column c) {
+            int col = assets.columnIndex(c.name());
+            if (col < 0) {
+                throw new InputException(new InputException.Location(assets.file(), 1, null),
+                        "no column named '" + c.name() + "' for the " + role + "; the header's columns are "
+                                + String.join(", ", assets.columns()));
+            }
+            return SeriesColumn.fromColumn(role, assets, col);
+        }
+        Path file = ((SeriesSource.File) source).path();
+        return SeriesColumn.join(role, readWide(file, kind, null), assets, warnings);
+    }
+
+    private int inferPeriods(WideTable table) {
+        if (table.rows() < 2) {
+            throw new InputException(new InputException.Location(table.file(), table.lines()[0], "date"),
+                    "one date cannot show how far apart the periods are; set data.periods_per_year");
+        }
+        return PeriodsPerYear.infer(table.dates());
+    }
+
+    /** The columns that are assets: all but the market's and risk-free's own columns. */
+    private static List<Integer> assetColumns(WideTable table, SeriesColumn market, Optional<SeriesColumn> riskFree) {
+        List<Integer> cols = new ArrayList<>();
+        for (int j = 0; j < table.columnCount(); j++) {
+            String name = table.columns().get(j);
+            boolean isMarket = market.file().equals(table.file()) && market.column().equals(name);
+            boolean isRiskFree = riskFree.isPresent() && riskFree.get().file().equals(table.file())
+                    && riskFree.get().column().equals(name);
+            if (!isMarket && !isRiskFree) {
+                cols.add(j);
+            }
+        }
+        return cols;
+    }
+
+    private double[] assetReturns(WideTable table, List<Integer> assetCols, int panelRows) {
+        double[] out = new double[panelRows * assetCols.size()];
+        for (int k = 0; k < assetCols.size(); k++) {
+            ValueConversion.convert(spec.values(), table.values(), table.columnCount(), assetCols.get(k), out,
+                    assetCols.size(), k);
+        }
+        return out;
+    }
+
+    /** Indexes (into assetCols) of assets with at least one return; warns about the rest. */
+    private List<Integer> dropEmpty(WideTable table, List<Integer> assetCols, double[] returns, int panelRows) {
+        List<Integer> kept = new ArrayList<>();
+        int cols = assetCols.size();
+        for (int k = 0; k < cols; k++) {
+            boolean any = false;
+            for (int t = 0; t < panelRows && !any; t++) {
+                any = !Double.isNaN(returns[t * cols + k]);
+            }
+            if (any) {
+                kept.add(k);
+            } else {
+                String name = table.columns().get(assetCols.get(k));
+                warnings.add(table.file().getFileName() + " column '" + name + "' has no "
+                        + (spec.values() == ValueKind.PRICES ? "two consecutive prices, so no return" : "value")
+                        + "; the asset is left out");
+            }
+        }
+        return kept;
+    }
+
+    private static double[] keepColumns(double[] returns, int cols, List<Integer> kept, int rows) {
+        if (kept.size() == cols) {
+            return returns;
+        }
+        double[] out = new double[rows * kept.size()];
+        for (int t = 0; t < rows; t++) {
+            for (int k = 0; k < kept.size(); k++) {
+                out[t * kept.size() + k] = returns[t * cols + kept.get(k)];
+            }
+        }
+        return out;
+    }
+
+    /** METHODS §1: an annual rate R is (1 + R)^(1/p) − 1 per period. */
+    static double[] annualToPeriod(double annual, int periods, int rows) {
+        double perPeriod = Math.pow(1.0 + annual, 1.0 / periods) - 1.0;
+        double[] out = new double[rows];
+        Arrays.fill(out, perPeriod);
+        return out;
+    }
+
+    private ReturnPanel cutAtEnd(ReturnPanel panel) {
+        if (study.walkForward().end().isEmpty()) {
+            return panel;
+        }
+        LocalDate end = study.walkForward().end().get();
+        int last = panel.firstRowOnOrAfter(end.plusDays(1)) - 1;
+        if (last < 0) {
+            throw new InputException(new InputException.Location(study.file(), 0, null),
+                    "walkforward.end (" + end + ") is before the first return date " + panel.date(0));
+        }
+        return last == panel.rows() - 1 ? panel : panel.truncateAfter(last);
+    }
+
+    private Schedule plan(ReturnPanel panel) {
+        try {
+            return Timeline.plan(panel, study.walkForward());
+        } catch (InputException e) {
+            if (e.location() != null) {
+                throw e;
+            }
+            throw new InputException(new InputException.Location(study.file(), 0, null), e.getMessage());
+        }
+    }
+
+    /** METHODS §5: bounds that cannot sum to 1 over the universe are an input error. */
+    private void requireFeasibleBounds(int n) {
+        List<StrategySpec> strategies = study.strategies();
+        for (int i = 0; i < strategies.size(); i++) {
+            Optional<Bounds> bounds = strategies.get(i).bounds();
+            if (bounds.isPresent() && !bounds.get().feasibleFor(n)) {
+                Bounds b = bounds.get();
+                throw new InputException(new InputException.Location(study.file(), 0, null),
+                        "strategies[" + i + "].bounds [" + b.lower() + ", " + b.upper() + "] cannot make "
+                                + n + " weights sum to 1; expected " + n + "·lower <= 1 <= " + n + "·upper");
+            }
+        }
+    }
+
+    private Map<String, String> sectors(ReturnPanel panel) {
+        if (spec.sectors().isEmpty()) {
+            return Map.of();
+        }
+        Path file = spec.sectors().get();
+        Map<String, String> all = SectorMap.read(file);
+        fingerprints.add(FileFingerprint.of(file));
+        Map<String, String> sectors = SectorMap.restrictTo(all, panel.assets());
+        int without = panel.assetCount() - sectors.size();
+        if (without > 0) {
+            warnings.add(file.getFileName() + " gives no sector for " + without + " of " + panel.assetCount() + " assets");
+        }
+        return sectors;
+    }
+
+    private Map<Path, AlphaTable> alphas() {
+        Map<Path, AlphaTable> out = new LinkedHashMap<>();
+        for (StrategySpec s : study.strategies()) {
+            if (s.alphas().isPresent() && !out.containsKey(s.alphas().get())) {
+                Path file = s.alphas().get();
+                out.put(file, AlphaTable.read(file));
+                fingerprints.add(FileFingerprint.of(file));
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,125 @@
+package dev.sigmawalk.engine.study;
+
+import dev.sigmawalk.engine.data.InputException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * Reads a study file (CONTRACT "Study file") into a {@link Study}. Unknown keys are errors that
+ * suggest the nearest valid key; bad values name their key path and what was expected; relative
+ * paths resolve against the study file's folder. Defaults come from {@link StudyDefaults} only.
+ * Checks that need the data (bounds against the number of assets, windows against the number of
+ * rows) happen when the data are loaded.
+ */
+public final class StudyReader {
+    private static final Set<String> ROOT = Set.of("title", "data", "walkforward", "strategies", "evidence", "output");
+    private static final Set<String> DATA = Set.of("assets", "values", "market", "riskfree", "periods_per_year", "sectors");
+    private static final Set<String> WALK = Set.of("windows", "rebalance_every", "rebalance", "start", "end", "cost_bps");
+    private static final Set<String> EVIDENCE = Set.of("resamples", "seed", "block_length");
+
+    private StudyReader() {
+    }
+
+    /**
+     * @param studyFile the YAML study file
+     * @throws InputException naming the file, line, column, key path and value of the first problem
+     */
+    public static Study read(Path studyFile) {
+        Path file = studyFile.toAbsolutePath().normalize();
+        Section root = Section.of(file, "", YamlTree.parse(file), ROOT);
+        String title = root.has("title") ? root.text("title") : defaultTitle(file);
+        DataSpec data = data(Section.of(file, "data", root.node("data"), DATA));
+        WalkForwardSpec walk = walkForward(Section.of(file, "walkforward", root.node("walkforward"), WALK));
+        List<StrategySpec> strategies = StrategyReader.readAll(root);
+        EvidenceSpec evidence = root.has("evidence")
+                ? evidence(Section.of(file, "evidence", root.node("evidence"), EVIDENCE))
+                : EvidenceSpec.defaults();
+        Path output = root.resolve(root.has("output") ? root.text("output") : StudyDefaults.OUTPUT);
+        return new Study(file, title, data, walk, strategies, evidence, output);
+    }
+
+    private static String defaultTitle(Path file) {
+        String name = file.getFileName().toString();
+        int dot = name.lastIndexOf('.');
+        return dot > 0 ? name.substring(0, dot) : name;
+    }
+
+    private static DataSpec data(Section s) {
+        Path assets = s.path("assets");
+        ValueKind values = s.choice("values", ValueKind.class);
+        SeriesSource market = series(s, "market", false);
+        SeriesSource riskFree = series(s, "riskfree", true);
+        return new DataSpec(assets, values, market, riskFree, s.optionalInteger("periods_per_year", 1),
+                s.has("sectors") ? Optional.of(s.path("sectors")) : Optional.empty());
+    }
+
+    /** A file (text ending in .csv or holding a '/'), a column of the assets file, or (risk-free) an annual number. */
+    private static SeriesSource series(Section s, String key, boolean numberAllowed) {
+        YamlNode n = s.node(key);
+        if (n instanceof YamlNode.Scalar sc
+                && (sc.kind() == YamlNode.Scalar.Kind.INTEGER || sc.kind() == YamlNode.Scalar.Kind.DECIMAL)) {
+            if (!numberAllowed) {
+                throw s.bad(key, "is a number; expected a CSV file 'date,<name>' or a column of the assets file");
+            }
+            double rate = s.number(key);
+            if (!(rate > -1 && rate < 1)) {
+                throw s.bad(key, "is not a plausible annual rate; expected a decimal in (-1, 1), such as 0.02 for 2 %");
+            }
+            return new SeriesSource.AnnualRate(rate);
+        }
+        String text = s.text(key);
+        if (text.toLowerCase(Locale.ROOT).endsWith(".csv") || text.contains("/")) {
+            return new SeriesSource.File(s.resolve(text));
+        }
+        return new SeriesSource.Column(text);
+    }
+
+    private static WalkForwardSpec walkForward(Section s) {
+        List<Integer> windows = new ArrayList<>();
+        List<YamlNode> items = s.list("windows");
+        if (items.isEmpty()) {
+            throw s.bad("windows", "is empty; expected at least one window length, such as [36, 60]");
+        }
+        for (int i = 0; i < items.size(); i++) {
+            int w = s.integer(items.get(i), s.pathOf("windows") + "[" + i + "]", 2);
+            if (windows.contains(w)) {
+                throw s.badAt(items.get(i), s.pathOf("windows") + "[" + i + "]", "is listed twice; expected distinct windows");
+            }
+            windows.add(w);
+        }
+        RebalanceRule rule = rebalance(s);
+        var start = s.optionalDate("start");
+        var end = s.optionalDate("end");
+        if (start.isPresent() && end.isPresent() && !start.get().isBefore(end.get())) {
+            throw s.bad("end", "is not after walkforward.start (" + start.get() + "); expected a later date");
+        }
+        double cost = s.has("cost_bps") ? s.number("cost_bps") : StudyDefaults.COST_BPS;
+        if (!(cost >= 0)) {
+            throw s.bad("cost_bps", "is negative; expected a cost >= 0 in basis points");
+        }
+        return new WalkForwardSpec(windows, rule, start, end, cost);
+    }
+
+    private static RebalanceRule rebalance(Section s) {
+        if (s.has("rebalance_every") && s.has("rebalance")) {
+            throw s.bad("rebalance", "is given together with walkforward.rebalance_every; expected one of the two");
+        }
+        if (s.has("rebalance")) {
+            return new RebalanceRule.CalendarEnd(s.choice("rebalance", Calendar.class));
+        }
+        int every = s.has("rebalance_every") ? s.integer("rebalance_every", 1) : StudyDefaults.REBALANCE_EVERY;
+        return new RebalanceRule.EveryRows(every);
+    }
+
+    private static EvidenceSpec evidence(Section s) {
+        EvidenceSpec d = EvidenceSpec.defaults();
+        int resamples = s.has("resamples") ? s.integer("resamples", 100) : d.resamples();
+        long seed = s.has("seed") ? s.wholeNumber("seed") : d.seed();
+        int block = s.has("block_length") ? s.integer("block_length", 1) : d.blockLength();
+        return new EvidenceSpec(resamples, seed, block);
+    }
+}

@@ -1,0 +1,115 @@
+package dev.sigmawalk.engine.study;
+
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import dev.sigmawalk.engine.data.InputException;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads a YAML file into {@link YamlNode}s through Jackson's streaming parser, which reports the
+ * position of every token (a data-binding tree would lose it). A key given twice in one mapping
+ * is an error, since YAML leaves its meaning to the reader.
+ */
+final class YamlTree {
+    private final Path file;
+    private final JsonParser parser;
+
+    private YamlTree(Path file, JsonParser parser) {
+        this.file = file;
+        this.parser = parser;
+    }
+
+    /**
+     * @return the document's root node
+     * @throws InputException when the file is missing, empty or not valid YAML
+     */
+    static YamlNode parse(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new InputException(new InputException.Location(file, 0, null),
+                    "study file not found (looked for " + file.toAbsolutePath() + ")");
+        }
+        try (JsonParser parser = new YAMLFactory().createParser(file.toFile())) {
+            JsonToken first = parser.nextToken();
+            if (first == null) {
+                throw new InputException(new InputException.Location(file, 0, null),
+                        "the study file is empty; expected keys such as title, data, walkforward, strategies");
+            }
+            return new YamlTree(file, parser).node(first);
+        } catch (JsonProcessingException e) {
+            JsonLocation at = e.getLocation();
+            throw InputException.at(file, at == null ? 0 : at.getLineNr(), at == null ? 0 : at.getColumnNr(),
+                    "not valid YAML (" + e.getOriginalMessage() + ")");
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + file, e);
+        }
+    }
+
+    private YamlNode node(JsonToken token) throws IOException {
+        JsonLocation at = parser.currentTokenLocation();
+        int line = at.getLineNr();
+        int column = at.getColumnNr();
+        switch (token) {
+            case START_OBJECT:
+                return mapping(line, column);
+            case START_ARRAY:
+                return sequence(line, column);
+            case VALUE_STRING:
+                return new YamlNode.Scalar(parser.getText(), YamlNode.Scalar.Kind.STRING, line, column);
+            case VALUE_NUMBER_INT:
+                return new YamlNode.Scalar(parser.getText(), YamlNode.Scalar.Kind.INTEGER, line, column);
+            case VALUE_NUMBER_FLOAT:
+                return new YamlNode.Scalar(parser.getText(), YamlNode.Scalar.Kind.DECIMAL, line, column);
+            case VALUE_TRUE:
+            case VALUE_FALSE:
+                return new YamlNode.Scalar(parser.getText(), YamlNode.Scalar.Kind.BOOLEAN, line, column);
+            case VALUE_NULL:
+                return new YamlNode.Scalar(null, YamlNode.Scalar.Kind.NULL, line, column);
+            default:
+                throw InputException.at(file, line, column, "unexpected YAML content (" + token + ")");
+        }
+    }
+
+    private YamlNode mapping(int line, int column) throws IOException {
+        Map<String, YamlNode.Entry> entries = new LinkedHashMap<>();
+        JsonToken token;
+        while ((token = parser.nextToken()) == JsonToken.FIELD_NAME) {
+            JsonLocation at = parser.currentTokenLocation();
+            String key = parser.currentName();
+            YamlNode value = node(parser.nextToken());
+            YamlNode.Entry earlier = entries.put(key, new YamlNode.Entry(key, at.getLineNr(), at.getColumnNr(), value));
+            if (earlier != null) {
+                throw InputException.at(file, at.getLineNr(), at.getColumnNr(),
+                        "key '" + key + "' is given twice (first on line " + earlier.line() + "); give it once");
+            }
+        }
+        requireEnd(token, JsonToken.END_OBJECT);
+        return new YamlNode.Mapping(entries, line, column);
+    }
+
+    private YamlNode sequence(int line, int column) throws IOException {
+        List<YamlNode> items = new ArrayList<>();
+        JsonToken token;
+        while ((token = parser.nextToken()) != JsonToken.END_ARRAY && token != null) {
+            items.add(node(token));
+        }
+        requireEnd(token, JsonToken.END_ARRAY);
+        return new YamlNode.Sequence(items, line, column);
+    }
+
+    private void requireEnd(JsonToken token, JsonToken expected) {
+        if (token != expected) {
+            JsonLocation at = parser.currentLocation();
+            throw InputException.at(file, at.getLineNr(), at.getColumnNr(), "the YAML document ends unexpectedly");
+        }
+    }
+}
