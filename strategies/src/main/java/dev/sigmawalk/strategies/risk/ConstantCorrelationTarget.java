@@ -41,7 +41,7 @@ final class ConstantCorrelationTarget {
         double[] f = new double[n * n];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
-                f[i * n + j] = i == j ? s[i * n + i] : rBar * sd[i] * sd[j];
+                f[i * n + j] = i == j ? s[i * n + i] : rBar * (sd[i] * sd[j]);
             }
         }
         return new ConstantCorrelationTarget(rBar, f);

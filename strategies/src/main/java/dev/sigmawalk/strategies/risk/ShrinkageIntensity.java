@@ -9,10 +9,17 @@ package dev.sigmawalk.strategies.risk;
  * <p>Common notation: x̃_ti and ỹ_t the demeaned asset and market excess returns; s_ij, s_i0,
  * s_00 the divisor-L moments; f_ij the target; π̂ from {@link ProductVariances};
  * γ̂ = Σ_ij (f_ij - s_ij)². For the first two targets κ̂ = (π̂ - ρ̂)/γ̂ and
- * δ = max(0, min(1, κ̂/L)). When γ̂ = 0 the target equals the sample matrix and every δ gives the
- * same Σ; δ = 0 is then reported.
+ * δ = max(0, min(1, κ̂/L)). When the target equals the sample matrix (γ̂ = 0, or γ̂ below
+ * {@link #SAME_AS_SAMPLE} times Σ_ij s_ij², a difference made by rounding alone) every δ gives the
+ * same Σ; δ = 0 is then reported rather than a value decided by rounding noise. That happens for
+ * example with the constant-correlation target and two assets, where r̄ is the one correlation.
  */
 final class ShrinkageIntensity {
+    /**
+     * γ̂ / ‖S‖² at or below which the target counts as equal to S: a relative Frobenius distance
+     * of 1e-12, a few hundred units of rounding in the entries of S.
+     */
+    static final double SAME_AS_SAMPLE = 1e-24;
 
     private ShrinkageIntensity() {
     }
@@ -66,7 +73,7 @@ final class ShrinkageIntensity {
             }
         }
         double rhoOff = 2.0 / s00 * cross / len - market / (s00 * s00 * len) - targetTimesSample;
-        return fromKappa(pi.total(), pi.diagonal() + rhoOff, gamma(w, target), len);
+        return fromKappa(w, pi.total(), pi.diagonal() + rhoOff, gamma(w, target));
     }
 
     /**
@@ -114,7 +121,7 @@ final class ShrinkageIntensity {
             }
         }
         double rhoOff = meanCorrelation * (fourth / len - scaled);
-        return fromKappa(pi.total(), pi.diagonal() + rhoOff, gamma(w, target), len);
+        return fromKappa(w, pi.total(), pi.diagonal() + rhoOff, gamma(w, target));
     }
 
     /**
@@ -128,7 +135,7 @@ final class ShrinkageIntensity {
     static double identity(CentredWindow w, double[] target, ProductVariances pi) {
         int n = w.assets();
         double gamma = gamma(w, target);
-        if (!(gamma > 0)) {
+        if (sameAsSample(w, gamma)) {
             return 0.0;
         }
         double dSquared = gamma / n;
@@ -145,15 +152,29 @@ final class ShrinkageIntensity {
             double diff = c * (target[k] - s[k]);
             sum += diff * diff;
         }
+        if (!Double.isFinite(sum)) {
+            throw new ArithmeticException("distance between shrinkage target and sample matrix (" + sum
+                    + ") must be finite");
+        }
         return sum;
     }
 
-    /** δ = max(0, min(1, κ̂/L)), κ̂ = (π̂ - ρ̂)/γ̂; 0 when γ̂ = 0. */
-    private static double fromKappa(double pi, double rho, double gamma, int len) {
-        if (!(gamma > 0)) {
+    /** True when γ̂ ≤ {@link #SAME_AS_SAMPLE} Σ_ij s_ij² (divisor-L moments throughout). */
+    private static boolean sameAsSample(CentredWindow w, double gamma) {
+        double c = w.toPopulationDivisor();
+        double norm = 0;
+        for (double v : w.moments().covariance()) {
+            norm += c * v * c * v;
+        }
+        return !(gamma > SAME_AS_SAMPLE * norm);
+    }
+
+    /** δ = max(0, min(1, κ̂/L)), κ̂ = (π̂ - ρ̂)/γ̂; 0 when the target equals S. */
+    private static double fromKappa(CentredWindow w, double pi, double rho, double gamma) {
+        if (sameAsSample(w, gamma)) {
             return 0.0;
         }
-        double delta = (pi - rho) / gamma / len;
+        double delta = (pi - rho) / gamma / w.length();
         if (Double.isNaN(delta)) {
             throw new ArithmeticException("shrinkage intensity is undefined (pi " + pi + ", rho " + rho
                     + ", gamma " + gamma + ")");

@@ -76,7 +76,8 @@ public final class SingleIndexCovariance implements CovarianceEstimate, SingleFa
     public double get(int i, int j) {
         Objects.checkIndex(i, beta.length);
         Objects.checkIndex(j, beta.length);
-        double common = marketVariance * beta[i] * beta[j];
+        // β_i β_j first, so that Σ_ij and Σ_ji round identically.
+        double common = marketVariance * (beta[i] * beta[j]);
         return i == j ? common + residualVariance[i] : common;
     }
 
@@ -87,10 +88,9 @@ public final class SingleIndexCovariance implements CovarianceEstimate, SingleFa
             int n = beta.length;
             double[] m = new double[n * n];
             for (int i = 0; i < n; i++) {
-                double bi = marketVariance * beta[i];
                 int row = i * n;
                 for (int j = 0; j < n; j++) {
-                    m[row + j] = bi * beta[j];
+                    m[row + j] = marketVariance * (beta[i] * beta[j]);
                 }
                 m[row + i] += residualVariance[i];
             }
