@@ -1,8 +1,8 @@
 package dev.sigmawalk.strategies.risk;
 
 /**
- * The constant-correlation shrinkage target of Ledoit & Wolf (2004, J. Portfolio Management,
- * appendix): r̄ = 2/(n(n-1)) Σ_{i<j} r_ij with r_ij = S_ij / √(S_ii S_jj), then
+ * The constant-correlation shrinkage target of Ledoit &amp; Wolf (2004, J. Portfolio Management,
+ * appendix): r̄ = 2/(n(n-1)) Σ_{i&lt;j} r_ij with r_ij = S_ij / √(S_ii S_jj), then
  * F_ij = r̄ √(S_ii S_jj) for i ≠ j and F_ii = S_ii. F carries the divisor of S (here L-1).
  *
  * <p>With one asset there is no pair: r̄ is reported as 0 and F = S.

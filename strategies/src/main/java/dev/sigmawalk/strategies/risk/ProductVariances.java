@@ -2,7 +2,7 @@ package dev.sigmawalk.strategies.risk;
 
 /**
  * π̂, the sum over all pairs of the estimated asymptotic variances of √L s_ij, and its diagonal
- * part, as defined in Ledoit & Wolf (2003, J. Empirical Finance, appendix) and Ledoit & Wolf
+ * part, as defined in Ledoit &amp; Wolf (2003, J. Empirical Finance, appendix) and Ledoit &amp; Wolf
  * (2004, J. Portfolio Management, appendix):
  * π̂_ij = 1/L Σ_t (x̃_ti x̃_tj - s_ij)², with s_ij = 1/L Σ_t x̃_ti x̃_tj.
  *

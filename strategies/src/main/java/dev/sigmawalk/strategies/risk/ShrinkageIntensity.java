@@ -25,7 +25,7 @@ final class ShrinkageIntensity {
     }
 
     /**
-     * Ledoit & Wolf (2003, J. Empirical Finance), target F = Σ_SI. From the paper's appendix:
+     * Ledoit &amp; Wolf (2003, J. Empirical Finance), target F = Σ_SI. From the paper's appendix:
      * ρ̂_ii = π̂_ii and, for i ≠ j, ρ̂_ij = 1/L Σ_t r_tij with
      * r_tij = (s_j0 s_00 x̃_ti + s_i0 s_00 x̃_tj - s_i0 s_j0 ỹ_t) ỹ_t x̃_ti x̃_tj / s_00² - f_ij s_ij.
      *
@@ -77,7 +77,7 @@ final class ShrinkageIntensity {
     }
 
     /**
-     * Ledoit & Wolf (2004, J. Portfolio Management, appendix on the optimal intensity),
+     * Ledoit &amp; Wolf (2004, J. Portfolio Management, appendix on the optimal intensity),
      * constant-correlation target:
      * ρ̂ = Σ_i π̂_ii + Σ_{i≠j} (r̄/2)(√(s_jj/s_ii) ϑ̂_ii,ij + √(s_ii/s_jj) ϑ̂_jj,ij) with
      * ϑ̂_ii,ij = 1/L Σ_t (x̃_ti² - s_ii)(x̃_ti x̃_tj - s_ij) = 1/L Σ_t x̃_ti³ x̃_tj - s_ii s_ij.
@@ -125,7 +125,7 @@ final class ShrinkageIntensity {
     }
 
     /**
-     * Ledoit & Wolf (2004, J. Multivariate Analysis, section 3, the consistent estimators of m, d²,
+     * Ledoit &amp; Wolf (2004, J. Multivariate Analysis, section 3, the consistent estimators of m, d²,
      * b̄² and b²), target F = m I with m = tr(S)/n. In the paper's norm ‖A‖² = tr(AA')/n: d² = ‖S - mI‖² = γ̂/n,
      * b̄² = 1/L² Σ_t ‖x̃_t x̃_t' - S‖² = π̂/(nL), b² = min(b̄², d²) and δ = b²/d², the weight of mI
      * in the paper's estimator (b²/d²) mI + (a²/d²) S; it lies in [0, 1] by construction.

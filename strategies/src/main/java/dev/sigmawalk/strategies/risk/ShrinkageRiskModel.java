@@ -13,10 +13,10 @@ import java.util.OptionalDouble;
  * structured target built from S and δ ∈ [0, 1] the estimated optimal intensity of the paper
  * that introduced the target (see {@link ShrinkageIntensity}):
  * <ul>
- *   <li>single-index: F = Σ_SI with F_ii = S_ii (Ledoit & Wolf 2003, J. Empirical Finance);</li>
- *   <li>constant-correlation: F_ij = r̄ √(S_ii S_jj), F_ii = S_ii (Ledoit & Wolf 2004,
+ *   <li>single-index: F = Σ_SI with F_ii = S_ii (Ledoit &amp; Wolf 2003, J. Empirical Finance);</li>
+ *   <li>constant-correlation: F_ij = r̄ √(S_ii S_jj), F_ii = S_ii (Ledoit &amp; Wolf 2004,
  *       J. Portfolio Management);</li>
- *   <li>identity: F = (tr S / n) I (Ledoit & Wolf 2004, J. Multivariate Analysis).</li>
+ *   <li>identity: F = (tr S / n) I (Ledoit &amp; Wolf 2004, J. Multivariate Analysis).</li>
  * </ul>
  * The estimate reports δ through {@link CovarianceEstimate#shrinkage()}. Cost O(L n + n²) on top
  * of the window's moments.

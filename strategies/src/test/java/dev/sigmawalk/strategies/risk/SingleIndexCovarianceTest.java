@@ -3,6 +3,9 @@ package dev.sigmawalk.strategies.risk;
 import dev.sigmawalk.engine.model.WindowMoments;
 import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import org.junit.jupiter.api.Test;
+import org.ojalgo.matrix.decomposition.LU;
+import org.ojalgo.matrix.store.MatrixStore;
+import org.ojalgo.matrix.store.R064Store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertSame;
@@ -16,6 +19,8 @@ class SingleIndexCovarianceTest {
     private static final double TEXTBOOK_TOL = 1e-15;
     /** Double rounding in an O(n) sum. */
     private static final double ROUNDING_TOL = 1e-13;
+    /** Two O(n³) and O(n) solves of a well-conditioned 12×12 system. */
+    private static final double SOLVE_TOL = 1e-10;
 
     /**
      * α, β and residual variance of every asset in window.csv against single_index.csv (numpy
@@ -124,6 +129,33 @@ class SingleIndexCovarianceTest {
 
         Close.absolute(new double[] {0.5, 0.0}, si.solve(new double[] {1, 1}), ROUNDING_TOL, "inverse times ones");
         assertEquals(2 * 0.09 + 2 * 2 * 0.12 + 5 * 0.16, si.portfolioVariance(new double[] {0.3, 0.4}), ROUNDING_TOL);
+    }
+
+    /**
+     * The O(n) Woodbury solve on the reference window against a dense LU solve of the same
+     * Σ_SI (ojAlgo 57.1.0 {@code LU.R064}), for b = 1 (the minimum-variance direction) and a
+     * mixed-sign b.
+     */
+    @Test
+    void referenceWindow_solveMatchesDenseLuSolve() {
+        SingleIndexCovariance si = new SingleIndexRiskModel().estimate(ReferenceData.window());
+        int n = si.size();
+        LU<Double> lu = LU.R064.make();
+        assertTrue(lu.decompose(R064Store.wrap(si.dense().clone(), n)), "LU of Sigma_SI");
+        double[][] rightHandSides = {new double[n], new double[n]};
+        for (int i = 0; i < n; i++) {
+            rightHandSides[0][i] = 1.0;
+            rightHandSides[1][i] = (i % 3) - 1.0 + 0.1 * i;
+        }
+        for (double[] b : rightHandSides) {
+            MatrixStore<Double> dense = lu.getSolution(R064Store.wrap(b.clone(), n));
+            double[] expected = new double[n];
+            for (int i = 0; i < n; i++) {
+                expected[i] = dense.doubleValue(i, 0);
+            }
+
+            Close.relative(expected, si.solve(b), SOLVE_TOL, "Sigma^-1 b");
+        }
     }
 
     @Test
