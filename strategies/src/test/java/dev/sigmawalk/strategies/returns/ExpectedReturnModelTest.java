@@ -2,6 +2,7 @@ package dev.sigmawalk.strategies.returns;
 
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.study.ExpectedReturnKind;
+import dev.sigmawalk.strategies.risk.ReferenceData;
 import org.junit.jupiter.api.Test;
 
 import java.time.LocalDate;
@@ -31,6 +32,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class ExpectedReturnModelTest {
     /** Double rounding in a handful of operations on two-digit inputs. */
     private static final double HAND_TOL = 1e-15;
+    /** Per-period returns near 1e-2; numpy's intercepts agree to about 1e-16 in absolute terms. */
+    private static final double REFERENCE_TOL = 1e-13;
     private static final LocalDate REBALANCE = LocalDate.of(2032, 3, 31);
 
     private static EstimationWindow window() {
@@ -81,6 +84,30 @@ class ExpectedReturnModelTest {
 
         assertArrayEquals(new double[] {0.0135, -0.005}, mu, HAND_TOL);
         assertEquals(List.of("Z01@2032-03-31", "Z02@2032-03-31"), asked);
+    }
+
+    /**
+     * On the reference window, without user alphas or premium, μ_i = β_i m̄ = x̄_i - α_i where α_i
+     * is the regression intercept from single_index.csv (numpy 1.24.2, cross-checked there with
+     * {@code numpy.linalg.lstsq}); x̄_i is the plain column mean of window.csv.
+     */
+    @Test
+    void singleIndex_onReferenceWindow_equalsMeanMinusRegressionIntercept() {
+        EstimationWindow w = ReferenceData.window();
+        double[] intercept = ReferenceData.singleIndexColumn("alpha");
+        int n = w.assetCount();
+        double[] expected = new double[n];
+        for (int i = 0; i < n; i++) {
+            double sum = 0;
+            for (int t = 0; t < w.length(); t++) {
+                sum += w.excessReturns()[t * n + i];
+            }
+            expected[i] = sum / w.length() - intercept[i];
+        }
+
+        double[] mu = new SingleIndexReturns(AlphaLookup.none(), OptionalDouble.empty()).expected(w);
+
+        assertArrayEquals(expected, mu, REFERENCE_TOL);
     }
 
     @Test

@@ -18,15 +18,15 @@ import java.util.regex.Pattern;
  * project with numpy 1.24.2 and scikit-learn 1.2.1 on an invented 60-period window of 12
  * fictional assets (A01..A12) with a market column; each test names the producing call.
  */
-final class ReferenceData {
-    static final int LENGTH = 60;
-    static final int ASSETS = 12;
+public final class ReferenceData {
+    public static final int LENGTH = 60;
+    public static final int ASSETS = 12;
 
     private ReferenceData() {
     }
 
     /** window.csv as an estimation window: column {@code market} = m_t, A01..A12 = x_t. */
-    static EstimationWindow window() {
+    public static EstimationWindow window() {
         List<String[]> rows = rows("window.csv");
         String[] header = rows.get(0);
         List<String> assets = Arrays.asList(header).subList(2, header.length);
@@ -47,7 +47,7 @@ final class ReferenceData {
     }
 
     /** A headed n×n CSV matrix, row-major. */
-    static double[] matrix(String file) {
+    public static double[] matrix(String file) {
         List<String[]> rows = rows(file);
         int n = rows.get(0).length;
         double[] m = new double[n * n];
@@ -61,7 +61,7 @@ final class ReferenceData {
     }
 
     /** One column of single_index.csv ({@code alpha}, {@code beta} or {@code residual_variance}). */
-    static double[] singleIndexColumn(String name) {
+    public static double[] singleIndexColumn(String name) {
         List<String[]> rows = rows("single_index.csv");
         int col = Arrays.asList(rows.get(0)).indexOf(name);
         if (col < 0) {
@@ -75,7 +75,7 @@ final class ReferenceData {
     }
 
     /** A numeric key at the top level of values.json. */
-    static double value(String key) {
+    public static double value(String key) {
         Matcher m = Pattern.compile("\"" + Pattern.quote(key) + "\"\\s*:\\s*([-+0-9.eE]+)").matcher(text("values.json"));
         if (!m.find()) {
             throw new IllegalArgumentException("values.json has no numeric key " + key);
