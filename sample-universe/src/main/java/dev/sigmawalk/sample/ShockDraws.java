@@ -3,9 +3,10 @@ package dev.sigmawalk.sample;
 /**
  * Standardised shocks with heavier tails than the normal: a two-scale normal mixture. With
  * probability p a draw comes from N(0, w²), otherwise from N(0, 1); the result is divided by
- * √(1 - p + p w²) so its variance is 1, and its kurtosis is 3 (1 - p + p w⁴) / (1 - p + p w²)²
- * (7.65 for p = 0.05, w = 3). Draws are clipped to ±cap so that no simulated return can reach
- * -100 %; at cap = 8 the clipping moves about one draw in three million.
+ * √(1 - p + p w²) so its variance is 1, and before clipping its kurtosis is
+ * 3 (1 - p + p w⁴) / (1 - p + p w²)² (7.65 for p = 0.05, w = 3). Draws are clipped to ±cap so
+ * that no simulated return can reach -100 %; at cap = 8 (3.2 standard deviations of the wide
+ * component) the clipping touches about one draw in 12,000 and lowers the kurtosis by about 2 %.
  *
  * @param wideProbability p in [0, 1]
  * @param wideScale w ≥ 1
