@@ -24,7 +24,7 @@ public final class InputException extends RuntimeException {
 
         /** Renders as {@code assets.csv line 214, column 'H07'}. */
         public String describe() {
-            StringBuilder sb = new StringBuilder(String.valueOf(file.getFileName() == null ? file : file));
+            StringBuilder sb = new StringBuilder(String.valueOf(file.getFileName() == null ? file : file.getFileName()));
             if (line > 0) {
                 sb.append(" line ").append(line);
             }

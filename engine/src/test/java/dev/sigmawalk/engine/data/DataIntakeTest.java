@@ -1,0 +1,190 @@
+package dev.sigmawalk.engine.data;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Data that load: spreadsheet exports, prices, rate conversion, warnings, cuts, side files. */
+class DataIntakeTest {
+    /** Decimal text to double and one division: exact up to the last bit of a double. */
+    private static final double ONE_ULP_SCALE = 1e-15;
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void spreadsheetExport_withBomCrlfQuotesAndSpaces_readsTheSameValues() {
+        String export = "\uFEFF\"date\",\"A01\", \"A02\" ,A03\r\n"
+                + "2020-01-31,\"0.01\", 0.02 ,-0.01\r\n"
+                + "\r\n"
+                + "\"2020-02-29\",0.02,-0.01,0.00\r\n"
+                + StudyFixture.ASSETS.substring(StudyFixture.ASSETS.indexOf("2020-03-31")).replace("\n", "\r\n");
+        StudyData plain = new StudyFixture(dir).load();
+        StudyData exported = new StudyFixture(dir).write("assets.csv", export).load();
+        assertEquals(plain.panel().assets(), exported.panel().assets());
+        for (int t = 0; t < plain.panel().rows(); t++) {
+            for (int j = 0; j < 3; j++) {
+                assertEquals(plain.panel().value(t, j), exported.panel().value(t, j), 0.0, "row " + t + " asset " + j);
+            }
+        }
+        assertEquals(0.02, exported.panel().value(0, 1), 0.0);
+    }
+
+    /** Line numbers count the blank line a spreadsheet may leave: the bad cell sits on line 5. */
+    @Test
+    void blankLine_stillCountsForLineNumbers() {
+        String text = "date,A01\r\n2020-01-31,0.01\r\n\r\n2020-02-29,0.02\r\n2020-03-31,x\r\n";
+        InputException e = org.junit.jupiter.api.Assertions.assertThrows(InputException.class,
+                () -> new StudyFixture(dir).write("assets.csv", text).load());
+        assertEquals(5, e.location().line(), e.getMessage());
+    }
+
+    /**
+     * Hand computation: prices 100, 110, 121 give 110/100 − 1 = 0.1 and 121/110 − 1 = 0.1; a
+     * missing price on 2020-04-30 leaves that row and the next without a return; 99/121 − 1 after.
+     * The panel starts at the second date.
+     */
+    @Test
+    void prices_becomeReturnsFromConsecutiveRows() {
+        String prices = "date,P1,P2\n2020-01-31,100,50\n2020-02-29,110,50\n2020-03-31,121,55\n"
+                + "2020-04-30,,60\n2020-05-31,130,66\n2020-06-30,143,66\n2020-07-31,130,60\n2020-08-31,117,54\n";
+        String market = "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,102\n2020-04-30,103\n"
+                + "2020-05-31,104\n2020-06-30,105\n2020-07-31,106\n2020-08-31,107\n";
+        StudyData d = new StudyFixture(dir).write("assets.csv", prices).write("market.csv", market)
+                .edit("study.yaml", "values: returns", "values: prices").load();
+        ReturnPanel p = d.panel();
+        assertEquals(7, p.rows());
+        assertEquals(LocalDate.of(2020, 2, 29), p.date(0));
+        assertEquals(0.1, p.value(0, 0), ONE_ULP_SCALE);
+        assertEquals(0.1, p.value(1, 0), ONE_ULP_SCALE);
+        assertTrue(Double.isNaN(p.value(2, 0)), "no price on 2020-04-30");
+        assertTrue(Double.isNaN(p.value(3, 0)), "no return after a missing price");
+        assertEquals(0.1, p.value(4, 0), ONE_ULP_SCALE);
+        assertEquals(0.0, p.value(0, 1), 0.0);
+        assertEquals(0.01, p.market(0), ONE_ULP_SCALE);
+        assertEquals(0.001, p.riskFree(0), 0.0);
+    }
+
+    /** (1 + 0.05)^(1/12) − 1 = 0.0040741237836483535, computed with Python 3: 1.05**(1/12)-1. */
+    @Test
+    void annualRiskFree_isCompoundedToAPeriodRate() {
+        ReturnPanel p = new StudyFixture(dir).edit("study.yaml", "riskfree: riskfree.csv", "riskfree: 0.05").load().panel();
+        assertEquals(12, p.periodsPerYear());
+        for (int t = 0; t < p.rows(); t++) {
+            assertEquals(0.0040741237836483535, p.riskFree(t), 1e-18, "row " + t);
+        }
+    }
+
+    @Test
+    void riskFreeColumnOfTheAssetsFile_isNotAnAsset() {
+        String assets = StudyFixture.ASSETS.replace("date,A01,A02,A03", "date,A01,A02,A03,T-bill")
+                .replaceAll("(?m)^(2020-\\d\\d-\\d\\d,[^\\n]*)$", "$1,0.002");
+        ReturnPanel p = new StudyFixture(dir).write("assets.csv", assets)
+                .edit("study.yaml", "riskfree: riskfree.csv", "riskfree: T-bill").load().panel();
+        assertEquals(List.of("A01", "A02", "A03"), p.assets());
+        assertEquals(0.002, p.riskFree(7), 0.0);
+    }
+
+    @Test
+    void marketEqualToTheAssetMean_warns() {
+        String market = "date,EW\n2020-01-31,0.006666666666666667\n2020-02-29,0.0033333333333333335\n"
+                + "2020-03-31,0\n2020-04-30,0.016666666666666666\n2020-05-31,0.006666666666666667\n"
+                + "2020-06-30,0\n2020-07-31,0.016666666666666666\n2020-08-31,0.006666666666666667\n";
+        List<String> warnings = new StudyFixture(dir).write("market.csv", market).load().warnings();
+        assertTrue(warnings.stream().anyMatch(w -> w.contains("equals the mean of the assets' returns in every row")),
+                warnings.toString());
+        assertFalse(new StudyFixture(dir).load().warnings().stream().anyMatch(w -> w.contains("mean of the assets")),
+                "an independent market does not warn");
+    }
+
+    @Test
+    void emptyAssetColumn_isDroppedWithAWarning() {
+        String assets = StudyFixture.ASSETS.replace("date,A01,A02,A03", "date,A01,A02,A03,GHOST")
+                .replaceAll("(?m)^(2020-\\d\\d-\\d\\d,[^\\n]*)$", "$1,");
+        StudyData d = new StudyFixture(dir).write("assets.csv", assets).load();
+        assertEquals(List.of("A01", "A02", "A03"), d.panel().assets());
+        assertEquals(List.of("assets.csv column 'GHOST' has no value; the asset is left out"), d.warnings());
+    }
+
+    @Test
+    void implausibleReturn_warnsWithLineAndColumn() {
+        List<String> w = new StudyFixture(dir).edit("assets.csv", "2020-04-30,0.04", "2020-04-30,6.5").load().warnings();
+        assertEquals(1, w.size(), w.toString());
+        assertTrue(w.get(0).startsWith("assets.csv line 5, column 'A01': a return of 6.5 is above +500 %"), w.get(0));
+    }
+
+    /** 0.07 a month compounds to 1.07^12 − 1 ≈ 1.252 (125 % a year, hand computation), above 100 %. */
+    @Test
+    void implausibleRiskFree_warns() {
+        List<String> w = new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,0.07").load().warnings();
+        assertEquals(1, w.size(), w.toString());
+        assertTrue(w.get(0).startsWith("riskfree.csv line 4, column 'rf': a risk-free rate of 0.07 per period"), w.get(0));
+    }
+
+    @Test
+    void endDate_cutsTheRowsAfterIt() {
+        StudyData d = new StudyFixture(dir).edit("study.yaml", "rebalance_every: 1", "rebalance_every: 1\n  end: 2020-06-15").load();
+        assertEquals(5, d.panel().rows());
+        assertEquals(LocalDate.of(2020, 5, 31), d.panel().date(4));
+        assertEquals(4, d.schedule().lastRow());
+    }
+
+    @Test
+    void coverage_reportsFirstLastAndMissingRows() {
+        StudyData d = new StudyFixture(dir).edit("assets.csv", "2020-01-31,0.01", "2020-01-31,")
+                .edit("assets.csv", "2020-04-30,0.04", "2020-04-30,").load();
+        AssetCoverage a01 = d.coverage().get(0);
+        assertEquals(new AssetCoverage("A01", LocalDate.of(2020, 2, 29), LocalDate.of(2020, 8, 31), 6, 2, 1), a01);
+        assertFalse(d.coverage().get(1).hasMissingRows());
+    }
+
+    @Test
+    void sectorsAndAlphas_areReadForTheLoadedAssets() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("sectors.csv", "asset,sector\nA01,Harbour\nA02,Harbour\nZ99,Orchard\n")
+                .write("alphas.csv", "date,asset,alpha\n2020-03-31,A01,0.002\n2020-01-31,A01,0.001\n2020-02-29,A02,-0.0005\n")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: riskfree.csv\n  sectors: sectors.csv")
+                .edit("study.yaml", "    risk: sample\n    objective: min-variance",
+                        "    risk: single-index\n    objective: max-sharpe\n    alphas: alphas.csv");
+        StudyData d = f.load();
+        assertEquals(Map.of("A01", "Harbour", "A02", "Harbour"), d.sectors());
+        assertTrue(d.warnings().contains("sectors.csv gives no sector for 1 of 3 assets"), d.warnings().toString());
+        AlphaTable alphas = d.alphasFor(f.study().strategies().get(0));
+        assertEquals(0.0, alphas.latest("A01", LocalDate.of(2019, 12, 31)), 0.0, "before the first alpha");
+        assertEquals(0.001, alphas.latest("A01", LocalDate.of(2020, 1, 31)), 0.0, "on its date");
+        assertEquals(0.001, alphas.latest("A01", LocalDate.of(2020, 3, 30)), 0.0, "latest before");
+        assertEquals(0.002, alphas.latest("A01", LocalDate.of(2020, 12, 31)), 0.0, "latest of all");
+        assertEquals(-0.0005, alphas.latest("A02", LocalDate.of(2020, 5, 31)), 0.0);
+        assertEquals(0.0, alphas.latest("A03", LocalDate.of(2020, 5, 31)), 0.0, "asset without alphas");
+        assertEquals(5, d.fingerprints().size(), "assets, market, risk-free, sectors, alphas: " + d.fingerprints());
+    }
+
+    @Test
+    void repeatedAlpha_isAnError() {
+        StudyFixture f = new StudyFixture(dir).write("alphas.csv", "date,asset,alpha\n2020-01-31,A01,0.001\n2020-01-31,A01,0.002\n");
+        InputException e = org.junit.jupiter.api.Assertions.assertThrows(InputException.class,
+                () -> AlphaTable.read(f.dir().resolve("alphas.csv")));
+        assertEquals("alphas.csv line 3, column 'date': '2020-01-31' repeats an alpha for asset 'A01' on that date", e.getMessage());
+    }
+
+    /**
+     * The 22-byte file "date,A\n2020-01-31,0.5\n" has SHA-256
+     * dcb3f09cee94e6b1144390ad0fdc8f73995d323ff8b5955df9e5be57ec529f51, computed with GNU
+     * coreutils {@code sha256sum}.
+     */
+    @Test
+    void fingerprint_matchesSha256sum() throws Exception {
+        Path file = dir.resolve("h.csv");
+        java.nio.file.Files.writeString(file, "date,A\n2020-01-31,0.5\n");
+        FileFingerprint f = FileFingerprint.of(file);
+        assertEquals("dcb3f09cee94e6b1144390ad0fdc8f73995d323ff8b5955df9e5be57ec529f51", f.sha256());
+        assertEquals(22, f.bytes());
+    }
+}
