@@ -1,0 +1,80 @@
+package dev.sigmawalk.engine.evidence;
+
+/**
+ * Were the risk forecasts honest? The bias statistic as used by Menchero, Wang &amp; Orr (2011):
+ * with z_t = (R_t - rf_t) / σ̂_t the realised excess return standardised by the per-period
+ * forecast volatility,
+ * <pre>
+ *   b = sd(z) = √( Σ (z_t - z̄)² / (N - 1) ),
+ * </pre>
+ * near 1 for honest forecasts, above 1 when risk was understated. For N honest forecasts with
+ * normal returns b lies within about 1 ± √(2/N) with 95 % confidence (their eq. 5). Also the share
+ * of periods with |z_t| &gt; 2 (about 4.6 % for normal z).
+ *
+ * @param periods N >= 2
+ * @param value b >= 0
+ * @param bandLow 1 - √(2/N)
+ * @param bandHigh 1 + √(2/N)
+ * @param shareBeyondTwo share of periods with |z| &gt; 2, in [0, 1]
+ */
+public record BiasStatistic(int periods, double value, double bandLow, double bandHigh, double shareBeyondTwo) {
+    public BiasStatistic {
+        if (!(periods >= 2)) {
+            throw new IllegalArgumentException("bias statistic periods (" + periods + ") must be >= 2");
+        }
+        if (!(value >= 0) || Double.isInfinite(value)) {
+            throw new IllegalArgumentException("bias statistic (" + value + ") must be finite and >= 0");
+        }
+        if (!(bandLow < bandHigh) || !(shareBeyondTwo >= 0 && shareBeyondTwo <= 1)) {
+            throw new IllegalArgumentException("band [" + bandLow + ", " + bandHigh + "] must be ordered and share |z|>2 ("
+                    + shareBeyondTwo + ") in [0, 1]");
+        }
+    }
+
+    /**
+     * @param returns gross portfolio returns R_t of the held rows
+     * @param riskFree rf_t, aligned
+     * @param forecastVolatility σ̂_t, the per-period forecast volatility in force for row t, > 0
+     */
+    public static BiasStatistic of(double[] returns, double[] riskFree, double[] forecastVolatility) {
+        double[] z = standardised(returns, riskFree, forecastVolatility);
+        int n = z.length;
+        double mean = 0;
+        for (double v : z) {
+            mean += v;
+        }
+        mean /= n;
+        double squares = 0;
+        int beyond = 0;
+        for (double v : z) {
+            squares += (v - mean) * (v - mean);
+            if (Math.abs(v) > 2.0) {
+                beyond++;
+            }
+        }
+        double halfWidth = Math.sqrt(2.0 / n);
+        return new BiasStatistic(n, Math.sqrt(squares / (n - 1)), 1 - halfWidth, 1 + halfWidth, (double) beyond / n);
+    }
+
+    /** True when the statistic lies inside the rough 95 % band. */
+    public boolean withinBand() {
+        return value >= bandLow && value <= bandHigh;
+    }
+
+    /** z_t = (R_t - rf_t) / σ̂_t after checking the three series. */
+    static double[] standardised(double[] returns, double[] riskFree, double[] forecastVolatility) {
+        SeriesChecks.requireFinite("returns", returns, 2);
+        SeriesChecks.requireFinite("risk-free rates", riskFree, 2);
+        SeriesChecks.requireFinite("forecast volatilities", forecastVolatility, 2);
+        SeriesChecks.requireSameLength("returns", returns, "risk-free rates", riskFree);
+        SeriesChecks.requireSameLength("returns", returns, "forecast volatilities", forecastVolatility);
+        double[] z = new double[returns.length];
+        for (int t = 0; t < z.length; t++) {
+            if (!(forecastVolatility[t] > 0)) {
+                throw new IllegalArgumentException("forecast volatility " + t + " (" + forecastVolatility[t] + ") must be > 0");
+            }
+            z[t] = (returns[t] - riskFree[t]) / forecastVolatility[t];
+        }
+        return z;
+    }
+}
