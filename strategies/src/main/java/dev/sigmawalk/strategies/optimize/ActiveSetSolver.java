@@ -1,0 +1,339 @@
+package dev.sigmawalk.strategies.optimize;
+
+import java.util.Objects;
+
+/**
+ * Exact primal active-set solver for {@link QuadraticProblem}: minimise ½ w'Qw − c'w subject to
+ * Σ w = 1 and lower ≤ w ≤ upper, with Q positive semi-definite (Nocedal & Wright, Numerical
+ * Optimization, 2nd ed., Algorithm 16.3).
+ *
+ * <p>Each iteration holds a working set of weights pinned at a bound; the others are free. With
+ * the Cholesky factor of the free block (shifted, see {@link WorkingSet}) the step to the
+ * minimiser of the equality-constrained subproblem is p = Q̃_FF⁻¹(ν1 − g_F), with ν from the
+ * Schur complement, ν = 1'Q̃_FF⁻¹g_F / 1'Q̃_FF⁻¹1, so that 1'p = 0. A step that would cross a
+ * bound stops there and pins that weight (ratio test); at a subproblem minimiser the pinned
+ * weight with the most negative multiplier (g_i − ν at a lower bound, ν − g_i at an upper one)
+ * is released. The factor is updated in O(k²) per change and rebuilt every
+ * {@link SolverSettings#refactorEvery()} changes; the gradient is updated in O(n) per moved
+ * weight. Cost per iteration is O(n k) for k free weights, never O(n³).
+ *
+ * <p>Semi-definite Q: when releasing a weight would make the shifted free block singular, the
+ * objective is linear (not curved) along the null direction d that keeps the budget, and it
+ * decreases along d at the rate of the negative multiplier, so the solver moves along d until a
+ * bound stops it (Nocedal & Wright §16.5, the inertia-controlling treatment). With no bound in
+ * the way the problem is unbounded below and the outcome is {@link SolveOutcome.Failed}.
+ *
+ * <p>The final partition is polished (the free weights re-solved from a fresh factor) and the
+ * KKT conditions are verified by {@link KktCheck} to {@link SolverSettings#kktTolerance()};
+ * anything else is reported as Failed, never returned as weights. Bounds whose sum cannot reach 1
+ * give {@link SolveOutcome.Infeasible}. Stateless and thread-safe.
+ */
+public final class ActiveSetSolver {
+    /** Absolute slack on Σ lower ≤ 1 ≤ Σ upper, as in the study's bounds check. */
+    private static final double BUDGET_SLACK = 1e-12;
+    /** A polished free weight beyond its bound by up to this (relative) is rounding; it is clipped. */
+    private static final double POLISH_SLACK = 1e-12;
+
+    private final SolverSettings settings;
+
+    public ActiveSetSolver(SolverSettings settings) {
+        this.settings = Objects.requireNonNull(settings, "settings");
+    }
+
+    /** Solves from a cold start. */
+    public SolveOutcome solve(QuadraticProblem problem) {
+        return solve(problem, null);
+    }
+
+    /**
+     * Solves, starting from a previous partition when one is given.
+     *
+     * @param warm a previous solve's {@link SolveOutcome.Optimal#sides()} for the same weights, or
+     *             {@code null}; a guess that does not fit is ignored, so the answer never depends
+     *             on it beyond the tolerance
+     */
+    public SolveOutcome solve(QuadraticProblem problem, BoundSide[] warm) {
+        Objects.requireNonNull(problem, "problem");
+        SolveOutcome infeasible = checkBudgetReachable(problem);
+        if (infeasible != null) {
+            return infeasible;
+        }
+        WorkingSet s = new WorkingSet(problem);
+        boolean started = warm != null && StartPoint.warm(s, warm, settings.singularPivot());
+        if (!started && !StartPoint.cold(s, settings.singularPivot())) {
+            return new SolveOutcome.Failed("the quadratic matrix is singular on the weights without finite bounds");
+        }
+        return new Iteration(s, settings).run();
+    }
+
+    /** Infeasible when Σ lower > 1 or Σ upper < 1; null otherwise. */
+    static SolveOutcome checkBudgetReachable(QuadraticProblem p) {
+        double lowSum = 0;
+        double highSum = 0;
+        for (int i = 0; i < p.size(); i++) {
+            lowSum += p.lower()[i];
+            highSum += p.upper()[i];
+        }
+        if (lowSum > 1 + BUDGET_SLACK) {
+            return new SolveOutcome.Infeasible("lower bounds sum to " + lowSum + " > 1 over " + p.size()
+                    + " assets: no weights can sum to 1");
+        }
+        if (highSum < 1 - BUDGET_SLACK) {
+            return new SolveOutcome.Infeasible("upper bounds sum to " + highSum + " < 1 over " + p.size()
+                    + " assets: no weights can sum to 1");
+        }
+        return null;
+    }
+
+    /** One run of the active-set loop over a started working set. */
+    private static final class Iteration {
+        private final WorkingSet s;
+        private final SolverSettings settings;
+        private final double[] lo;
+        private final double[] hi;
+        private final double[] step;
+        private final double[] aux;
+        private final int[] support;
+        private int changes;
+        private int sinceRefactor;
+        private boolean singular;
+
+        Iteration(WorkingSet s, SolverSettings settings) {
+            this.s = s;
+            this.settings = settings;
+            this.lo = s.problem.lower();
+            this.hi = s.problem.upper();
+            this.step = new double[s.n];
+            this.aux = new double[s.n];
+            this.support = new int[s.n];
+        }
+
+        SolveOutcome run() {
+            boolean atMinimum = false;
+            double scale = KktCheck.scale(s.problem, s.w);
+            while (true) {
+                if (changes > settings.maxIterations()) {
+                    return new SolveOutcome.Failed("active-set solver did not converge after " + changes
+                            + " changes of the working set (n = " + s.n + ")");
+                }
+                if (!atMinimum) {
+                    atMinimum = takeStep();
+                    if (singular) {
+                        return singularFreeBlock();
+                    }
+                    continue;
+                }
+                int release = mostNegativeMultiplier(scale);
+                if (release < 0) {
+                    return finish();
+                }
+                String problem = release(release);
+                if (problem != null) {
+                    return new SolveOutcome.Failed(problem);
+                }
+                atMinimum = false;
+                if (!maintain()) {
+                    return singularFreeBlock();
+                }
+                scale = KktCheck.scale(s.problem, s.w);
+            }
+        }
+
+        /**
+         * Moves toward the subproblem minimiser; returns whether it was reached. Sets
+         * {@code singular} when a periodic refactorisation finds the free block singular.
+         */
+        private boolean takeStep() {
+            int k = s.freeCount;
+            computeStep(k);
+            double size = 0;
+            double reach = 1;
+            for (int r = 0; r < k; r++) {
+                size = Math.max(size, Math.abs(step[r]));
+                reach = Math.max(reach, Math.abs(s.w[s.free[r]]));
+            }
+            if (size <= 1e-15 * reach) {
+                return true;
+            }
+            System.arraycopy(s.free, 0, support, 0, k);
+            double[] ratio = ratioTest(support, step, k);
+            double alpha = Math.min(1, ratio[0]);
+            s.move(alpha, support, step, k);
+            changes++;
+            if (ratio[0] < 1) {
+                int blocking = (int) ratio[1];
+                s.pin(blocking, step[s.position[blocking]] < 0 ? BoundSide.LOWER : BoundSide.UPPER);
+                singular = !maintain();
+                return false;
+            }
+            return true;
+        }
+
+        /** p = Q̃_FF⁻¹(ν1 − g_F) with 1'p = 0, written to step[0..k). */
+        private void computeStep(int k) {
+            for (int r = 0; r < k; r++) {
+                step[r] = s.g[s.free[r]];
+                aux[r] = 1;
+            }
+            s.factor.solveInPlace(step);
+            s.factor.solveInPlace(aux);
+            double nu = WorkingSet.sum(step, k) / WorkingSet.sum(aux, k);
+            for (int r = 0; r < k; r++) {
+                step[r] = nu * aux[r] - step[r];
+            }
+        }
+
+        /**
+         * The largest α ≤ +∞ keeping w + α d within the bounds on the support, and the weight
+         * that stops it (−1 when none); returned as {α, index}. Ties go to the first in support order.
+         */
+        private double[] ratioTest(int[] on, double[] d, int count) {
+            double best = Double.POSITIVE_INFINITY;
+            int blocking = -1;
+            for (int r = 0; r < count; r++) {
+                int i = on[r];
+                double dr = d[r];
+                double limit;
+                if (dr < 0 && Double.isFinite(lo[i])) {
+                    limit = (lo[i] - s.w[i]) / dr;
+                } else if (dr > 0 && Double.isFinite(hi[i])) {
+                    limit = (hi[i] - s.w[i]) / dr;
+                } else {
+                    continue;
+                }
+                limit = Math.max(0, limit);
+                if (limit < best) {
+                    best = limit;
+                    blocking = i;
+                }
+            }
+            return new double[] {best, blocking};
+        }
+
+        /** The pinned weight whose multiplier is most negative below −dropTolerance·scale, or −1. */
+        private int mostNegativeMultiplier(double scale) {
+            double nu = 0;
+            for (int r = 0; r < s.freeCount; r++) {
+                nu += s.g[s.free[r]];
+            }
+            nu /= s.freeCount;
+            double worst = -settings.dropTolerance() * scale;
+            int release = -1;
+            for (int i = 0; i < s.n; i++) {
+                if (s.side[i] == BoundSide.FREE || lo[i] == hi[i]) {
+                    continue;
+                }
+                double multiplier = s.side[i] == BoundSide.LOWER ? s.g[i] - nu : nu - s.g[i];
+                if (multiplier < worst) {
+                    worst = multiplier;
+                    release = i;
+                }
+            }
+            return release;
+        }
+
+        /** Frees weight j, or moves along the null direction when that would make the block singular. */
+        private String release(int j) {
+            if (s.appendToFactor(j, settings.singularPivot())) {
+                s.addFree(j);
+                changes++;
+                return null;
+            }
+            return moveAlongNullDirection(j);
+        }
+
+        /**
+         * d_j = σ (σ = +1 off a lower bound, −1 off an upper one), d_F = −σ Q̃_FF⁻¹ q̃_Fj + τ Q̃_FF⁻¹1
+         * with τ making 1'd = 0. Q̃ is singular on F ∪ {j}, so d carries (numerically) no curvature
+         * and the objective falls linearly along it; move to the first bound in the way.
+         */
+        private String moveAlongNullDirection(int j) {
+            int k = s.freeCount;
+            double sigma = s.side[j] == BoundSide.LOWER ? 1 : -1;
+            for (int r = 0; r < k; r++) {
+                step[r] = -sigma * s.shifted(s.free[r], j);
+                aux[r] = 1;
+            }
+            s.factor.solveInPlace(step);
+            s.factor.solveInPlace(aux);
+            double tau = (-sigma - WorkingSet.sum(step, k)) / WorkingSet.sum(aux, k);
+            for (int r = 0; r < k; r++) {
+                step[r] += tau * aux[r];
+                support[r] = s.free[r];
+            }
+            step[k] = sigma;
+            support[k] = j;
+            double[] ratio = ratioTest(support, step, k + 1);
+            if (!Double.isFinite(ratio[0])) {
+                return "objective is unbounded below: the quadratic matrix is singular along a direction"
+                        + " no bound limits (weight " + j + ")";
+            }
+            BoundSide from = s.side[j];
+            s.move(ratio[0], support, step, k + 1);
+            changes++;
+            int blocking = (int) ratio[1];
+            if (blocking == j) {
+                s.side[j] = from == BoundSide.LOWER ? BoundSide.UPPER : BoundSide.LOWER;
+                s.w[j] = s.side[j] == BoundSide.LOWER ? lo[j] : hi[j];
+                return null;
+            }
+            s.pin(blocking, step[s.position[blocking]] < 0 ? BoundSide.LOWER : BoundSide.UPPER);
+            if (!s.appendToFactor(j, settings.singularPivot())) {
+                return "the quadratic matrix is singular on the free weights even after pinning weight " + blocking;
+            }
+            s.addFree(j);
+            return null;
+        }
+
+        /** Periodic refactorisation and gradient refresh; false when the refreshed block is singular. */
+        private boolean maintain() {
+            if (++sinceRefactor < settings.refactorEvery()) {
+                return true;
+            }
+            sinceRefactor = 0;
+            s.recomputeGradient();
+            return s.refactor(settings.singularPivot()) < 0;
+        }
+
+        private SolveOutcome singularFreeBlock() {
+            return new SolveOutcome.Failed("the quadratic matrix is numerically singular on the " + s.freeCount
+                    + " free weights");
+        }
+
+        /** Polishes the free weights from a fresh factor, then verifies the KKT conditions. */
+        private SolveOutcome finish() {
+            if (s.refactor(settings.singularPivot()) >= 0) {
+                return singularFreeBlock();
+            }
+            double[] polished = s.subproblemMinimiser();
+            if (consistent(polished)) {
+                for (int r = 0; r < s.freeCount; r++) {
+                    int i = s.free[r];
+                    s.w[i] = Math.max(lo[i], Math.min(hi[i], polished[r]));
+                }
+            }
+            KktReport report = KktCheck.check(s.problem, s.w);
+            if (!report.holds(settings.kktTolerance())) {
+                return new SolveOutcome.Failed("KKT verification failed: primal residual " + report.primalResidual()
+                        + ", scaled dual residual " + report.dualResidual() + " (tolerance "
+                        + settings.kktTolerance() + ")");
+            }
+            return new SolveOutcome.Optimal(s.w.clone(), s.side.clone(), changes, report.budgetMultiplier(),
+                    report.worst());
+        }
+
+        /** Whether every polished free weight is within its bounds up to rounding. */
+        private boolean consistent(double[] polished) {
+            for (int r = 0; r < s.freeCount; r++) {
+                int i = s.free[r];
+                double x = polished[r];
+                double slackLow = POLISH_SLACK * Math.max(1, Math.abs(lo[i]));
+                double slackHigh = POLISH_SLACK * Math.max(1, Math.abs(hi[i]));
+                if (!(x >= lo[i] - slackLow && x <= hi[i] + slackHigh)) {
+                    return false;
+                }
+            }
+            return true;
+        }
+    }
+}

@@ -1,0 +1,112 @@
+package dev.sigmawalk.strategies.optimize;
+
+/**
+ * An updatable Cholesky factor A = LL' of a symmetric positive definite block of a larger matrix,
+ * held in a preallocated row-major lower triangle. Appending a row and column costs O(k²) (one
+ * forward substitution); removing one costs O(k²) (row shift plus Givens rotations that restore
+ * the triangle, Golub & Van Loan, Matrix Computations, 4th ed., §6.5.4); solves cost O(k²).
+ * Factoring a k×k block by k appends is the ordinary row-oriented Cholesky, k³/3 flops.
+ */
+final class CholeskyFactor {
+    private final int capacity;
+    private final double[] l;
+    private final double[] scratch;
+    private int size;
+
+    CholeskyFactor(int capacity) {
+        this.capacity = capacity;
+        this.l = new double[capacity * capacity];
+        this.scratch = new double[capacity];
+    }
+
+    int size() {
+        return size;
+    }
+
+    void clear() {
+        size = 0;
+    }
+
+    /**
+     * Extends A by one row and column.
+     *
+     * @param column the new off-diagonal entries A_{i,new} for the current rows i = 0..k-1
+     * @param diagonal A_{new,new}
+     * @param singularPivot relative pivot floor: the append is refused when the new squared pivot
+     *                      is ≤ singularPivot · |diagonal| (the extended block is singular or
+     *                      nearly so)
+     * @return false, leaving the factor unchanged, when the extended block is not safely positive definite
+     */
+    boolean append(double[] column, double diagonal, double singularPivot) {
+        int k = size;
+        int row = k * capacity;
+        double sum = 0;
+        for (int i = 0; i < k; i++) {
+            double v = column[i];
+            int ri = i * capacity;
+            for (int j = 0; j < i; j++) {
+                v -= l[ri + j] * scratch[j];
+            }
+            v /= l[ri + i];
+            scratch[i] = v;
+            sum += v * v;
+        }
+        double pivotSquared = diagonal - sum;
+        if (!(pivotSquared > singularPivot * Math.abs(diagonal))) {
+            return false;
+        }
+        System.arraycopy(scratch, 0, l, row, k);
+        l[row + k] = Math.sqrt(pivotSquared);
+        size = k + 1;
+        return true;
+    }
+
+    /** Deletes row and column {@code position} of A, keeping the others in order. */
+    void remove(int position) {
+        int k = size;
+        for (int r = position; r < k - 1; r++) {
+            System.arraycopy(l, (r + 1) * capacity, l, r * capacity, r + 2);
+        }
+        // Rows position..k-2 now reach one column past the diagonal; rotate column pairs (i, i+1)
+        // from the right to zero that entry, which leaves LL' unchanged.
+        for (int i = position; i < k - 1; i++) {
+            int ri = i * capacity;
+            double a = l[ri + i];
+            double b = l[ri + i + 1];
+            double r = Math.hypot(a, b);
+            double cos = a / r;
+            double sin = b / r;
+            l[ri + i] = r;
+            l[ri + i + 1] = 0;
+            for (int row = i + 1; row < k - 1; row++) {
+                int rr = row * capacity;
+                double x = l[rr + i];
+                double y = l[rr + i + 1];
+                l[rr + i] = cos * x + sin * y;
+                l[rr + i + 1] = -sin * x + cos * y;
+            }
+        }
+        size = k - 1;
+    }
+
+    /** Solves A x = b in place (b has at least k entries; only the first k are used). */
+    void solveInPlace(double[] b) {
+        int k = size;
+        for (int i = 0; i < k; i++) {
+            int ri = i * capacity;
+            double v = b[i];
+            for (int j = 0; j < i; j++) {
+                v -= l[ri + j] * b[j];
+            }
+            b[i] = v / l[ri + i];
+        }
+        for (int i = k - 1; i >= 0; i--) {
+            int ri = i * capacity;
+            double v = b[i] / l[ri + i];
+            b[i] = v;
+            for (int j = 0; j < i; j++) {
+                b[j] -= l[ri + j] * v;
+            }
+        }
+    }
+}

@@ -1,0 +1,97 @@
+package dev.sigmawalk.strategies.optimize;
+
+import java.util.Arrays;
+
+/**
+ * The budget-constrained box quadratic program
+ * <pre>
+ *   minimise ½ w'Qw − c'w   subject to   Σ_i w_i = 1,   lower_i ≤ w_i ≤ upper_i.
+ * </pre>
+ * Q is symmetric positive semi-definite, dense, row-major n×n with both triangles filled; c may
+ * be all zeros (minimum variance). Bounds may be infinite (−∞ lower, +∞ upper) but never NaN.
+ * Arrays are held as given (not copied, for speed at n = 500) and must not be modified while
+ * the problem is in use.
+ *
+ * @param size n ≥ 1
+ * @param quadratic Q, length n², finite and symmetric
+ * @param linear c, length n, finite
+ * @param lower lower_i, length n, never NaN or +∞
+ * @param upper upper_i, length n, never NaN or −∞, each ≥ lower_i
+ */
+public record QuadraticProblem(int size, double[] quadratic, double[] linear, double[] lower, double[] upper) {
+    /** Relative tolerance for asymmetry of Q, against the largest |Q_ij|. */
+    private static final double SYMMETRY_TOLERANCE = 1e-12;
+
+    public QuadraticProblem {
+        if (!(size >= 1)) {
+            throw new IllegalArgumentException("problem size (" + size + ") must be >= 1");
+        }
+        requireLength("quadratic", quadratic, size * size);
+        requireLength("linear", linear, size);
+        requireLength("lower", lower, size);
+        requireLength("upper", upper, size);
+        checkFinite("quadratic", quadratic);
+        checkFinite("linear", linear);
+        checkBounds(lower, upper);
+        checkSymmetric(size, quadratic);
+    }
+
+    /** A problem with the same bound on every weight. */
+    public static QuadraticProblem uniformBounds(int size, double[] quadratic, double[] linear, double lower,
+                                                 double upper) {
+        double[] lo = new double[size];
+        double[] hi = new double[size];
+        Arrays.fill(lo, lower);
+        Arrays.fill(hi, upper);
+        return new QuadraticProblem(size, quadratic, linear, lo, hi);
+    }
+
+    /** Q_ij. */
+    public double q(int i, int j) {
+        return quadratic[i * size + j];
+    }
+
+    private static void requireLength(String role, double[] values, int expected) {
+        if (values == null || values.length != expected) {
+            throw new IllegalArgumentException(role + " has length " + (values == null ? "null" : values.length)
+                    + ", expected " + expected);
+        }
+    }
+
+    private static void checkFinite(String role, double[] values) {
+        for (int i = 0; i < values.length; i++) {
+            if (!Double.isFinite(values[i])) {
+                throw new IllegalArgumentException(role + "[" + i + "] (" + values[i] + ") must be finite");
+            }
+        }
+    }
+
+    private static void checkBounds(double[] lower, double[] upper) {
+        for (int i = 0; i < lower.length; i++) {
+            double lo = lower[i];
+            double hi = upper[i];
+            if (!(lo <= hi) || lo == Double.POSITIVE_INFINITY || hi == Double.NEGATIVE_INFINITY) {
+                throw new IllegalArgumentException("bounds of weight " + i + " [" + lo + ", " + hi
+                        + "] need lower <= upper, lower < +inf and upper > -inf");
+            }
+        }
+    }
+
+    private static void checkSymmetric(int n, double[] q) {
+        double largest = 0;
+        for (double v : q) {
+            largest = Math.max(largest, Math.abs(v));
+        }
+        double allowed = SYMMETRY_TOLERANCE * largest;
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                double a = q[i * n + j];
+                double b = q[j * n + i];
+                if (!(Math.abs(a - b) <= allowed)) {
+                    throw new IllegalArgumentException("quadratic is not symmetric at (" + i + ", " + j + "): "
+                            + a + " vs " + b);
+                }
+            }
+        }
+    }
+}
