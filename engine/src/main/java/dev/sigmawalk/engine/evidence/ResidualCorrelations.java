@@ -8,6 +8,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.PriorityQueue;
 
 /**
  * Correlations ρ_ij of the market-model residuals of one estimation window (METHODS §8), the
@@ -128,15 +129,28 @@ public final class ResidualCorrelations {
             throw new IllegalArgumentException("pair count (" + k + ") must be >= 0");
         }
         int n = assets.size();
-        List<ResidualPair> pairs = new ArrayList<>(n * (n - 1) / 2);
-        for (int i = 0; i < n; i++) {
+        // Keep the k best in a heap whose head is the worst kept: O(n² log k), no n² list.
+        Comparator<int[]> better = Comparator.<int[]>comparingDouble(p -> correlation(p[0], p[1]))
+                .thenComparing((p, q) -> p[0] != q[0] ? Integer.compare(q[0], p[0]) : Integer.compare(q[1], p[1]));
+        PriorityQueue<int[]> kept = new PriorityQueue<>(Math.max(1, k), better);
+        for (int i = 0; i < n && k > 0; i++) {
             for (int j = i + 1; j < n; j++) {
-                pairs.add(new ResidualPair(assets.get(i), assets.get(j), correlation(i, j)));
+                int[] pair = {i, j};
+                if (kept.size() < k) {
+                    kept.add(pair);
+                } else if (better.compare(pair, kept.peek()) > 0) {
+                    kept.poll();
+                    kept.add(pair);
+                }
             }
         }
-        // List.sort is stable: equal correlations keep their (i, j) order.
-        pairs.sort(Comparator.comparingDouble(ResidualPair::correlation).reversed());
-        return List.copyOf(pairs.subList(0, Math.min(k, pairs.size())));
+        List<int[]> ordered = new ArrayList<>(kept);
+        ordered.sort(better.reversed());
+        List<ResidualPair> pairs = new ArrayList<>(ordered.size());
+        for (int[] p : ordered) {
+            pairs.add(new ResidualPair(assets.get(p[0]), assets.get(p[1]), correlation(p[0], p[1])));
+        }
+        return List.copyOf(pairs);
     }
 
     /**

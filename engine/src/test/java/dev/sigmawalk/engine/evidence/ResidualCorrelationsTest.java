@@ -116,6 +116,20 @@ class ResidualCorrelationsTest {
         assertEquals("X2/X3", all.get(2).first() + "/" + all.get(2).second());
     }
 
+    /** Selecting k pairs gives the head of the full ranking, which is sorted and covers all 66 pairs. */
+    @Test
+    void largestPairs_anyK_isThePrefixOfTheFullRanking() {
+        ResidualCorrelations rho = ResidualCorrelations.of(ReferenceWindow.load());
+        List<ResidualPair> all = rho.largestPairs(1000);
+        assertEquals(66, all.size());
+        for (int k = 1; k < all.size(); k++) {
+            assertTrue(all.get(k - 1).correlation() >= all.get(k).correlation(), "sorted at " + k);
+        }
+        for (int k : new int[] {0, 1, 7, 65}) {
+            assertEquals(all.subList(0, k), rho.largestPairs(k), "k = " + k);
+        }
+    }
+
     /**
      * Sectors of four assets each on the reference window: within A09-A12 the mean residual
      * correlation is 0.2666215577526063, across sectors -0.019174779017690085 over 48 pairs
