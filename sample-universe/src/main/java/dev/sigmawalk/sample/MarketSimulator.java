@@ -20,7 +20,6 @@ import java.util.List;
  */
 final class MarketSimulator {
     private final List<Company> companies;
-    private final List<Sector> sectors;
     private final MarketParameters market;
     private final VolatilityRegimes regimes;
     private final RatePath rate;
@@ -33,7 +32,6 @@ final class MarketSimulator {
     MarketSimulator(List<Company> companies, List<Sector> sectors, MarketParameters market,
                     VolatilityRegimes regimes, long seed) {
         this.companies = List.copyOf(companies);
-        this.sectors = List.copyOf(sectors);
         this.market = market;
         this.regimes = regimes;
         this.rate = new RatePath(market.rates(), market.daysPerYear(), SplitMix64.stream(seed, Streams.RATE));
@@ -43,7 +41,7 @@ final class MarketSimulator {
         this.sectorShocks = new double[sectors.size()];
         this.sectorOf = new int[companies.size()];
         for (int i = 0; i < sectorOf.length; i++) {
-            sectorOf[i] = this.sectors.indexOf(companies.get(i).sector());
+            sectorOf[i] = sectors.indexOf(companies.get(i).sector());
         }
     }
 

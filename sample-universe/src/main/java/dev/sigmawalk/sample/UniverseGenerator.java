@@ -40,6 +40,10 @@ public final class UniverseGenerator {
         }
         try {
             generate(options.spec(), options.into());
+            UniverseSpec spec = options.spec();
+            System.err.println("wrote " + UniverseFiles.DATA.size() + " files to " + options.into() + ": "
+                    + spec.companies() + " invented companies, " + spec.tradingDays() + " days from "
+                    + spec.firstDay() + ", seed " + spec.seed());
         } catch (IOException | UncheckedIOException e) {
             System.err.println("universe generator: cannot write to " + options.into() + ": " + e.getMessage());
             System.exit(1);

@@ -8,8 +8,10 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -28,12 +30,14 @@ class CommittedDataTest {
     private static Csv daily;
     private static Csv monthly;
     private static Csv truth;
+    private static List<LocalDate> dailyDates;
 
     @BeforeAll
     static void read() throws IOException {
         daily = Csv.read(ModuleFolder.file(UniverseFiles.assets(UniverseFiles.DAILY)));
         monthly = Csv.read(ModuleFolder.file(UniverseFiles.assets(UniverseFiles.MONTHLY)));
         truth = Csv.read(ModuleFolder.file(UniverseFiles.TRUTH));
+        dailyDates = daily.texts("date").stream().map(LocalDate::parse).toList();
     }
 
     /** The committed files cannot drift from the generator: regenerate with the demo spec. */
@@ -98,11 +102,11 @@ class CommittedDataTest {
     }
 
     private static void checkDaily(String id, LocalDate from, LocalDate to) {
-        int c = daily.column(id);
-        for (String[] row : daily.rows()) {
-            LocalDate date = LocalDate.parse(row[0]);
+        double[] r = daily.numbers(id);
+        for (int t = 0; t < r.length; t++) {
+            LocalDate date = dailyDates.get(t);
             boolean inside = !date.isBefore(from) && !date.isAfter(to);
-            assertEquals(inside, !row[c].isEmpty(), id + " on " + date);
+            assertEquals(inside, !Double.isNaN(r[t]), id + " on " + date);
         }
     }
 
@@ -121,18 +125,19 @@ class CommittedDataTest {
         for (String kind : List.of("assets", "market", "riskfree")) {
             Csv day = Csv.read(ModuleFolder.file(kind + "-daily.csv"));
             Csv month = Csv.read(ModuleFolder.file(kind + "-monthly.csv"));
+            List<String> dayMonths = day.rows().stream().map(r -> r[0].substring(0, 7)).toList();
+            Map<String, Integer> firstRowOfMonth = new HashMap<>();
+            for (int row = dayMonths.size() - 1; row >= 0; row--) {
+                firstRowOfMonth.put(dayMonths.get(row), row);
+            }
             for (String column : day.assets()) {
                 double[] d = day.numbers(column);
                 double[] m = month.numbers(column);
-                int row = 0;
                 for (int k = 0; k < m.length; k++) {
                     String monthKey = month.rows().get(k)[0].substring(0, 7);
                     double growth = 1;
-                    while (row < d.length && !day.rows().get(row)[0].startsWith(monthKey)) {
-                        row++;
-                    }
-                    while (row < d.length && day.rows().get(row)[0].startsWith(monthKey)) {
-                        growth *= 1 + d[row++];
+                    for (int row = firstRowOfMonth.get(monthKey); row < d.length && dayMonths.get(row).equals(monthKey); row++) {
+                        growth *= 1 + d[row];
                     }
                     if (!Double.isNaN(m[k])) {
                         double expected = growth - 1;

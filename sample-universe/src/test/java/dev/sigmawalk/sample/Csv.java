@@ -6,10 +6,24 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
-/** A small reader of the generated CSV files for tests: header plus rows of plain cells. */
-record Csv(List<String> header, List<String[]> rows) {
+/**
+ * A small reader of the generated CSV files for tests: header plus rows of plain cells. Number
+ * columns are parsed once, on first use, and handed out as copies.
+ */
+final class Csv {
+    private final List<String> header;
+    private final List<String[]> rows;
+    private final Map<String, double[]> parsed = new HashMap<>();
+
+    private Csv(List<String> header, List<String[]> rows) {
+        this.header = header;
+        this.rows = rows;
+    }
+
     static Csv read(Path file) throws IOException {
         List<String> lines = Files.readAllLines(file, StandardCharsets.UTF_8);
         List<String> header = List.of(lines.get(0).split(",", -1));
@@ -21,7 +35,15 @@ record Csv(List<String> header, List<String[]> rows) {
             }
             rows.add(cells);
         }
-        return new Csv(header, rows);
+        return new Csv(header, List.copyOf(rows));
+    }
+
+    List<String> header() {
+        return header;
+    }
+
+    List<String[]> rows() {
+        return rows;
     }
 
     int column(String name) {
@@ -39,8 +61,11 @@ record Csv(List<String> header, List<String[]> rows) {
 
     /** The column as numbers, NaN for an empty cell. */
     double[] numbers(String name) {
-        int c = column(name);
-        return rows.stream().mapToDouble(r -> r[c].isEmpty() ? Double.NaN : Double.parseDouble(r[c])).toArray();
+        double[] values = parsed.computeIfAbsent(name, n -> {
+            int c = column(n);
+            return rows.stream().mapToDouble(r -> r[c].isEmpty() ? Double.NaN : Double.parseDouble(r[c])).toArray();
+        });
+        return values.clone();
     }
 
     /** The asset columns (every column after {@code date}). */

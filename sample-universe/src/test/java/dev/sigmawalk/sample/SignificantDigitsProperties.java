@@ -17,7 +17,7 @@ class SignificantDigitsProperties {
     private static final double PRODUCT_SLACK = 1e-15;
 
     /** Parsing the written text gives back exactly the rounded double. */
-    @Property
+    @Property(tries = 300)
     void textParsesToTheRoundedValue(@ForAll @DoubleRange(min = -50, max = 50) double x,
                                      @ForAll @IntRange(min = 4, max = 15) int digits) {
         SignificantDigits d = new SignificantDigits(digits);
@@ -28,7 +28,7 @@ class SignificantDigitsProperties {
      * The written decimal has at most d significant digits and lies within half a unit of its
      * last digit from x (checked in exact decimal arithmetic with BigDecimal).
      */
-    @Property
+    @Property(tries = 300)
     void textIsWithinHalfAUnitInTheLastDigit(@ForAll @DoubleRange(min = -2, max = 2) double x,
                                              @ForAll @IntRange(min = 4, max = 12) int digits) {
         if (x == 0) {
@@ -43,7 +43,7 @@ class SignificantDigitsProperties {
                 "x = " + x + " written " + written + " is off by more than half a unit " + unit);
     }
 
-    @Property
+    @Property(tries = 300)
     void roundingTwiceChangesNothing(@ForAll @DoubleRange(min = -10, max = 10) double x) {
         SignificantDigits d = new SignificantDigits(8);
         assertEquals(d.round(x), d.round(d.round(x)), 0.0, "x = " + x);
