@@ -1,0 +1,71 @@
+package dev.sigmawalk.reports.charts;
+
+import java.awt.Rectangle;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.regex.Pattern;
+import org.jfree.chart.ChartUtils;
+import org.jfree.chart.JFreeChart;
+import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.ViewBox;
+
+/**
+ * Draws charts as inline SVG markup and as PNG files of a fixed pixel size.
+ *
+ * <p>The SVG has a {@code viewBox} and no fixed width or height, so a style sheet can scale it to
+ * the page width. Namespace declarations are removed: inline SVG in HTML needs none, and the
+ * report must not contain any web address. Ids inside the SVG (clip paths, gradients) start with
+ * the given prefix, so several charts can share one page and the output is the same on every run
+ * (the library's default prefix contains the clock).
+ */
+public final class ChartRenderer {
+    private static final Pattern NAMESPACE = Pattern.compile("\\s+xmlns(:[A-Za-z]+)?=(\"[^\"]*\"|'[^']*')");
+
+    private final int width;
+    private final int height;
+
+    /**
+     * @param width picture width in pixels, > 0
+     * @param height picture height in pixels, > 0
+     */
+    public ChartRenderer(int width, int height) {
+        if (!(width > 0 && height > 0)) {
+            throw new IllegalArgumentException("chart size (" + width + " x " + height + ") must be positive");
+        }
+        this.width = width;
+        this.height = height;
+    }
+
+    /**
+     * The chart as an {@code <svg>} element. Text is escaped by the SVG writer.
+     *
+     * @param idPrefix letters, digits, '-' or '_', starting with a letter; unique on the page
+     */
+    public String svg(JFreeChart chart, String idPrefix) {
+        if (!idPrefix.matches("[A-Za-z][A-Za-z0-9_-]*")) {
+            throw new IllegalArgumentException("SVG id prefix '" + idPrefix + "' must be a letter then letters, digits, - or _");
+        }
+        SVGGraphics2D g = new SVGGraphics2D(width, height);
+        g.setDefsKeyPrefix(idPrefix + "-");
+        chart.draw(g, new Rectangle(0, 0, width, height));
+        String element = g.getSVGElement(idPrefix, false, new ViewBox(0, 0, width, height), null, null);
+        return NAMESPACE.matcher(element).replaceAll("");
+    }
+
+    /** Writes the chart as a PNG of {@code width × height} pixels. */
+    public void png(JFreeChart chart, Path file) throws IOException {
+        try (OutputStream out = Files.newOutputStream(file)) {
+            ChartUtils.writeChartAsPNG(out, chart, width, height);
+        }
+    }
+
+    public int width() {
+        return width;
+    }
+
+    public int height() {
+        return height;
+    }
+}
