@@ -119,7 +119,7 @@ public final class ResidualCorrelations {
     }
 
     /**
-     * The k pairs i < j with the largest (signed) residual correlation, largest first; ties keep
+     * The k pairs i &lt; j with the largest (signed) residual correlation, largest first; ties keep
      * the order (i, j) ascending, so the list is deterministic.
      *
      * @param k how many, >= 0; fewer are returned when there are fewer pairs
