@@ -36,10 +36,23 @@ final class SeriesTables implements Closeable {
         riskFree.begin(date).number(row.riskFree()).end();
     }
 
+    /** Closes all three tables, even when one fails; the first failure is thrown. */
     @Override
     public void close() throws IOException {
-        try (CsvTable a = assets; CsvTable m = market; CsvTable r = riskFree) {
-            // closes all three, even when one fails
+        IOException first = null;
+        for (CsvTable table : new CsvTable[] {assets, market, riskFree}) {
+            try {
+                table.close();
+            } catch (IOException e) {
+                if (first == null) {
+                    first = e;
+                } else {
+                    first.addSuppressed(e);
+                }
+            }
+        }
+        if (first != null) {
+            throw first;
         }
     }
 }
