@@ -1,0 +1,73 @@
+package dev.sigmawalk.strategies.rules;
+
+import dev.sigmawalk.strategies.optimize.ActiveSetSolver;
+import dev.sigmawalk.strategies.optimize.QuadraticProblem;
+import dev.sigmawalk.strategies.optimize.SingleFactorForm;
+import dev.sigmawalk.strategies.optimize.SingleFactorMinVariance;
+import dev.sigmawalk.strategies.optimize.SolveOutcome;
+import dev.sigmawalk.strategies.optimize.SolverSettings;
+import dev.sigmawalk.strategies.optimize.UnboundedSolver;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Minimum variance: minimise w'Σw s.t. Σ w = 1 (and the bounds, when given).
+ * <ul>
+ *   <li>No bounds: the closed form Σ⁻¹1 / 1'Σ⁻¹1 (Woodbury in O(n) for a single-factor Σ,
+ *       Cholesky otherwise); a singular Σ, such as a sample covariance with n ≥ L, is reported
+ *       as NotFormed naming the singular matrix.</li>
+ *   <li>Bounds and a single-factor Σ: the O(n log n) clamp-and-threshold rule, falling back to
+ *       the exact active-set solver when it cannot certify its answer.</li>
+ *   <li>Bounds otherwise: the exact active-set solver, warm-started from the previous rebalance.</li>
+ * </ul>
+ *
+ * @param settings solver tolerances
+ */
+public record MinVariance(SolverSettings settings) implements PortfolioRule {
+    static final String NAME = "min-variance";
+
+    public MinVariance {
+        Objects.requireNonNull(settings, "settings");
+    }
+
+    @Override
+    public RuleOutcome apply(RuleInput input, WarmStart warm) {
+        return apply(input, warm, List.of());
+    }
+
+    /** As {@link #apply(RuleInput, WarmStart)}, attaching {@code notes} to a chosen portfolio. */
+    RuleOutcome apply(RuleInput input, WarmStart warm, List<String> notes) {
+        RuleOutcome none = Solved.noAssets(NAME, input);
+        if (none != null) {
+            return none;
+        }
+        return Solved.from(NAME, solve(input, warm), input, warm, notes);
+    }
+
+    private SolveOutcome solve(RuleInput input, WarmStart warm) {
+        int n = input.size();
+        boolean factorForm = input.covariance() instanceof SingleFactorForm;
+        if (input.bounds().isEmpty()) {
+            return factorForm
+                    ? new SingleFactorMinVariance(settings).unbounded((SingleFactorForm) input.covariance())
+                    : new UnboundedSolver(settings).minVariance(input.covariance().dense(), n);
+        }
+        double[] lo = Solved.lower(input);
+        double[] hi = Solved.upper(input);
+        if (factorForm) {
+            Optional<SolveOutcome.Optimal> fast = new SingleFactorMinVariance(settings)
+                    .threshold((SingleFactorForm) input.covariance(), lo, hi);
+            if (fast.isPresent()) {
+                return fast.get();
+            }
+        }
+        QuadraticProblem problem = new QuadraticProblem(n, input.covariance().dense(), new double[n], lo, hi);
+        return new ActiveSetSolver(settings).solve(problem, warm.guessFor(input.assets()));
+    }
+
+    @Override
+    public boolean needsExpectedReturns() {
+        return false;
+    }
+}

@@ -1,0 +1,64 @@
+package dev.sigmawalk.strategies.rules;
+
+import dev.sigmawalk.engine.study.Bounds;
+import dev.sigmawalk.strategies.optimize.SolveOutcome;
+import java.util.Arrays;
+import java.util.List;
+
+/** Conversions shared by the rules: bounds to arrays, solver outcomes to rule outcomes. */
+final class Solved {
+    private Solved() {
+    }
+
+    /** Per-asset lower bounds (−∞ without bounds). */
+    static double[] lower(RuleInput input) {
+        double[] lo = new double[input.size()];
+        Arrays.fill(lo, input.bounds().map(Bounds::lower).orElse(Double.NEGATIVE_INFINITY));
+        return lo;
+    }
+
+    /** Per-asset upper bounds (+∞ without bounds). */
+    static double[] upper(RuleInput input) {
+        double[] hi = new double[input.size()];
+        Arrays.fill(hi, input.bounds().map(Bounds::upper).orElse(Double.POSITIVE_INFINITY));
+        return hi;
+    }
+
+    /**
+     * Chosen with w'Σw for an optimum (remembering its partition), else NotFormed with the
+     * rule's name and the solver's reason (forgetting the partition).
+     */
+    static RuleOutcome from(String rule, SolveOutcome outcome, RuleInput input, WarmStart warm, List<String> notes) {
+        if (outcome instanceof SolveOutcome.Optimal) {
+            SolveOutcome.Optimal optimal = (SolveOutcome.Optimal) outcome;
+            warm.remember(input.assets(), optimal.sides());
+            return chosen(optimal.weights(), input, notes);
+        }
+        warm.forget();
+        String reason = outcome instanceof SolveOutcome.Infeasible
+                ? ((SolveOutcome.Infeasible) outcome).reason()
+                : ((SolveOutcome.Failed) outcome).reason();
+        return new RuleOutcome.NotFormed(rule + ": " + reason);
+    }
+
+    /**
+     * Chosen with forecast variance w'Σw; a rounding-negative value of a positive semi-definite
+     * form (|v| at the level of machine epsilon) is reported as 0.
+     */
+    static RuleOutcome chosen(double[] weights, RuleInput input, List<String> notes) {
+        double variance = input.covariance().portfolioVariance(weights);
+        return new RuleOutcome.Chosen(weights, Math.max(0, variance), notes);
+    }
+
+    /** NotFormed when the rule needs expected returns and none were given; null otherwise. */
+    static RuleOutcome missingExpectedReturns(String rule, RuleInput input) {
+        return input.expectedReturns() == null
+                ? new RuleOutcome.NotFormed(rule + ": expected returns are required but none were given")
+                : null;
+    }
+
+    /** NotFormed when there are no eligible assets; null otherwise. */
+    static RuleOutcome noAssets(String rule, RuleInput input) {
+        return input.size() == 0 ? new RuleOutcome.NotFormed(rule + ": no eligible assets") : null;
+    }
+}
