@@ -22,8 +22,11 @@ import java.util.List;
  * counted. A record with a line break inside quotes reports the line it ends on.
  */
 final class CsvSource implements AutoCloseable {
-    /** Wide files hold one column per asset; the parser's default limit is 512. */
-    private static final int MAX_COLUMNS = 1_000_000;
+    /**
+     * The parser clears a buffer of its column limit for every record, so the limit is sized
+     * from the header line (every comma there may start a column) rather than set very large.
+     */
+    private static final int MIN_COLUMNS = 512;
     private static final int MAX_CHARS_PER_CELL = 100_000;
 
     private final Path file;
@@ -49,7 +52,7 @@ final class CsvSource implements AutoCloseable {
         CsvParserSettings settings = new CsvParserSettings();
         settings.setNullValue("");
         settings.setEmptyValue("");
-        settings.setMaxColumns(MAX_COLUMNS);
+        settings.setMaxColumns(columnLimit(file));
         settings.setMaxCharsPerColumn(MAX_CHARS_PER_CELL);
         settings.setLineSeparatorDetectionEnabled(true);
         settings.setSkipEmptyLines(true);
@@ -67,6 +70,22 @@ final class CsvSource implements AutoCloseable {
             names.add(trim(cell));
         }
         return new CsvSource(file, parser, Collections.unmodifiableList(names));
+    }
+
+    /** An upper bound on the header's cells: commas on the first line plus one, at least 512. */
+    private static int columnLimit(Path file) {
+        try (java.io.BufferedReader in = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+            String first = in.readLine();
+            int commas = 0;
+            for (int i = 0; first != null && i < first.length(); i++) {
+                if (first.charAt(i) == ',') {
+                    commas++;
+                }
+            }
+            return Math.max(MIN_COLUMNS, commas + 2);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException("cannot read " + file, e);
+        }
     }
 
     Path file() {

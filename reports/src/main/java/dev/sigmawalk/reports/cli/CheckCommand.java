@@ -75,8 +75,8 @@ public final class CheckCommand implements Callable<Integer> {
         out.println("  assets with missing rows: " + (gappy.isEmpty() ? "none" : gappy.size()));
         for (int i = 0; i < Math.min(LISTED_ASSETS, gappy.size()); i++) {
             AssetCoverage c = gappy.get(i);
-            out.println("    " + c.asset() + ": " + c.first() + " to " + c.last() + ", " + c.missing()
-                    + " rows missing (" + c.gaps() + " inside its span)");
+            out.println("    " + c.asset() + ": " + c.first() + " to " + c.last() + ", " + count(c.missing(), "row")
+                    + " missing (" + c.gaps() + " inside its span)");
         }
         if (gappy.size() > LISTED_ASSETS) {
             out.println("    and " + (gappy.size() - LISTED_ASSETS) + " more");
@@ -99,11 +99,11 @@ public final class CheckCommand implements Callable<Integer> {
         RebalanceRule rule = study.walkForward().rebalance();
         out.println("Walk-forward: windows " + study.walkForward().windows() + ", rebalance "
                 + (rule instanceof RebalanceRule.CalendarEnd c ? "at each " + c.calendar().spelling()
-                        : "every " + ((RebalanceRule.EveryRows) rule).rows() + " rows")
+                        : "every " + count(((RebalanceRule.EveryRows) rule).rows(), "row"))
                 + ", cost " + study.walkForward().costBps() + " bps");
-        out.println("  first rebalance " + panel.date(schedule.firstRebalance()) + ", " + schedule.count()
-                + " rebalances; out-of-sample " + panel.date(schedule.firstRebalance() + 1) + " to "
-                + panel.date(schedule.lastRow()) + " (" + schedule.outOfSampleRows() + " rows)");
+        out.println("  first rebalance " + panel.date(schedule.firstRebalance()) + ", "
+                + count(schedule.count(), "rebalance") + "; out-of-sample " + panel.date(schedule.firstRebalance() + 1) + " to "
+                + panel.date(schedule.lastRow()) + " (" + count(schedule.outOfSampleRows(), "row") + ")");
         for (int window : study.walkForward().windows()) {
             out.println("  window " + window + ": first estimation date "
                     + panel.date(schedule.firstRebalance() - window + 1));
@@ -137,6 +137,11 @@ public final class CheckCommand implements Callable<Integer> {
         for (String l : lines) {
             out.println("  " + l);
         }
+    }
+
+    /** "1 row", "2 rows". */
+    private static String count(int n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     private static String bounds(Bounds b) {
