@@ -13,7 +13,7 @@ public record EqualWeight() implements PortfolioRule {
 
     @Override
     public RuleOutcome apply(RuleInput input, WarmStart warm) {
-        RuleOutcome none = Solved.noAssets(NAME, input);
+        RuleOutcome none = Solved.unusable(NAME, input);
         if (none != null) {
             return none;
         }

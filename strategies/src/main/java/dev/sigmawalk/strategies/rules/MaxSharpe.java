@@ -37,7 +37,7 @@ public record MaxSharpe(SolverSettings settings) implements PortfolioRule {
 
     @Override
     public RuleOutcome apply(RuleInput input, WarmStart warm) {
-        RuleOutcome none = Solved.noAssets(NAME, input);
+        RuleOutcome none = Solved.unusable(NAME, input);
         if (none == null) {
             none = Solved.missingExpectedReturns(NAME, input);
         }

@@ -28,7 +28,7 @@ public record MeanVariance(double riskAversion, SolverSettings settings) impleme
 
     @Override
     public RuleOutcome apply(RuleInput input, WarmStart warm) {
-        RuleOutcome none = Solved.noAssets(NAME, input);
+        RuleOutcome none = Solved.unusable(NAME, input);
         if (none == null) {
             none = Solved.missingExpectedReturns(NAME, input);
         }

@@ -38,7 +38,7 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
 
     /** As {@link #apply(RuleInput, WarmStart)}, attaching {@code notes} to a chosen portfolio. */
     RuleOutcome apply(RuleInput input, WarmStart warm, List<String> notes) {
-        RuleOutcome none = Solved.noAssets(NAME, input);
+        RuleOutcome none = Solved.unusable(NAME, input);
         if (none != null) {
             return none;
         }

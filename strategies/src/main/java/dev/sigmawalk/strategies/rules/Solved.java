@@ -57,8 +57,22 @@ final class Solved {
                 : null;
     }
 
-    /** NotFormed when there are no eligible assets; null otherwise. */
-    static RuleOutcome noAssets(String rule, RuleInput input) {
-        return input.size() == 0 ? new RuleOutcome.NotFormed(rule + ": no eligible assets") : null;
+    /**
+     * NotFormed when there are no eligible assets or the covariance has a non-finite entry (the
+     * solvers accept only finite matrices); null otherwise. O(n²).
+     */
+    static RuleOutcome unusable(String rule, RuleInput input) {
+        if (input.size() == 0) {
+            return new RuleOutcome.NotFormed(rule + ": no eligible assets");
+        }
+        int n = input.size();
+        double[] sigma = input.covariance().dense();
+        for (int k = 0; k < sigma.length; k++) {
+            if (!Double.isFinite(sigma[k])) {
+                return new RuleOutcome.NotFormed(rule + ": covariance entry (" + input.assets().get(k / n) + ", "
+                        + input.assets().get(k % n) + ") is " + sigma[k] + ", not a finite number");
+            }
+        }
+        return null;
     }
 }

@@ -60,6 +60,7 @@ class SolverPropertiesTest {
         double cap = random.nextBoolean() ? Double.POSITIVE_INFINITY : (1.0 + 3 * random.nextDouble()) / n;
         double[] lo = new double[n];
         double[] hi = new double[n];
+        Arrays.fill(lo, random.nextBoolean() ? 0 : -0.05);
         Arrays.fill(hi, cap);
         Optional<SolveOutcome.Optimal> fast = new SingleFactorMinVariance(settings).threshold(form, lo, hi);
         assertTrue(fast.isPresent(), "threshold rule certifies its answer");
@@ -68,11 +69,15 @@ class SolverPropertiesTest {
     }
 
     @Property(tries = 40)
-    void woodbury_matchesDenseClosedForm(@ForAll @IntRange(min = 1, max = 60) int n, @ForAll long seed) {
+    void woodbury_matchesDenseClosedFormAndGeneralSolver(@ForAll @IntRange(min = 1, max = 60) int n, @ForAll long seed) {
         SingleFactorForm form = RandomProblems.singleFactor(new Random(seed), n);
         SolveOutcome fast = new SingleFactorMinVariance(settings).unbounded(form);
         SolveOutcome dense = new UnboundedSolver(settings).minVariance(SingleFactorMinVariance.dense(form), n);
         MinVarianceReferenceTest.assertWeights(((SolveOutcome.Optimal) dense).weights(), fast, SAME_OPTIMUM);
+        QuadraticProblem open = QuadraticProblem.uniformBounds(n, SingleFactorMinVariance.dense(form), new double[n],
+                Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY);
+        MinVarianceReferenceTest.assertWeights(((SolveOutcome.Optimal) fast).weights(), solver.solve(open),
+                SAME_OPTIMUM);
     }
 
     /** Min variance or mean-variance on a random covariance, with random bounds (lower 0 or −0.2). */

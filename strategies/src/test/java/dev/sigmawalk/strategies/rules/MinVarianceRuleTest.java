@@ -109,6 +109,15 @@ class MinVarianceRuleTest {
         }
     }
 
+    @Test
+    void nonFiniteCovariance_isNotFormedNamingTheEntry() {
+        double[] sigma = {0.04, Double.NaN, Double.NaN, 0.01};
+        RuleOutcome out = rule.apply(new RuleInput(List.of("P", "Q"), TestCovariances.dense(sigma), null,
+                Optional.empty()), new WarmStart());
+        RuleOutcome.NotFormed failed = assertInstanceOf(RuleOutcome.NotFormed.class, out);
+        assertTrue(failed.reason().contains("(P, Q) is NaN"), failed.reason());
+    }
+
     static RuleOutcome.Chosen assertChosen(double[] expected, RuleOutcome out, double tolerance) {
         RuleOutcome.Chosen chosen = assertInstanceOf(RuleOutcome.Chosen.class, out, () -> out.toString());
         for (int i = 0; i < expected.length; i++) {
