@@ -5,6 +5,7 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
@@ -21,6 +22,8 @@ import org.jfree.svg.ViewBox;
  * (the library's default prefix contains the clock).
  */
 public final class ChartRenderer {
+    private static final Pattern ATTRIBUTE = Pattern.compile("(\\s[A-Za-z:-]+=')([^']*)(')");
+    private static final Pattern LONG_DECIMAL = Pattern.compile("(\\d\\.\\d\\d)\\d+");
     private static final Pattern NAMESPACE = Pattern.compile("\\s+xmlns(:[A-Za-z]+)?=(\"[^\"]*\"|'[^']*')");
 
     private final int width;
@@ -51,7 +54,24 @@ public final class ChartRenderer {
         g.setDefsKeyPrefix(idPrefix + "-");
         chart.draw(g, new Rectangle(0, 0, width, height));
         String element = g.getSVGElement(idPrefix, false, new ViewBox(0, 0, width, height), null, null);
-        return NAMESPACE.matcher(element).replaceAll("");
+        return shortenNumbers(NAMESPACE.matcher(element).replaceAll(""));
+    }
+
+    /**
+     * Cuts decimals in attribute values (coordinates, stroke widths) after the second place:
+     * 0.01 px is far below what a screen or printer shows, and full double precision makes the
+     * markup several times larger. Text content is left alone: user text never sits inside a
+     * single-quoted attribute because the SVG writer escapes quotes.
+     */
+    static String shortenNumbers(String svg) {
+        Matcher m = ATTRIBUTE.matcher(svg);
+        StringBuilder out = new StringBuilder(svg.length());
+        while (m.find()) {
+            String value = LONG_DECIMAL.matcher(m.group(2)).replaceAll("$1");
+            m.appendReplacement(out, Matcher.quoteReplacement(m.group(1) + value + m.group(3)));
+        }
+        m.appendTail(out);
+        return out.toString();
     }
 
     /** Writes the chart as a PNG of {@code width × height} pixels. */

@@ -15,6 +15,8 @@ import org.junit.jupiter.api.Test;
 class StyleBookTest {
     /** Smallest CIE L* gap between two families drawn with the same dash pattern. */
     private static final double MIN_LIGHTNESS_GAP = 10;
+    /** WCAG 2.1 minimum contrast of graphical objects. */
+    private static final double MIN_CONTRAST = 3.0;
 
     @Test
     void sameFamily_keepsColour_butGetsAnotherDash() {
@@ -55,6 +57,18 @@ class StyleBookTest {
         }
     }
 
+    /**
+     * Every family colour stands out from the white ground by a contrast ratio of at least 3:1,
+     * (L1 + 0.05) / (L2 + 0.05) with relative luminance L (WCAG 2.1, success criterion 1.4.11).
+     */
+    @Test
+    void everyFamily_hasEnoughContrastOnWhite() {
+        for (ModelFamily f : ModelFamily.values()) {
+            double ratio = 1.05 / (luminance(f.colour()) + 0.05);
+            assertTrue(ratio >= MIN_CONTRAST, f + " contrast " + ratio);
+        }
+    }
+
     /** Hand check of the L* formula: white 100, black 0, mid grey #777777 about 50 (sRGB tables). */
     @Test
     void lightness_formulaMatchesKnownPoints() {
@@ -71,8 +85,12 @@ class StyleBookTest {
         }
     }
 
+    private static double luminance(Color c) {
+        return 0.2126 * linear(c.getRed()) + 0.7152 * linear(c.getGreen()) + 0.0722 * linear(c.getBlue());
+    }
+
     private static double lightness(Color c) {
-        double y = 0.2126 * linear(c.getRed()) + 0.7152 * linear(c.getGreen()) + 0.0722 * linear(c.getBlue());
+        double y = luminance(c);
         return y > 216.0 / 24389 ? 116 * Math.cbrt(y) - 16 : 24389.0 / 27 * y;
     }
 

@@ -1,0 +1,170 @@
+package dev.sigmawalk.reports.html;
+
+import dev.sigmawalk.engine.measures.Summary;
+import dev.sigmawalk.engine.run.PathResult;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The one-line answers that open each section, written from the numbers. Ties go to the path
+ * that comes first in the run (study order of windows, then of strategies).
+ */
+final class Findings {
+    private final ReportData data;
+    private final Map<PathResult, PathFacts> facts;
+
+    Findings(ReportData data, Map<PathResult, PathFacts> facts) {
+        this.data = data;
+        this.facts = facts;
+    }
+
+    /** The path with the lowest realised (net) volatility. */
+    PathResult lowestVolatility() {
+        return data.run().paths().stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()))
+                .orElseThrow();
+    }
+
+    String headline() {
+        PathResult best = lowestVolatility();
+        Summary b = data.summary(best);
+        String lead = "With a " + best.window() + "-period window, " + best.strategy()
+                + " had the lowest realised volatility: " + Formats.percent(b.volatility()) + " a year";
+        Optional<PathResult> next = data.paths(best.window()).stream().filter(p -> p != best)
+                .min(Comparator.comparingDouble(p -> data.summary(p).volatility()));
+        if (next.isPresent()) {
+            return lead + ", against " + Formats.percent(data.summary(next.get()).volatility()) + " for "
+                    + next.get().strategy() + " with the same window and " + Formats.percent(data.market().volatility())
+                    + " for the market.";
+        }
+        return lead + ", against " + Formats.percent(data.market().volatility()) + " for the market.";
+    }
+
+    String cost() {
+        List<PathResult> traded = data.run().paths().stream()
+                .filter(p -> data.summary(p).meanTurnover().isPresent()).toList();
+        String bp = Formats.basisPoints(data.study().walkForward().costBps());
+        if (traded.isEmpty()) {
+            return "Each portfolio was formed only once, so the only trading was the first purchase from cash.";
+        }
+        Comparator<PathResult> byTurnover = Comparator.comparingDouble(p -> data.summary(p).meanTurnover().getAsDouble());
+        PathResult most = traded.stream().max(byTurnover).orElseThrow();
+        PathResult least = traded.stream().min(byTurnover).orElseThrow();
+        String sentence = name(most) + " traded the most, " + Formats.percent(data.summary(most).meanTurnover())
+                + " of the portfolio per rebalance, which cost " + Formats.percent(facts.get(most).annualCost())
+                + " a year at " + bp + " per unit traded";
+        if (most == least) {
+            return sentence + ".";
+        }
+        return sentence + "; " + name(least) + " traded the least, " + Formats.percent(data.summary(least).meanTurnover())
+                + " per rebalance (" + Formats.percent(facts.get(least).annualCost()) + " a year).";
+    }
+
+    String honesty() {
+        List<PathResult> checked = data.run().paths().stream().filter(p -> data.summary(p).bias().isPresent()).toList();
+        if (checked.isEmpty()) {
+            return "No path had enough periods with a risk forecast to judge the forecasts.";
+        }
+        int inside = 0;
+        for (PathResult p : checked) {
+            if (Band.of(facts.get(p).forecastRows()).contains(data.summary(p).bias().getAsDouble())) {
+                inside++;
+            }
+        }
+        Comparator<PathResult> byDistance = Comparator.comparingDouble(p -> Math.abs(data.summary(p).bias().getAsDouble() - 1));
+        PathResult closest = checked.stream().min(byDistance).orElseThrow();
+        PathResult farthest = checked.stream().max(byDistance).orElseThrow();
+        String sentence = inside + " of " + checked.size() + " strategy-window combinations had a bias statistic inside "
+                + "the band 1 ± √(2/N) expected of honest forecasts; the closest to 1 was " + name(closest) + " ("
+                + Formats.ratio(data.summary(closest).bias()) + ")";
+        if (closest == farthest) {
+            return sentence + ".";
+        }
+        double far = data.summary(farthest).bias().getAsDouble();
+        return sentence + " and the farthest " + name(farthest) + " (" + Formats.ratio(far) + ", risk "
+                + (far > 1 ? "understated" : "overstated") + ").";
+    }
+
+    String concentration() {
+        List<PathResult> held = data.run().paths().stream()
+                .filter(p -> Double.isFinite(facts.get(p).meanEffectiveHoldings())).toList();
+        if (held.isEmpty()) {
+            return "No portfolio was formed, so there is no concentration to report.";
+        }
+        Comparator<PathResult> bySpread = Comparator.comparingDouble(p -> facts.get(p).meanEffectiveHoldings());
+        PathResult tight = held.stream().min(bySpread).orElseThrow();
+        PathResult wide = held.stream().max(bySpread).orElseThrow();
+        PathFacts t = facts.get(tight);
+        String sentence = "The most concentrated was " + name(tight) + ", with " + Formats.oneDecimal(t.meanEffectiveHoldings())
+                + " effective holdings on average and a largest single weight of up to " + Formats.percent(t.maxLargestWeight());
+        if (tight == wide) {
+            return sentence + ".";
+        }
+        return sentence + "; the most spread out was " + name(wide) + ", with "
+                + Formats.oneDecimal(facts.get(wide).meanEffectiveHoldings()) + ".";
+    }
+
+    /** Empty when no path reports a shrinkage intensity. */
+    Optional<String> shrinkage() {
+        List<String> parts = new ArrayList<>();
+        List<PathResult> shrunk = data.run().paths().stream().filter(p -> facts.get(p).shrinkage().isPresent()).toList();
+        if (shrunk.isEmpty()) {
+            return Optional.empty();
+        }
+        for (PathResult p : shrunk) {
+            parts.add(Formats.ratio(facts.get(p).shrinkage().orElseThrow().mean()) + " for " + name(p));
+        }
+        String sentence = "On average δ was " + Words.list(parts) + " (0 = sample covariance kept, 1 = target used alone).";
+        return Optional.of(sentence + trend(shrunk));
+    }
+
+    String windows() {
+        List<Integer> windows = data.windows();
+        if (windows.size() == 1) {
+            return "This study used one window, " + Words.periods(windows.get(0))
+                    + "; run several windows to see how the choice of window changes the result.";
+        }
+        List<String> parts = new ArrayList<>();
+        for (int w : windows) {
+            PathResult best = data.paths(w).stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()))
+                    .orElseThrow();
+            parts.add(Words.periods(w) + ", " + best.strategy() + " at " + Formats.percent(data.summary(best).volatility()));
+        }
+        return "Lowest realised volatility for each window: " + String.join("; ", parts) + " (all a year).";
+    }
+
+    /** A sentence on whether δ fell as the window grew, for every shrinkage strategy alike. */
+    private String trend(List<PathResult> shrunk) {
+        List<String> names = shrunk.stream().map(PathResult::strategy).distinct().toList();
+        boolean falling = true;
+        boolean rising = true;
+        boolean compared = false;
+        for (String n : names) {
+            List<PathResult> own = shrunk.stream().filter(p -> p.strategy().equals(n))
+                    .sorted(Comparator.comparingInt(PathResult::window)).toList();
+            for (int k = 1; k < own.size(); k++) {
+                double before = facts.get(own.get(k - 1)).shrinkage().orElseThrow().mean();
+                double after = facts.get(own.get(k)).shrinkage().orElseThrow().mean();
+                falling &= after < before;
+                rising &= after > before;
+                compared = true;
+            }
+        }
+        if (!compared) {
+            return "";
+        }
+        if (falling) {
+            return " Longer windows were pulled less toward the target: more data make the sample covariance less noisy.";
+        }
+        if (rising) {
+            return " Longer windows were pulled more toward the target in this study.";
+        }
+        return " The pull did not change in one direction as the window grew.";
+    }
+
+    private static String name(PathResult p) {
+        return p.strategy() + " with the " + p.window() + "-period window";
+    }
+}

@@ -1,0 +1,64 @@
+package dev.sigmawalk.reports.html;
+
+import dev.sigmawalk.engine.measures.Summary;
+import dev.sigmawalk.engine.run.PathResult;
+import dev.sigmawalk.engine.run.RunResult;
+import dev.sigmawalk.engine.study.Study;
+import java.util.List;
+import java.util.Objects;
+
+/**
+ * Everything the report shows.
+ *
+ * @param study the study as read
+ * @param run the walk-forward result
+ * @param summaries one row per path plus the {@code market} row, as in {@code summary.csv}
+ * @param record facts about the run the results do not carry
+ */
+public record ReportData(Study study, RunResult<?> run, List<Summary> summaries, RunRecord record) {
+    public ReportData {
+        Objects.requireNonNull(study, "study");
+        Objects.requireNonNull(run, "run");
+        summaries = List.copyOf(summaries);
+        Objects.requireNonNull(record, "record");
+        if (run.paths().isEmpty()) {
+            throw new IllegalArgumentException("the run has no paths to report");
+        }
+        if (summaries.stream().noneMatch(s -> s.window().isEmpty() && Families.MARKET.equals(s.strategy()))) {
+            throw new IllegalArgumentException("summaries must include the 'market' benchmark row");
+        }
+        for (PathResult p : run.paths()) {
+            find(summaries, p.strategy(), p.window());
+        }
+    }
+
+    /** The summary row of a path. */
+    public Summary summary(PathResult path) {
+        return find(summaries, path.strategy(), path.window());
+    }
+
+    /** The benchmark's summary row. */
+    public Summary market() {
+        return summaries.stream().filter(s -> s.window().isEmpty() && Families.MARKET.equals(s.strategy()))
+                .findFirst().orElseThrow();
+    }
+
+    /** The windows in study order that have at least one path. */
+    public List<Integer> windows() {
+        return run.paths().stream().map(PathResult::window).distinct().toList();
+    }
+
+    /** The paths of one window, in run order. */
+    public List<PathResult> paths(int window) {
+        return run.paths().stream().filter(p -> p.window() == window).toList();
+    }
+
+    private static Summary find(List<Summary> summaries, String strategy, int window) {
+        for (Summary s : summaries) {
+            if (s.strategy().equals(strategy) && s.window().isPresent() && s.window().getAsInt() == window) {
+                return s;
+            }
+        }
+        throw new IllegalArgumentException("no summary row for strategy '" + strategy + "' and window " + window);
+    }
+}

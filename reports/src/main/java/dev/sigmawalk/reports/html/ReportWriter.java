@@ -1,0 +1,123 @@
+package dev.sigmawalk.reports.html;
+
+import com.github.mustachejava.DefaultMustacheFactory;
+import com.github.mustachejava.Mustache;
+import dev.sigmawalk.engine.measures.Summary;
+import dev.sigmawalk.engine.run.PathResult;
+import dev.sigmawalk.reports.charts.ModelFamily;
+import dev.sigmawalk.reports.charts.StyleBook;
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.IdentityHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+
+/**
+ * Writes {@code report.html} (one self-contained file: inline CSS and SVG, no script, no web
+ * address) and a PNG copy of every chart into a charts folder.
+ *
+ * <p>The page is rendered from the template {@code report.mustache}; every value is escaped by
+ * the template except the SVG this class generated. Output depends only on the data: the same
+ * data give byte-identical files.
+ */
+public final class ReportWriter {
+    private static final String TEMPLATE = "report.mustache";
+
+    private final Mustache template;
+
+    public ReportWriter() {
+        DefaultMustacheFactory factory = new DefaultMustacheFactory("dev/sigmawalk/reports/html");
+        this.template = factory.compile(TEMPLATE);
+    }
+
+    /**
+     * Writes the report and its charts.
+     *
+     * @param data what to report
+     * @param htmlFile the report file to create or replace
+     * @param chartsDir folder for the PNG copies (created when missing); the report refers to them
+     *                  by this folder's name, relative to the report
+     * @return the PNG files written, in page order
+     */
+    public List<Path> write(ReportData data, Path htmlFile, Path chartsDir) throws IOException {
+        FigureMaker maker = new FigureMaker(chartsDir);
+        ReportView view = view(data, maker);
+        Path parent = htmlFile.toAbsolutePath().getParent();
+        if (parent != null) {
+            Files.createDirectories(parent);
+        }
+        try (Writer out = Files.newBufferedWriter(htmlFile, StandardCharsets.UTF_8)) {
+            template.execute(out, view);
+        }
+        return maker.written();
+    }
+
+    static ReportView view(ReportData data, FigureMaker maker) {
+        StyleBook styles = Families.styles(data.study(), data.run());
+        Map<PathResult, PathFacts> facts = new IdentityHashMap<>();
+        for (PathResult p : data.run().paths()) {
+            facts.put(p, PathFacts.of(p, data.run().periodsPerYear()));
+        }
+        Findings findings = new Findings(data, facts);
+        SectionRows rows = new SectionRows(data, facts, styles);
+        ChartSet charts = new ChartSet(data, styles, maker);
+        int focus = findings.lowestVolatility().window();
+
+        ReportView.Headline headline = new ReportView.Headline(findings.headline(),
+                List.of(charts.growth(focus), charts.drawdown(focus), charts.rollingVolatility(focus)));
+        ReportView.Cost cost = new ReportView.Cost(findings.cost(), rows.cost(), List.of(charts.turnover(focus)));
+        ReportView.Honesty honesty = new ReportView.Honesty(findings.honesty(), rows.honesty(), charts.forecasts(focus));
+        ReportView.Concentration concentration = new ReportView.Concentration(findings.concentration(),
+                rows.concentration(), List.of(charts.effectiveHoldings(focus), charts.largestWeight(focus)));
+        List<ReportView.Shrinkage> shrinkage = new ArrayList<>();
+        findings.shrinkage().ifPresent(answer -> shrinkage.add(new ReportView.Shrinkage(answer, rows.shrinkage(),
+                charts.shrinkage().stream().toList())));
+        List<Figure> windowFigures = new ArrayList<>();
+        windowFigures.add(charts.byWindow("window-volatility", "Realised volatility by window length",
+                "Annualised volatility (% a year)", true, Summary::volatility));
+        windowFigures.add(charts.byWindow("window-sharpe", "Sharpe ratio by window length", "Sharpe ratio (annualised)",
+                false, Summary::sharpe));
+        for (int w : data.windows()) {
+            if (w != focus) {
+                windowFigures.add(charts.growth(w));
+            }
+        }
+        ReportView.Windows windows = new ReportView.Windows(findings.windows(), windowFigures);
+        return new ReportView(data.study().title(), subtitle(data, focus, charts.rollingSpan()), palette(),
+                legend(data, styles),
+                headline, HeadlineTable.of(data, styles), cost, honesty, concentration, shrinkage, windows,
+                List.of(), RunFacts.of(data));
+    }
+
+    private static String subtitle(ReportData data, int focus, int span) {
+        return "Out-of-sample period " + RunFacts.period(data.run()) + ". Charts over time show the " + focus
+                + "-period window, where the lowest realised volatility was found; trailing volatility uses "
+                + span + " periods.";
+    }
+
+    private static List<ReportView.Swatch> palette() {
+        List<ReportView.Swatch> out = new ArrayList<>();
+        for (ModelFamily f : ModelFamily.values()) {
+            out.add(new ReportView.Swatch(f.cssClass(), f.cssColour()));
+        }
+        return out;
+    }
+
+    private static List<ReportView.LegendEntry> legend(ReportData data, StyleBook styles) {
+        List<String> names = new ArrayList<>(data.run().paths().stream().map(PathResult::strategy).distinct().toList());
+        names.add(Families.MARKET);
+        List<ReportView.LegendEntry> out = new ArrayList<>();
+        for (ModelFamily f : ModelFamily.values()) {
+            List<String> members = names.stream().filter(n -> styles.family(n) == f).collect(Collectors.toList());
+            if (!members.isEmpty()) {
+                out.add(new ReportView.LegendEntry(f.label(), f.cssClass(), String.join(", ", members)));
+            }
+        }
+        return out;
+    }
+}
