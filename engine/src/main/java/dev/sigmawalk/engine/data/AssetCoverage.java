@@ -1,6 +1,8 @@
 package dev.sigmawalk.engine.data;
 
 import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Objects;
 
 /**
@@ -33,8 +35,8 @@ public record AssetCoverage(String asset, LocalDate first, LocalDate last, int p
     }
 
     /** Coverage of every asset column of {@code panel}; assets with no return at all are skipped. */
-    public static java.util.List<AssetCoverage> of(ReturnPanel panel) {
-        java.util.List<AssetCoverage> out = new java.util.ArrayList<>(panel.assetCount());
+    public static List<AssetCoverage> of(ReturnPanel panel) {
+        List<AssetCoverage> out = new ArrayList<>(panel.assetCount());
         for (int j = 0; j < panel.assetCount(); j++) {
             int first = -1;
             int last = -1;
@@ -54,6 +56,6 @@ public record AssetCoverage(String asset, LocalDate first, LocalDate last, int p
                         panel.rows() - present, gaps));
             }
         }
-        return java.util.List.copyOf(out);
+        return List.copyOf(out);
     }
 }

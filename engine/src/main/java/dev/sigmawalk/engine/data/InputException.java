@@ -55,6 +55,7 @@ public final class InputException extends RuntimeException {
         return new InputException(location, where + ": " + problem, true);
     }
 
+    /** The message is already complete; {@code preformatted} only tells this constructor apart. */
     private InputException(Location location, String message, boolean preformatted) {
         super(message);
         this.location = location;

@@ -1,6 +1,7 @@
 package dev.sigmawalk.engine.data;
 
 import java.nio.file.Path;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -48,6 +49,6 @@ final class SectorMap {
                 out.put(a, s);
             }
         }
-        return java.util.Collections.unmodifiableMap(out);
+        return Collections.unmodifiableMap(out);
     }
 }

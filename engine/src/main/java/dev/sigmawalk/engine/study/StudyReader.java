@@ -119,7 +119,7 @@ public final class StudyReader {
         EvidenceSpec d = EvidenceSpec.defaults();
         int resamples = s.has("resamples") ? s.integer("resamples", 100) : d.resamples();
         long seed = s.has("seed") ? s.wholeNumber("seed") : d.seed();
-        int block = s.has("block_length") ? s.integer("block_length", 1) : d.blockLength();
+        int block = s.has("block_length") ? s.integer("block_length", 0) : d.blockLength();
         return new EvidenceSpec(resamples, seed, block);
     }
 }

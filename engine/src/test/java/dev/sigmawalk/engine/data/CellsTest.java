@@ -1,0 +1,58 @@
+package dev.sigmawalk.engine.data;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import java.time.LocalDate;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import org.junit.jupiter.api.Test;
+
+/** Single cells: what counts as a number, a date or a missing value. */
+class CellsTest {
+    private static final Path FILE = Path.of("assets.csv");
+
+    /** Java's shortest round-trip text of a finite double parses back to the same bits. */
+    @Property(tries = 500)
+    void finiteDouble_roundTripsThroughItsText(@ForAll double v) {
+        if (Double.isFinite(v)) {
+            assertEquals(Double.doubleToLongBits(v), Double.doubleToLongBits(Cells.number(Double.toString(v), FILE, 2, "A")));
+        }
+    }
+
+    @Test
+    void decimalsAndExponents_areNumbers() {
+        assertEquals(0.0123, Cells.number("0.0123", FILE, 2, "A"), 0.0);
+        assertEquals(-0.5, Cells.number("-.5", FILE, 2, "A"), 0.0);
+        assertEquals(12.0, Cells.number("+1.2e1", FILE, 2, "A"), 0.0);
+        assertEquals(7.0, Cells.number("7.", FILE, 2, "A"), 0.0);
+        assertTrue(Double.isNaN(Cells.number("", FILE, 2, "A")), "empty cell is missing");
+    }
+
+    @Test
+    void wordsPercentAndThousandsSeparators_areNotNumbers() {
+        for (String bad : new String[] {"NaN", "Infinity", "n/a", "1,5", "2%", "1e", "--1", ".", "0x10", "1e5.5", "1d"}) {
+            InputException e = assertThrows(InputException.class, () -> Cells.number(bad, FILE, 9, "A07"), bad);
+            assertEquals("assets.csv line 9, column 'A07': '" + bad + "' is not a number; expected a decimal such as"
+                    + " 0.0123 or an empty cell", e.getMessage());
+        }
+    }
+
+    @Test
+    void overflow_isNotFinite() {
+        InputException e = assertThrows(InputException.class, () -> Cells.number("1e400", FILE, 3, "A"));
+        assertTrue(e.getMessage().endsWith("'1e400' is not a finite number"), e.getMessage());
+    }
+
+    @Test
+    void onlyIsoDates_areDates() {
+        assertEquals(LocalDate.of(2024, 2, 29), Cells.date("2024-02-29", FILE, 2, "date"));
+        for (String bad : new String[] {"01/02/2020", "2020-1-31", "20200131", "2020-01-31T00:00", "31.01.2020"}) {
+            InputException e = assertThrows(InputException.class, () -> Cells.date(bad, FILE, 4, "date"), bad);
+            assertTrue(e.getMessage().startsWith("assets.csv line 4, column 'date': '" + bad + "' is not an ISO-8601 date"),
+                    e.getMessage());
+        }
+    }
+}
