@@ -1,5 +1,7 @@
 package dev.sigmawalk.engine.model;
 
+import dev.sigmawalk.engine.moments.CrossProducts;
+
 /**
  * Sample moments of one estimation window's excess returns, computed once and shared by every
  * model that uses them. Divisors are L-1 (unbiased), as in METHODS §3. Arrays are owned by this
@@ -30,8 +32,10 @@ public record WindowMoments(int assets, int length, double[] mean, double market
     }
 
     /**
-     * Computes the moments directly from a window (two passes: means, then centred
-     * cross-products of the upper triangle, mirrored). O(L n²).
+     * Computes the moments directly from a window in two passes: the means, then the centred
+     * cross-products S = 1/(L-1) Σ_t (x_t - x̄)(x_t - x̄)' of the upper triangle (mirrored),
+     * s_im and s_mm the same way. O(L n²), through the cache-blocked
+     * {@link CrossProducts#accumulate} kernel. Non-finite input gives non-finite moments.
      */
     public static WindowMoments of(EstimationWindow w) {
         int n = w.assetCount();
@@ -52,30 +56,20 @@ public record WindowMoments(int assets, int length, double[] mean, double market
             mean[i] /= len;
         }
         double[] centred = new double[len * n];
-        double[] mc = new double[len];
-        for (int t = 0; t < len; t++) {
-            int base = t * n;
-            for (int i = 0; i < n; i++) {
-                centred[base + i] = x[base + i] - mean[i];
-            }
-            mc[t] = m[t] - mMean;
-        }
         double smm = 0;
         double[] sim = new double[n];
-        double[] s = new double[n * n];
         for (int t = 0; t < len; t++) {
             int base = t * n;
-            double mt = mc[t];
+            double mt = m[t] - mMean;
             smm += mt * mt;
             for (int i = 0; i < n; i++) {
-                double xi = centred[base + i];
+                double xi = x[base + i] - mean[i];
+                centred[base + i] = xi;
                 sim[i] += xi * mt;
-                int row = i * n;
-                for (int j = i; j < n; j++) {
-                    s[row + j] += xi * centred[base + j];
-                }
             }
         }
+        double[] s = new double[n * n];
+        CrossProducts.accumulate(centred, centred, len, n, s);
         double div = len - 1.0;
         smm /= div;
         for (int i = 0; i < n; i++) {

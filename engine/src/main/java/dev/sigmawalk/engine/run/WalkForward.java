@@ -6,6 +6,7 @@ import dev.sigmawalk.engine.model.Allocator;
 import dev.sigmawalk.engine.model.Decision;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.model.StrategyDefinition;
+import dev.sigmawalk.engine.moments.RunningMoments;
 import dev.sigmawalk.engine.timeline.Schedule;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -25,7 +26,9 @@ import java.util.concurrent.atomic.AtomicInteger;
  * The walk-forward loop. For each window length (in parallel, one thread per length), at each
  * rebalance τ it builds one estimation window from rows τ−L+1..τ, lets every strategy decide on
  * that same window (so the window's moments are computed once and shared), then holds each
- * strategy's portfolio over the rows up to the next rebalance.
+ * strategy's portfolio over the rows up to the next rebalance. The moments come from running
+ * sums per window length ({@link RunningMoments}), moved from one rebalance to the next by
+ * adding and removing rows.
  *
  * <p>Every path is computed by one thread in date order and written into a slot fixed by study
  * order, so the result does not depend on the number of threads.
@@ -140,10 +143,13 @@ public final class WalkForward<T> {
                     schedule.outOfSampleRows());
         }
         List<T> probed = new ArrayList<>();
+        // One set of running sums per window length, owned by this thread and moved forward in
+        // date order, so the moments do not depend on the number of threads.
+        RunningMoments running = new RunningMoments(panel, length, RunningMoments.DEFAULT_REFRESH_EVERY);
         int firstHeld = schedule.firstRebalance() + 1;
         for (int j = 0; j < schedule.count(); j++) {
             int tau = schedule.rebalanceRow(j);
-            EstimationWindow window = builder.build(tau, length);
+            EstimationWindow window = builder.build(tau, length, running);
             if (probe != null) {
                 probed.add(probe.probe(window));
             }

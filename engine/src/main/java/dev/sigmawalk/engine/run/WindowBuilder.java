@@ -2,9 +2,12 @@ package dev.sigmawalk.engine.run;
 
 import dev.sigmawalk.engine.data.ReturnPanel;
 import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.model.WindowMoments;
+import dev.sigmawalk.engine.moments.RunningMoments;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Supplier;
 
 /**
  * Cuts estimation windows out of a panel (METHODS §2-§3): an asset is eligible at τ for window L
@@ -45,8 +48,23 @@ final class WindowBuilder {
         return Arrays.copyOf(out, count);
     }
 
-    /** The window of length L ending at row τ, over the eligible assets. */
+    /**
+     * The window of length L ending at row τ, over the eligible assets; its moments are computed
+     * from its own rows when a model first asks.
+     */
     EstimationWindow build(int tau, int length) {
+        return build(tau, length, null);
+    }
+
+    /**
+     * The window of length L ending at row τ, whose moments come from the running sums of its
+     * window length: they are moved to τ when a model first asks. The sums must not move past τ
+     * before then (the walk-forward loop finishes a rebalance before it builds the next window).
+     *
+     * @param running the running sums for this window length, or {@code null} to compute the
+     *     moments from the window's own rows
+     */
+    EstimationWindow build(int tau, int length, RunningMoments running) {
         int[] cols = eligible(tau, length);
         int n = cols.length;
         int all = panel.assetCount();
@@ -68,6 +86,19 @@ final class WindowBuilder {
         for (int c : cols) {
             ids.add(panel.assets().get(c));
         }
-        return new EstimationWindow(panel.date(tau), tau, ids, cols, x, m, panel.periodsPerYear(), null);
+        Supplier<WindowMoments> source = running == null ? null : () -> momentsAt(running, tau, length, cols);
+        return new EstimationWindow(panel.date(tau), tau, ids, cols, x, m, panel.periodsPerYear(), source);
+    }
+
+    private static WindowMoments momentsAt(RunningMoments running, int tau, int length, int[] cols) {
+        if (running.length() != length) {
+            throw new IllegalStateException("running sums of window " + running.length() + " asked for window " + length);
+        }
+        if (running.endRow() > tau) {
+            throw new IllegalStateException("moments of the window ending at row " + tau
+                    + " asked after the running sums moved on to row " + running.endRow());
+        }
+        running.moveTo(tau);
+        return running.snapshot(cols);
     }
 }

@@ -1,0 +1,196 @@
+package dev.sigmawalk.engine.moments;
+
+import dev.sigmawalk.engine.data.ReturnPanel;
+import dev.sigmawalk.engine.model.WindowMoments;
+import java.util.Arrays;
+
+/**
+ * Sums of one window length's excess returns over every panel column, moved forward from one
+ * rebalance to the next by adding the new rows and removing the old ones: k·N² work a move of k
+ * rows instead of L·N² for a fresh window.
+ *
+ * <p>Kept in shifted form, with a per-column shift c (the column means of the window at the last
+ * full computation): s = Σ_t d_t and D = Σ_t d_t d_t' (upper triangle) with d_t = x_t − c, the
+ * market as the last column. The moments follow from
+ * S = (D − s s'/L) / (L − 1) and x̄ = c + s/L. Because c stays close to x̄, s/L is small and
+ * the subtraction does not cancel catastrophically, which the textbook one-pass form
+ * Σx x' − L x̄ x̄' does when means are large against standard deviations.
+ *
+ * <p>Rounding error grows with each move, so the sums are rebuilt from the window's rows (with a
+ * fresh shift) after {@code refreshEvery} moves, when a move is longer than half the window, and
+ * when a column's mean has wandered so far from its shift that s_i²/L exceeds half of D_ii (the
+ * point where the subtraction starts to lose more than one bit).
+ *
+ * <p>A missing return counts as 0 in the sums. An asset is only handed to a model when it has a
+ * return in every row of the window, and then its sums are exactly those of its returns.
+ *
+ * <p>Only rows at or before the current end row are ever read, so no later row can reach the
+ * moments. Not thread-safe: one instance belongs to one walk-forward thread.
+ */
+public final class RunningMoments {
+    /** The rebuild interval the walk-forward loop uses. */
+    public static final int DEFAULT_REFRESH_EVERY = 20;
+    /** Rebuild when s_i²/L exceeds this fraction of D_ii (see the class comment). */
+    private static final double CANCELLATION_LIMIT = 0.5;
+
+    private final ShiftedRows rows;
+    private final int length;
+    private final int refreshEvery;
+    private final int width;
+    private double[] shift;
+    private final double[] sum;
+    private final double[] cross;
+    private int endRow = -1;
+    private int movesSinceRefresh;
+    private int refreshes;
+
+    /**
+     * @param panel the returns
+     * @param length L, the window length (≥ 2)
+     * @param refreshEvery rebuild the sums from the rows after this many incremental moves (≥ 1)
+     */
+    public RunningMoments(ReturnPanel panel, int length, int refreshEvery) {
+        if (!(length >= 2)) {
+            throw new IllegalArgumentException("window length (" + length + ") must be >= 2");
+        }
+        if (!(refreshEvery >= 1)) {
+            throw new IllegalArgumentException("refreshEvery (" + refreshEvery + ") must be >= 1");
+        }
+        this.rows = new ShiftedRows(panel);
+        this.length = length;
+        this.refreshEvery = refreshEvery;
+        this.width = rows.width();
+        this.sum = new double[width];
+        this.cross = new double[width * width];
+    }
+
+    /** L. */
+    public int length() {
+        return length;
+    }
+
+    /** τ of the window the sums describe, or −1 before the first move. */
+    public int endRow() {
+        return endRow;
+    }
+
+    /** How many times the sums were rebuilt from the rows, the first build included. */
+    public int refreshes() {
+        return refreshes;
+    }
+
+    /**
+     * Moves the window to end at row τ (rows τ−L+1..τ).
+     *
+     * @throws IllegalArgumentException when τ is before the current end row or the window would
+     *     start before row 0
+     */
+    public void moveTo(int tau) {
+        if (!(tau >= endRow)) {
+            throw new IllegalArgumentException("window end row (" + tau + ") must not go back from " + endRow);
+        }
+        if (!(tau - length + 1 >= 0)) {
+            throw new IllegalArgumentException("window of " + length + " rows ending at row " + tau
+                    + " starts before row 0");
+        }
+        if (tau == endRow) {
+            return;
+        }
+        int step = tau - endRow;
+        if (endRow < 0 || movesSinceRefresh >= refreshEvery || 2 * step > length) {
+            refresh(tau);
+        } else {
+            slide(tau, step);
+            if (cancelling()) {
+                refresh(tau);
+            }
+        }
+    }
+
+    private void refresh(int tau) {
+        int first = tau - length + 1;
+        shift = rows.windowMeans(first, tau);
+        double[] d = new double[length * width];
+        Arrays.fill(sum, 0.0);
+        for (int t = 0; t < length; t++) {
+            rows.fill(first + t, shift, 1.0, d, t * width, sum);
+        }
+        Arrays.fill(cross, 0.0);
+        CrossProducts.accumulate(d, d, length, width, cross);
+        endRow = tau;
+        movesSinceRefresh = 0;
+        refreshes++;
+    }
+
+    /** Adds rows endRow+1..τ and removes the same number of oldest rows. */
+    private void slide(int tau, int step) {
+        int firstOld = endRow - length + 1;
+        double[] left = new double[2 * step * width];
+        double[] right = new double[2 * step * width];
+        for (int k = 0; k < step; k++) {
+            rows.fill(endRow + 1 + k, shift, 1.0, left, k * width, sum);
+            rows.fill(firstOld + k, shift, -1.0, left, (step + k) * width, sum);
+        }
+        // Right factor: the same rows unsigned, so the removed rows contribute −d d'.
+        System.arraycopy(left, 0, right, 0, step * width);
+        for (int k = step * width; k < 2 * step * width; k++) {
+            right[k] = -left[k];
+        }
+        CrossProducts.accumulate(left, right, 2 * step, width, cross);
+        endRow = tau;
+        movesSinceRefresh++;
+    }
+
+    private boolean cancelling() {
+        for (int i = 0; i < width; i++) {
+            double dii = cross[i * width + i];
+            if (dii > 0 && sum[i] * sum[i] / length > CANCELLATION_LIMIT * dii) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * The moments of the current window over the given panel columns (ascending), in their
+     * order: x̄_i = c_i + s_i/L, S_ij = (D_ij − s_i s_j / L)/(L − 1), and the same for the market
+     * pair. A variance that rounding pushes below 0 (a constant column) is reported as 0.
+     *
+     * @param columns panel columns, strictly ascending, each with a return in every window row
+     */
+    public WindowMoments snapshot(int[] columns) {
+        if (endRow < 0) {
+            throw new IllegalStateException("no window yet: call moveTo first");
+        }
+        int n = columns.length;
+        int mk = rows.marketIndex();
+        for (int a = 0; a < n; a++) {
+            if (!(columns[a] >= 0 && columns[a] < mk) || (a > 0 && columns[a] <= columns[a - 1])) {
+                throw new IllegalArgumentException("columns must be ascending panel columns in [0, " + mk
+                        + "); found " + columns[a] + " at position " + a);
+            }
+        }
+        double len = length;
+        double div = length - 1.0;
+        double[] mean = new double[n];
+        double[] sim = new double[n];
+        double[] s = new double[n * n];
+        double sm = sum[mk];
+        for (int a = 0; a < n; a++) {
+            int ci = columns[a];
+            double si = sum[ci];
+            mean[a] = shift[ci] + si / len;
+            sim[a] = (cross[ci * width + mk] - si * sm / len) / div;
+            int rowBase = ci * width;
+            for (int b = a; b < n; b++) {
+                int cj = columns[b];
+                double v = (cross[rowBase + cj] - si * sum[cj] / len) / div;
+                s[a * n + b] = v;
+                s[b * n + a] = v;
+            }
+            s[a * n + a] = Math.max(0.0, s[a * n + a]);
+        }
+        double smm = Math.max(0.0, (cross[mk * width + mk] - sm * sm / len) / div);
+        return new WindowMoments(n, length, mean, shift[mk] + sm / len, smm, sim, s);
+    }
+}
