@@ -5,7 +5,7 @@ import java.util.Objects;
 /**
  * Exact primal active-set solver for {@link QuadraticProblem}: minimise ½ w'Qw − c'w subject to
  * Σ w = 1 and lower ≤ w ≤ upper, with Q positive semi-definite (Nocedal & Wright, Numerical
- * Optimization, 2nd ed., Algorithm 16.3).
+ * Optimization, 2nd ed., Algorithm 16.3; cited from memory).
  *
  * <p>Each iteration holds a working set of weights pinned at a bound; the others are free. With
  * the Cholesky factor of the free block (shifted, see {@link WorkingSet}) the step to the
@@ -20,7 +20,9 @@ import java.util.Objects;
  * <p>Semi-definite Q: when releasing a weight would make the shifted free block singular, the
  * objective is linear (not curved) along the null direction d that keeps the budget, and it
  * decreases along d at the rate of the negative multiplier, so the solver moves along d until a
- * bound stops it (Nocedal & Wright §16.5, the inertia-controlling treatment). With no bound in
+ * bound stops it (the usual treatment of a singular reduced Hessian in inertia-controlling
+ * active-set methods, as in Gill, Murray &amp; Wright, Practical Optimization; cited from memory).
+ * With no bound in
  * the way the problem is unbounded below and the outcome is {@link SolveOutcome.Failed}.
  *
  * <p>The final partition is polished (the free weights re-solved from a fresh factor) and the

@@ -4,7 +4,9 @@ package dev.sigmawalk.strategies.optimize;
  * An updatable Cholesky factor A = LL' of a symmetric positive definite block of a larger matrix,
  * held in a preallocated row-major lower triangle. Appending a row and column costs O(k²) (one
  * forward substitution); removing one costs O(k²) (row shift plus Givens rotations that restore
- * the triangle, Golub & Van Loan, Matrix Computations, 4th ed., §6.5.4); solves cost O(k²).
+ * the triangle, the standard downdate for a deleted row and column as described in Golub &amp;
+ * Van Loan, Matrix Computations, on updating matrix factorizations; cited from memory); solves
+ * cost O(k²).
  * Factoring a k×k block by k appends is the ordinary row-oriented Cholesky, k³/3 flops.
  */
 final class CholeskyFactor {

@@ -18,18 +18,21 @@ import java.util.OptionalDouble;
  * <pre>
  *   w_i = clamp((a − c β_i)/d_i, lower_i, upper_i),   a = ν,
  * </pre>
- * so the partition splits into zero (or lower), free and capped weights. Derivation: for a fixed
- * c, a(c) solves Σ w_i = 1 ({@link LevelSolver}, O(n log n)); h(c) = s Σ β_i w_i(a(c), c) − c is
- * strictly decreasing (β'w(c) is non-increasing in the linear term's coefficient c), so its root
- * is found by bisection on c. The partition at the root then gives a and c exactly from the 2×2
- * system, with A0 = Σ_F 1/d, A1 = Σ_F β/d, A2 = Σ_F β²/d, S_B = Σ of pinned weights,
+ * so the partition splits into zero (or lower), free and capped weights. Given a partition, a
+ * and c follow exactly from a 2×2 linear system, with A0 = Σ_F 1/d, A1 = Σ_F β/d, A2 = Σ_F β²/d, S_B = Σ of pinned weights,
  * M_B = Σ of β times pinned weights:
  * <pre>
  *   c = s (a A1 + M_B) / (1 + s A2),
  *   a = (1 − S_B + s A1 M_B / (1 + s A2)) / (A0 − s A1² / (1 + s A2)).
  * </pre>
- * With lower = 0 and no upper bound this is the threshold rule: the held set is a prefix of the
- * assets sorted by β. Upper bounds tighter than 1 − Σ_{j≠i} lower_j are implied by the budget, so
+ * The partition is found by iterating: classify every weight by its clamp under the current
+ * (a, c), re-solve the 2×2 system, stop when the partition reproduces itself (then every KKT
+ * condition holds); O(n) per round and a few rounds in practice. Should it not settle, a slower
+ * but certain search takes over: for a fixed c, a(c) solves Σ w_i = 1 ({@link LevelSolver},
+ * O(n log n)), and h(c) = s Σ β_i w_i(a(c), c) − c is strictly decreasing (β'w(c) is
+ * non-increasing in the linear term's coefficient c), so bisection on c brackets the root and
+ * its partition. With lower = 0 and no upper bound the held set is the threshold rule's: a
+ * prefix of the assets sorted by β. Upper bounds tighter than 1 − Σ_{j≠i} lower_j are implied by the budget, so
  * they are replaced by that value (a redundant constraint does not move the optimum).
  *
  * <p>The result is verified against the KKT conditions in O(n); when the fast path cannot
@@ -41,6 +44,11 @@ public final class SingleFactorMinVariance {
     private static final int MAX_BISECTIONS = 200;
     /** Relative slack for a free weight computed just beyond its bound (then clipped). */
     private static final double CLIP_SLACK = 1e-12;
+    /** Rounds of the partition iteration before bisection takes over. */
+    private static final int MAX_PARTITION_ROUNDS = 50;
+    private static final byte LOW = 0;
+    private static final byte FREE = 1;
+    private static final byte CAPPED = 2;
 
     private final SolverSettings settings;
 
@@ -98,6 +106,16 @@ public final class SingleFactorMinVariance {
      * cannot be certified (including infeasible bounds, which {@link #solve} reports).
      */
     public Optional<SolveOutcome.Optimal> threshold(SingleFactorForm form, double[] lower, double[] upper) {
+        return certified(form, lower, upper, true);
+    }
+
+    /** The bisection search alone, without the partition iteration (so tests can reach it). */
+    Optional<SolveOutcome.Optimal> thresholdByBisection(SingleFactorForm form, double[] lower, double[] upper) {
+        return certified(form, lower, upper, false);
+    }
+
+    private Optional<SolveOutcome.Optimal> certified(SingleFactorForm form, double[] lower, double[] upper,
+                                                     boolean iterate) {
         double s = form.factorVariance();
         double[] beta = form.loadings();
         double[] d = form.specificVariances();
@@ -109,16 +127,14 @@ public final class SingleFactorMinVariance {
         if (cap == null) {
             return Optional.empty();
         }
-        OptionalDouble root = rootOfC(s, beta, d, lower, cap);
-        if (root.isEmpty()) {
+        double[] levels = iterate ? partitionIteration(s, beta, d, lower, cap) : null;
+        if (levels == null) {
+            levels = bisection(s, beta, d, lower, cap);
+        }
+        if (levels == null) {
             return Optional.empty();
         }
-        double c = root.getAsDouble();
-        OptionalDouble a = level(c, beta, d, lower, cap);
-        if (a.isEmpty()) {
-            return Optional.empty();
-        }
-        double[] w = exactFromPartition(s, beta, d, lower, cap, a.getAsDouble(), c);
+        double[] w = exactFromPartition(s, beta, d, lower, cap, levels[0], levels[1]);
         if (w == null) {
             return Optional.empty();
         }
@@ -146,6 +162,80 @@ public final class SingleFactorMinVariance {
             cap[i] = Math.min(upper[i], 1 - lowSum + lower[i]);
         }
         return cap;
+    }
+
+    /**
+     * Partition iteration (a semismooth Newton method on the piecewise-linear KKT map): from the
+     * all-free (a, c), classify each weight by its clamp, solve the 2×2 system for that
+     * partition, and repeat until the partition reproduces itself, which is then exactly the KKT
+     * partition. O(n) per round; usually a few rounds. Returns {a, c}, or null when it has not
+     * settled after {@link #MAX_PARTITION_ROUNDS} rounds (it can cycle; bisection then decides).
+     */
+    private static double[] partitionIteration(double s, double[] beta, double[] d, double[] lower, double[] cap) {
+        int n = beta.length;
+        byte[] partition = new byte[n];
+        Arrays.fill(partition, FREE);
+        for (int round = 0; round < MAX_PARTITION_ROUNDS; round++) {
+            double[] levels = solvePartition(s, beta, d, lower, cap, partition);
+            if (levels == null) {
+                return null;
+            }
+            byte[] next = classify(beta, d, lower, cap, levels[0], levels[1]);
+            if (Arrays.equals(next, partition)) {
+                return levels;
+            }
+            partition = next;
+        }
+        return null;
+    }
+
+    /** Each weight's side under (a, c): LOW when the clamp's argument is at or below lower, CAP at or above cap. */
+    private static byte[] classify(double[] beta, double[] d, double[] lower, double[] cap, double a, double c) {
+        byte[] partition = new byte[beta.length];
+        for (int i = 0; i < beta.length; i++) {
+            double raw = (a - c * beta[i]) / d[i];
+            partition[i] = raw <= lower[i] ? LOW : raw >= cap[i] ? CAPPED : FREE;
+        }
+        return partition;
+    }
+
+    /** {a, c} from the 2×2 system of a partition (see the class description); null when no weight is free. */
+    private static double[] solvePartition(double s, double[] beta, double[] d, double[] lower, double[] cap,
+                                           byte[] partition) {
+        double a0 = 0;
+        double a1 = 0;
+        double a2 = 0;
+        double pinnedSum = 0;
+        double pinnedExposure = 0;
+        for (int i = 0; i < beta.length; i++) {
+            if (partition[i] == FREE) {
+                a0 += 1 / d[i];
+                a1 += beta[i] / d[i];
+                a2 += beta[i] * beta[i] / d[i];
+            } else {
+                double w = partition[i] == LOW ? lower[i] : cap[i];
+                pinnedSum += w;
+                pinnedExposure += beta[i] * w;
+            }
+        }
+        if (a0 == 0) {
+            return null;
+        }
+        double k = 1 + s * a2;
+        double level = (1 - pinnedSum + s * a1 * pinnedExposure / k) / (a0 - s * a1 * a1 / k);
+        double slope = s * (level * a1 + pinnedExposure) / k;
+        return Double.isFinite(level) && Double.isFinite(slope) ? new double[] {level, slope} : null;
+    }
+
+    /** {a, c} by bisection on c and the exact level a(c); null when a level cannot be found. */
+    private static double[] bisection(double s, double[] beta, double[] d, double[] lower, double[] cap) {
+        OptionalDouble root = rootOfC(s, beta, d, lower, cap);
+        if (root.isEmpty()) {
+            return null;
+        }
+        double c = root.getAsDouble();
+        OptionalDouble a = level(c, beta, d, lower, cap);
+        return a.isPresent() ? new double[] {a.getAsDouble(), c} : null;
     }
 
     /** Bisection for the root of h(c) = s β'w(c) − c on [s·min β'w, s·max β'w]. */

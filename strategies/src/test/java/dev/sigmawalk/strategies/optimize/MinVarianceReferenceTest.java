@@ -78,6 +78,18 @@ class MinVarianceReferenceTest {
         assertWeights(ReferenceMatrices.minVarianceWeights(SINGLE_INDEX_BOUNDED), out.get(), BOUNDED_TOLERANCE);
     }
 
+    /** The bisection search of the single-factor path, same reference: polished cvxopt.solvers.qp. */
+    @Test
+    void singleIndexBounded_bisection_matchesPolishedCvxopt() {
+        double[] lo = new double[n];
+        double[] hi = new double[n];
+        Arrays.fill(hi, 0.25);
+        Optional<SolveOutcome.Optimal> out = new SingleFactorMinVariance(settings)
+                .thresholdByBisection(ReferenceMatrices.singleIndexForm(), lo, hi);
+        assertTrue(out.isPresent(), "bisection certifies its answer");
+        assertWeights(ReferenceMatrices.minVarianceWeights(SINGLE_INDEX_BOUNDED), out.get(), BOUNDED_TOLERANCE);
+    }
+
     /** The sample optimum under [0, 0.25] holds A01 at the cap and A07..A12 at zero (same reference). */
     @Test
     void sampleBounded_activeSet_reportsCappedAndZeroSides() {

@@ -62,10 +62,15 @@ class SolverPropertiesTest {
         double[] hi = new double[n];
         Arrays.fill(lo, random.nextBoolean() ? 0 : -0.05);
         Arrays.fill(hi, cap);
-        Optional<SolveOutcome.Optimal> fast = new SingleFactorMinVariance(settings).threshold(form, lo, hi);
-        assertTrue(fast.isPresent(), "threshold rule certifies its answer");
+        SingleFactorMinVariance fastPaths = new SingleFactorMinVariance(settings);
+        Optional<SolveOutcome.Optimal> fast = fastPaths.threshold(form, lo, hi);
+        Optional<SolveOutcome.Optimal> bisection = fastPaths.thresholdByBisection(form, lo, hi);
+        assertTrue(fast.isPresent(), "partition iteration certifies its answer");
+        assertTrue(bisection.isPresent(), "bisection certifies its answer");
         QuadraticProblem dense = new QuadraticProblem(n, SingleFactorMinVariance.dense(form), new double[n], lo, hi);
-        MinVarianceReferenceTest.assertWeights(fast.get().weights(), solver.solve(dense), SAME_OPTIMUM);
+        SolveOutcome general = solver.solve(dense);
+        MinVarianceReferenceTest.assertWeights(fast.get().weights(), general, SAME_OPTIMUM);
+        MinVarianceReferenceTest.assertWeights(bisection.get().weights(), general, SAME_OPTIMUM);
     }
 
     @Property(tries = 40)
