@@ -4,7 +4,7 @@ import java.util.Objects;
 
 /**
  * Exact primal active-set solver for {@link QuadraticProblem}: minimise ½ w'Qw − c'w subject to
- * Σ w = 1 and lower ≤ w ≤ upper, with Q positive semi-definite (Nocedal & Wright, Numerical
+ * Σ w = 1 and lower ≤ w ≤ upper, with Q positive semi-definite (Nocedal &amp; Wright, Numerical
  * Optimization, 2nd ed., Algorithm 16.3; cited from memory).
  *
  * <p>Each iteration holds a working set of weights pinned at a bound; the others are free. With
@@ -68,7 +68,7 @@ public final class ActiveSetSolver {
         return new Iteration(s, settings).run();
     }
 
-    /** Infeasible when Σ lower > 1 or Σ upper < 1; null otherwise. */
+    /** Infeasible when Σ lower &gt; 1 or Σ upper &lt; 1; null otherwise. */
     static SolveOutcome checkBudgetReachable(QuadraticProblem p) {
         double lowSum = 0;
         double highSum = 0;

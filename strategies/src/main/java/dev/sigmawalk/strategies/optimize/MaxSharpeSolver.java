@@ -181,7 +181,7 @@ public final class MaxSharpeSolver {
         return new QuadraticProblem(n, q, mu, lower, upper);
     }
 
-    /** y = (y_1..y_n, κ) from ojAlgo, returned as w = y/κ; null unless OPTIMAL with κ > 0. */
+    /** y = (y_1..y_n, κ) from ojAlgo, returned as w = y/κ; null unless OPTIMAL with κ &gt; 0. */
     private static double[] solveTransformed(double[] sigma, double[] mu, double[] lower, double[] upper) {
         int n = mu.length;
         int m = n + 1;
