@@ -117,17 +117,12 @@ final class CsvSource implements AutoCloseable {
         try {
             return parser.parseNext();
         } catch (TextParsingException e) {
-            throw new InputException(new InputException.Location(file, (int) e.getLineIndex(), null),
-                    "cannot read the CSV here (" + firstLine(e.getMessage()) + ")");
+            // The parser counts lines from 0.
+            throw new InputException(new InputException.Location(file, (int) e.getLineIndex() + 1, null),
+                    "cannot read this row as CSV; expected no more cells than the header ("
+                            + (header == null ? "first row" : header.size() + " cells")
+                            + "), closed quotes and cells under " + MAX_CHARS_PER_CELL + " characters");
         }
-    }
-
-    private static String firstLine(String message) {
-        if (message == null) {
-            return "malformed CSV";
-        }
-        int cut = message.indexOf('\n');
-        return cut < 0 ? message : message.substring(0, cut).trim();
     }
 
     /** Strips surrounding whitespace and a stray byte-order mark; cheap when there is none. */
