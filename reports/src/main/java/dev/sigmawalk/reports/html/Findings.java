@@ -103,7 +103,7 @@ final class Findings {
             return sentence + ".";
         }
         return sentence + "; the most spread out was " + name(wide) + ", with "
-                + Formats.oneDecimal(facts.get(wide).meanEffectiveHoldings()) + ".";
+                + Formats.oneDecimal(facts.get(wide).meanEffectiveHoldings()) + " effective holdings.";
     }
 
     /** Empty when no path reports a shrinkage intensity. */

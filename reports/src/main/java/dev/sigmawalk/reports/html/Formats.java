@@ -11,7 +11,9 @@ import java.util.OptionalDouble;
  *   <li>{@link #percent}: a fraction times 100 with two decimals and " %", 0.1234 → "12.34 %";</li>
  *   <li>{@link #ratio}: two decimals, 0.857 → "0.86";</li>
  *   <li>{@link #basisPoints}: whole numbers without decimals, others with up to two, "10 bp";</li>
- *   <li>{@link #oneDecimal}: one decimal, for averages of counts, 7.25 → "7.3".</li>
+ *   <li>{@link #oneDecimal}: one decimal, for averages of counts, 7.25 → "7.3";</li>
+ *   <li>{@link #pValue}: three decimals, "&lt; 0.001" below 0.001, 0.0342 → "0.034";</li>
+ *   <li>{@link #count}: a whole number with ',' between thousands, 1325 → "1,325".</li>
  * </ul>
  * Rounding is half-up on the decimal value as printed by {@link String#format}.
  */
@@ -40,6 +42,17 @@ public final class Formats {
 
     public static String oneDecimal(double value) {
         return Double.isFinite(value) ? String.format(Locale.ROOT, "%.1f", value) : NOT_APPLICABLE;
+    }
+
+    public static String pValue(double p) {
+        if (!Double.isFinite(p)) {
+            return NOT_APPLICABLE;
+        }
+        return p < 0.001 ? "< 0.001" : String.format(Locale.ROOT, "%.3f", p);
+    }
+
+    public static String count(long n) {
+        return String.format(Locale.ROOT, "%,d", n);
     }
 
     public static String basisPoints(double bps) {

@@ -14,9 +14,12 @@ import java.util.Objects;
  * @param run the walk-forward result
  * @param summaries one row per path plus the {@code market} row, as in {@code summary.csv}
  * @param record facts about the run the results do not carry
+ * @param evidence optional statistical evidence; {@link ReportEvidence#none()} for none
  */
-public record ReportData(Study study, RunResult<?> run, List<Summary> summaries, RunRecord record) {
+public record ReportData(Study study, RunResult<?> run, List<Summary> summaries, RunRecord record,
+                         ReportEvidence evidence) {
     public ReportData {
+        Objects.requireNonNull(evidence, "evidence");
         Objects.requireNonNull(study, "study");
         Objects.requireNonNull(run, "run");
         summaries = List.copyOf(summaries);
@@ -30,6 +33,11 @@ public record ReportData(Study study, RunResult<?> run, List<Summary> summaries,
         for (PathResult p : run.paths()) {
             find(summaries, p.strategy(), p.window());
         }
+    }
+
+    /** A report without statistical evidence. */
+    public ReportData(Study study, RunResult<?> run, List<Summary> summaries, RunRecord record) {
+        this(study, run, summaries, record, ReportEvidence.none());
     }
 
     /** The summary row of a path. */

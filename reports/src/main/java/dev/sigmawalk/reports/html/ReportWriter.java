@@ -91,7 +91,7 @@ public final class ReportWriter {
         return new ReportView(data.study().title(), subtitle(data, focus, charts.rollingSpan()), palette(),
                 legend(data, styles),
                 headline, HeadlineTable.of(data, styles), cost, honesty, concentration, shrinkage, windows,
-                List.of(), RunFacts.of(data));
+                new EvidenceSections(data, maker).all(), RunFacts.of(data));
     }
 
     private static String subtitle(ReportData data, int focus, int span) {

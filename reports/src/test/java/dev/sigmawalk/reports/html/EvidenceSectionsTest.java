@@ -1,0 +1,94 @@
+package dev.sigmawalk.reports.html;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.jsoup.select.Elements;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class EvidenceSectionsTest {
+
+    private static Document render(ReportData data, Path dir) throws Exception {
+        Path out = dir.resolve("report.html");
+        new ReportWriter().write(data, out, dir.resolve("charts"));
+        return Jsoup.parse(Files.readString(out, StandardCharsets.UTF_8));
+    }
+
+    /**
+     * Input-list sizes: for n = 50 the full model needs 50 + 50·51/2 = 1 325 estimates and the
+     * single-index model 3·50 + 2 = 152 (common practice, no published source; the check values'
+     * README lists the same), 1 − 152/1325 = 88.53 % fewer.
+     */
+    @Test
+    void givenEvidence_rendersItsThreeSections(@TempDir Path dir) throws Exception {
+        ReportData data = EvidenceFixture.data();
+        Document doc = render(data, dir);
+        for (String id : new String[] {"single-index-check", "differences", "input-list"}) {
+            Element s = doc.getElementById(id);
+            assertNotNull(s, id);
+            assertTrue(s.selectFirst("p.answer").text().length() > 30, id);
+            assertFalse(s.select("tbody tr").isEmpty(), id + " has rows");
+        }
+        String answer = doc.getElementById("input-list").selectFirst("p.answer").text();
+        assertTrue(answer.contains("1,325") && answer.contains("152") && answer.contains("88.53 %"), answer);
+        assertFalse(doc.getElementById("single-index-check").select("figure svg path").isEmpty(), "residual chart");
+    }
+
+    /** The Sharpe ratios shown are the tests' per-period estimates times √12, two decimals. */
+    @Test
+    void differencesTable_showsAnnualisedSharpeRatiosOfTheTests(@TempDir Path dir) throws Exception {
+        ReportData data = EvidenceFixture.data();
+        Document doc = render(data, dir);
+        Elements rows = doc.getElementById("differences").select("tbody tr");
+        assertEquals(data.evidence().comparisons().size(), rows.size());
+        for (int k = 0; k < rows.size(); k++) {
+            PairComparison c = data.evidence().comparisons().get(k);
+            var t = c.sharpe().orElseThrow();
+            String expected = String.format(Locale.ROOT, "%.2f vs %.2f", Math.sqrt(12) * t.first(), Math.sqrt(12) * t.second());
+            assertEquals(expected, rows.get(k).select("td").get(3).text(), "row " + k);
+            assertEquals(c.strategy(), rows.get(k).select("td").get(0).text());
+        }
+    }
+
+    /** Counts of rejections at 5 % in the diagnostics table agree with the diagnostics given. */
+    @Test
+    void diagnosticsTable_countsRejectionsAtFivePercent(@TempDir Path dir) throws Exception {
+        ReportData data = EvidenceFixture.data();
+        Document doc = render(data, dir);
+        Elements rows = doc.getElementById("single-index-check").select("tbody tr");
+        assertEquals(data.evidence().diagnostics().size(), rows.size());
+        for (int k = 0; k < rows.size(); k++) {
+            WindowDiagnostics w = data.evidence().diagnostics().get(k);
+            long lm = w.points().stream().filter(p -> p.diagnostics().lmPValue() <= 0.05).count();
+            String expected = String.format(Locale.ROOT, "%.2f %%", 100.0 * lm / w.points().size());
+            assertEquals(expected, rows.get(k).select("td").get(4).text(), "window " + w.window());
+        }
+    }
+
+    @Test
+    void noEvidence_leavesTheSectionsOut(@TempDir Path dir) throws Exception {
+        Document doc = render(ReportFixture.data(), dir);
+        assertNull(doc.getElementById("single-index-check"));
+        assertNull(doc.getElementById("differences"));
+        assertNull(doc.getElementById("input-list"));
+    }
+
+    @Test
+    void noShrinkageStrategy_leavesTheShrinkageSectionOut(@TempDir Path dir) throws Exception {
+        Document doc = render(ReportFixture.withoutShrinkage(), dir);
+        assertNull(doc.getElementById("shrinkage"));
+        assertTrue(doc.select("nav a[href=#shrinkage]").isEmpty(), "no contents entry either");
+        assertNotNull(doc.getElementById("windows"));
+    }
+}
