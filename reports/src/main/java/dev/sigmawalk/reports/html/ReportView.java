@@ -50,7 +50,20 @@ public record ReportView(String title, String subtitle, List<Swatch> palette, Li
                           String annualCost, String rebalances, String failures) {
     }
 
-    public record Honesty(String answer, List<HonestyRow> rows, List<Figure> figures) {
+    /**
+     * @param years the year-by-year table, or empty when no strategy had a forecast in two rows of a year
+     */
+    public record Honesty(String answer, List<HonestyRow> rows, List<YearTable> years, List<Figure> figures) {
+    }
+
+    /**
+     * Realised divided by forecast volatility per calendar year.
+     *
+     * @param heading the table's heading
+     * @param headers "Year" then one column per strategy
+     * @param rows one per year
+     */
+    public record YearTable(String heading, List<String> headers, List<TextRow> rows) {
     }
 
     public record HonestyRow(String name, String cssClass, String window, String forecast, String realised,

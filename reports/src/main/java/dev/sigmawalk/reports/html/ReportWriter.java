@@ -71,7 +71,13 @@ public final class ReportWriter {
         ReportView.Headline headline = new ReportView.Headline(findings.headline(),
                 List.of(charts.growth(focus), charts.drawdown(focus), charts.rollingVolatility(focus)));
         ReportView.Cost cost = new ReportView.Cost(findings.cost(), rows.cost(), List.of(charts.turnover(focus)));
-        ReportView.Honesty honesty = new ReportView.Honesty(findings.honesty(), rows.honesty(), charts.forecasts(focus));
+        List<ReportView.TextRow> years = rows.years(focus);
+        List<ReportView.YearTable> yearTable = years.isEmpty() ? List.of()
+                : List.of(new ReportView.YearTable("Year by year, " + focus + "-period window: realised volatility "
+                        + "divided by forecast volatility (ratio; above 1, risk was understated that year)",
+                        rows.yearHeaders(focus), years));
+        ReportView.Honesty honesty = new ReportView.Honesty(findings.honesty(), rows.honesty(), yearTable,
+                charts.forecasts(focus));
         ReportView.Concentration concentration = new ReportView.Concentration(findings.concentration(),
                 rows.concentration(), List.of(charts.effectiveHoldings(focus), charts.largestWeight(focus)));
         List<ReportView.Shrinkage> shrinkage = new ArrayList<>();

@@ -150,6 +150,50 @@ class ReportWriterTest {
         assertTrue(answer.contains(pct(data.summary(best).volatility())), answer);
     }
 
+    /**
+     * The year table shows, per calendar year, realised ÷ forecast volatility as computed by the
+     * engine's VolatilityByYear: checked here for the first strategy and year by recomputing
+     * √12 · sd(R − rf) (divisor N − 1) and √12 · mean(σ̂) over that year's rows by hand.
+     */
+    @Test
+    void yearTable_showsRealisedOverForecastPerYear() {
+        Element table = doc.selectFirst("#honesty table.years");
+        assertNotNull(table, "year table");
+        PathResult first = data.paths(focusWindow()).get(0);
+        Element row = table.select("tbody tr").get(0);
+        int year = Integer.parseInt(row.select("td").get(0).text());
+        double sum = 0;
+        double sumForecast = 0;
+        int n = 0;
+        for (int t = 0; t < data.run().dates().length; t++) {
+            if (data.run().dates()[t].getYear() == year) {
+                sum += first.gross()[t] - data.run().riskFree()[t];
+                sumForecast += first.forecastVolatility()[t];
+                n++;
+            }
+        }
+        double mean = sum / n;
+        double squares = 0;
+        for (int t = 0; t < data.run().dates().length; t++) {
+            if (data.run().dates()[t].getYear() == year) {
+                double d = first.gross()[t] - data.run().riskFree()[t] - mean;
+                squares += d * d;
+            }
+        }
+        double ratio = Math.sqrt(squares / (n - 1)) / (sumForecast / n);
+        assertEquals(two(ratio), row.select("td").get(1).text(), "year " + year);
+    }
+
+    private int focusWindow() {
+        PathResult best = data.run().paths().get(0);
+        for (PathResult p : data.run().paths()) {
+            if (data.summary(p).volatility() < data.summary(best).volatility()) {
+                best = p;
+            }
+        }
+        return best.window();
+    }
+
     @Test
     void report_makesNoExternalRequestAndNeedsNoScript() {
         assertTrue(doc.select("script").isEmpty(), "no script element");
