@@ -4,9 +4,6 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.Objects;
 import java.util.Optional;
-import org.ojalgo.matrix.store.R064Store;
-import org.ojalgo.optimisation.Optimisation;
-import org.ojalgo.optimisation.convex.ConvexSolver;
 
 /**
  * Maximum Sharpe ratio with bounds: maximise μ'w / √(w'Σw) s.t. Σ w = 1, lower ≤ w ≤ upper, for a
@@ -17,15 +14,21 @@ import org.ojalgo.optimisation.convex.ConvexSolver;
  * quadratic program (Cornuejols &amp; Tütüncü, Optimization Methods in Finance, 2007, §8.2; cited
  * from memory)
  * <pre>
- *   minimise y'Σy   s.t.   μ'y = 1,   1'y = κ,   lower·κ ≤ y ≤ upper·κ,   κ ≥ 0,
+ *   minimise y'Σy   s.t.   μ'y = 1,   1'y = κ,   lower·κ ≤ y ≤ upper·κ,   κ ≥ 0.
  * </pre>
- * solved with ojAlgo's {@code ConvexSolver}, whose answer is accepted only in state OPTIMAL. It is
- * then polished: with the bounds it found active (y_B = κ b_B), the equality-constrained problem
- * in (y_F, κ) is solved exactly from its KKT system. The result is verified through the
- * equivalent mean-variance problem: w maximises the Sharpe ratio iff it solves
- * minimise ½λ w'Σw − μ'w on the same constraints with λ = μ'w / w'Σw (the two gradients differ by
- * the positive factor √(w'Σw)), checked by {@link KktCheck}. When that fails, the exact active-set
- * solver is run on that mean-variance problem to correct the partition, and the polish repeats.
+ * Once the partition (which weights sit on which bound) is known, that program restricted to its
+ * face has only equality constraints and is solved exactly ({@code TangencyFace}). The answer is
+ * verified through the equivalent mean-variance problem: w maximises the Sharpe ratio iff it
+ * solves minimise ½λ w'Σw − μ'w on the same constraints with λ = μ'w / w'Σw (the two gradients
+ * differ by the positive factor √(w'Σw)), checked by {@link KktCheck}. When the check fails, the
+ * exact active-set solver run on that mean-variance problem gives the next partition.
+ *
+ * <p>Two starting partitions are tried in turn. First the exact mean-variance optimum for the λ
+ * implied by the minimum-variance portfolio (a few exact active-set solves, milliseconds at
+ * n = 500). Should that not verify within 20 rounds, the transformed program
+ * is solved with ojAlgo's {@code ConvexSolver} ({@code TransformedProgram}; OPTIMAL only, and
+ * about 1 s at n = 100), whose active set seeds the same polish-and-verify loop. Either way the
+ * weights returned have passed the KKT check.
  */
 public final class MaxSharpeSolver {
     /** Rounds of polish and partition correction before giving up. */
@@ -45,21 +48,40 @@ public final class MaxSharpeSolver {
      * cannot sum to 1. Lower bounds must be finite for a finite answer.
      */
     public static double highestExpectedReturn(double[] mu, double[] lower, double[] upper) {
-        int n = mu.length;
         double lowSum = 0;
         double highSum = 0;
-        double value = 0;
-        for (int i = 0; i < n; i++) {
+        for (int i = 0; i < mu.length; i++) {
             lowSum += lower[i];
             highSum += upper[i];
-            value += mu[i] * lower[i];
         }
         if (lowSum > 1 || highSum < 1) {
             return Double.NEGATIVE_INFINITY;
         }
-        if (!Double.isFinite(lowSum)) {
+        double[] w = highestReturnPortfolio(mu, lower, upper);
+        if (w == null) {
             return Double.POSITIVE_INFINITY;
         }
+        double value = 0;
+        for (int i = 0; i < mu.length; i++) {
+            value += mu[i] * w[i];
+        }
+        return value;
+    }
+
+    /**
+     * The greedy maximiser of μ'w: lower bounds first, then the highest μ filled to its upper
+     * bound, and so on until the budget is spent. Null when a lower bound is infinite.
+     */
+    static double[] highestReturnPortfolio(double[] mu, double[] lower, double[] upper) {
+        int n = mu.length;
+        double lowSum = 0;
+        for (int i = 0; i < n; i++) {
+            lowSum += lower[i];
+        }
+        if (!Double.isFinite(lowSum)) {
+            return null;
+        }
+        double[] w = lower.clone();
         Integer[] order = new Integer[n];
         for (int i = 0; i < n; i++) {
             order[i] = i;
@@ -67,14 +89,14 @@ public final class MaxSharpeSolver {
         Arrays.sort(order, Comparator.comparingDouble((Integer i) -> -mu[i]).thenComparingInt(i -> i));
         double left = 1 - lowSum;
         for (int i : order) {
-            double room = Math.min(upper[i] - lower[i], left);
-            value += mu[i] * room;
-            left -= room;
             if (left <= 0) {
                 break;
             }
+            double room = Math.min(upper[i] - lower[i], left);
+            w[i] += room;
+            left -= room;
         }
-        return value;
+        return w;
     }
 
     /**
@@ -121,26 +143,76 @@ public final class MaxSharpeSolver {
     /** Solves the bounded problem; see the class description. */
     public SolveOutcome solve(double[] sigma, double[] mu, double[] lower, double[] upper) {
         int n = mu.length;
-        QuadraticProblem feasibility = new QuadraticProblem(n, sigma, mu, lower, upper);
-        SolveOutcome infeasible = ActiveSetSolver.checkBudgetReachable(feasibility);
+        SolveOutcome infeasible = ActiveSetSolver.checkBudgetReachable(new QuadraticProblem(n, sigma, mu, lower,
+                upper));
         if (infeasible != null) {
             return infeasible;
         }
-        double[] start = solveTransformed(sigma, mu, lower, upper);
+        Optional<SolveOutcome.Optimal> quick = solveFromOwnStart(sigma, mu, lower, upper);
+        return quick.isPresent() ? quick.get() : solveFromConvexSolver(sigma, mu, lower, upper);
+    }
+
+    /** The route without ojAlgo alone; empty when it does not verify (then ojAlgo's route decides). */
+    Optional<SolveOutcome.Optimal> solveFromOwnStart(double[] sigma, double[] mu, double[] lower, double[] upper) {
+        BoundSide[] own = ownStart(sigma, mu, lower, upper);
+        return Optional.ofNullable(own == null ? null : refine(sigma, mu, lower, upper, own));
+    }
+
+    /**
+     * The route through ojAlgo alone: its OPTIMAL answer of the transformed program gives the
+     * starting partition, which is then polished and verified.
+     */
+    SolveOutcome solveFromConvexSolver(double[] sigma, double[] mu, double[] lower, double[] upper) {
+        double[] start = TransformedProgram.solve(sigma, mu, lower, upper);
         if (start == null) {
             return new SolveOutcome.Failed("max-sharpe: ojAlgo's ConvexSolver did not return an OPTIMAL"
                     + " solution of the transformed program");
         }
-        BoundSide[] sides = partition(start, lower, upper);
+        SolveOutcome.Optimal refined = refine(sigma, mu, lower, upper, partition(start, lower, upper));
+        return refined != null ? refined
+                : new SolveOutcome.Failed("max-sharpe: no partition passed the KKT check after " + MAX_ROUNDS
+                        + " rounds of polishing");
+    }
+
+    /**
+     * A starting partition without ojAlgo: the exact mean-variance optimum for the λ implied by
+     * the minimum-variance portfolio (λ = μ'w / w'Σw), or by the highest-return portfolio when
+     * the minimum-variance one has μ'w ≤ 0. Null when neither gives a usable λ.
+     */
+    private BoundSide[] ownStart(double[] sigma, double[] mu, double[] lower, double[] upper) {
+        int n = mu.length;
         ActiveSetSolver exact = new ActiveSetSolver(settings);
+        SolveOutcome minimum = exact.solve(new QuadraticProblem(n, sigma, new double[n], lower, upper));
+        QuadraticProblem equivalent = minimum instanceof SolveOutcome.Optimal
+                ? meanVarianceEquivalent(sigma, mu, lower, upper, ((SolveOutcome.Optimal) minimum).weights())
+                : null;
+        if (equivalent == null) {
+            double[] richest = highestReturnPortfolio(mu, lower, upper);
+            equivalent = richest == null ? null : meanVarianceEquivalent(sigma, mu, lower, upper, richest);
+        }
+        if (equivalent == null) {
+            return null;
+        }
+        SolveOutcome first = exact.solve(equivalent);
+        return first instanceof SolveOutcome.Optimal
+                ? partition(((SolveOutcome.Optimal) first).weights(), lower, upper)
+                : null;
+    }
+
+    /**
+     * Polish and correct from a partition: the exact tangency on the partition's face, verified
+     * through the equivalent mean-variance problem; when the check fails, that problem's exact
+     * optimum gives the next partition. Null when no round passes within {@link #MAX_ROUNDS}.
+     */
+    private SolveOutcome.Optimal refine(double[] sigma, double[] mu, double[] lower, double[] upper,
+                                        BoundSide[] start) {
+        ActiveSetSolver exact = new ActiveSetSolver(settings);
+        BoundSide[] sides = start;
         for (int round = 0; round < MAX_ROUNDS; round++) {
-            double[] w = polish(sigma, mu, lower, upper, sides);
-            if (w == null) {
-                return new SolveOutcome.Failed("max-sharpe: the KKT system of the polished partition is singular");
-            }
-            QuadraticProblem equivalent = meanVarianceEquivalent(sigma, mu, lower, upper, w);
+            double[] w = TangencyFace.solve(sigma, mu, lower, upper, sides);
+            QuadraticProblem equivalent = w == null ? null : meanVarianceEquivalent(sigma, mu, lower, upper, w);
             if (equivalent == null) {
-                return new SolveOutcome.Failed("max-sharpe: the polished portfolio has no positive expected excess return");
+                return null;
             }
             KktReport report = KktCheck.check(equivalent, w);
             if (report.holds(settings.kktTolerance())) {
@@ -149,11 +221,15 @@ public final class MaxSharpeSolver {
             }
             SolveOutcome corrected = exact.solve(equivalent, sides);
             if (!(corrected instanceof SolveOutcome.Optimal)) {
-                return corrected;
+                return null;
             }
-            sides = partition(((SolveOutcome.Optimal) corrected).weights(), lower, upper);
+            BoundSide[] next = partition(((SolveOutcome.Optimal) corrected).weights(), lower, upper);
+            if (Arrays.equals(next, sides)) {
+                return null;
+            }
+            sides = next;
         }
-        return new SolveOutcome.Failed("max-sharpe: the active set did not settle after " + MAX_ROUNDS + " rounds");
+        return null;
     }
 
     /** Minimise ½λ w'Σw − μ'w with λ = μ'w / w'Σw; null when μ'w ≤ 0. */
@@ -181,55 +257,6 @@ public final class MaxSharpeSolver {
         return new QuadraticProblem(n, q, mu, lower, upper);
     }
 
-    /** y = (y_1..y_n, κ) from ojAlgo, returned as w = y/κ; null unless OPTIMAL with κ &gt; 0. */
-    private static double[] solveTransformed(double[] sigma, double[] mu, double[] lower, double[] upper) {
-        int n = mu.length;
-        int m = n + 1;
-        R064Store q = R064Store.FACTORY.make(m, m);
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                q.set(i, j, 2 * sigma[i * n + j]);
-            }
-        }
-        ConvexSolver.Builder builder = ConvexSolver.newBuilder().objective(q, R064Store.FACTORY.make(m, 1));
-        double[] row = new double[m];
-        System.arraycopy(mu, 0, row, 0, n);
-        builder.equality(1, row.clone());
-        Arrays.fill(row, 1);
-        row[n] = -1;
-        builder.equality(0, row.clone());
-        for (int i = 0; i < n; i++) {
-            if (Double.isFinite(upper[i])) {
-                builder.inequality(0, unitPair(m, i, 1, n, -upper[i]));
-            }
-            if (Double.isFinite(lower[i])) {
-                builder.inequality(0, unitPair(m, i, -1, n, lower[i]));
-            }
-        }
-        builder.inequality(0, unitPair(m, n, -1, n, 0));
-        Optimisation.Result result = builder.solve();
-        if (result.getState() != Optimisation.State.OPTIMAL) {
-            return null;
-        }
-        double kappa = result.doubleValue(n);
-        if (!(kappa > 0)) {
-            return null;
-        }
-        double[] w = new double[n];
-        for (int i = 0; i < n; i++) {
-            w[i] = result.doubleValue(i) / kappa;
-        }
-        return w;
-    }
-
-    /** A row with value a at index i and b at index j (a added to b when i = j). */
-    private static double[] unitPair(int m, int i, double a, int j, double b) {
-        double[] row = new double[m];
-        row[i] += a;
-        row[j] += b;
-        return row;
-    }
-
     private static BoundSide[] partition(double[] w, double[] lower, double[] upper) {
         BoundSide[] sides = new BoundSide[w.length];
         for (int i = 0; i < w.length; i++) {
@@ -240,70 +267,4 @@ public final class MaxSharpeSolver {
         return sides;
     }
 
-    /**
-     * Exact solution for a fixed partition: minimise y'Σy over z = (y_F, κ) with y_B = κ b_B,
-     * subject to μ'y = 1 and 1'y = κ, from the KKT system [2M A'; A 0][z; η] = [0; r] with
-     * M = P'ΣP (P maps z to y). Returns w = y/κ with pinned weights exactly on their bounds, or
-     * null when the system is singular or κ ≤ 0.
-     */
-    private static double[] polish(double[] sigma, double[] mu, double[] lower, double[] upper, BoundSide[] sides) {
-        int n = mu.length;
-        int[] free = new int[n];
-        int k = 0;
-        double[] b = new double[n];
-        for (int i = 0; i < n; i++) {
-            if (sides[i] == BoundSide.FREE) {
-                free[k++] = i;
-            } else {
-                b[i] = sides[i] == BoundSide.LOWER ? lower[i] : upper[i];
-            }
-        }
-        int m = k + 3;
-        double[] a = new double[m * m];
-        double[] rhs = new double[m];
-        double[] sigmaB = new double[n];
-        double bSigmaB = 0;
-        double muB = 0;
-        double sumB = 0;
-        for (int i = 0; i < n; i++) {
-            if (b[i] == 0) {
-                continue;
-            }
-            muB += mu[i] * b[i];
-            sumB += b[i];
-            for (int j = 0; j < n; j++) {
-                sigmaB[j] += sigma[j * n + i] * b[i];
-            }
-        }
-        for (int i = 0; i < n; i++) {
-            bSigmaB += b[i] * sigmaB[i];
-        }
-        int kappa = k;
-        for (int r = 0; r < k; r++) {
-            int i = free[r];
-            for (int s = 0; s < k; s++) {
-                a[r * m + s] = 2 * sigma[i * n + free[s]];
-            }
-            a[r * m + kappa] = 2 * sigmaB[i];
-            a[kappa * m + r] = 2 * sigmaB[i];
-            a[r * m + k + 1] = mu[i];
-            a[(k + 1) * m + r] = mu[i];
-            a[r * m + k + 2] = 1;
-            a[(k + 2) * m + r] = 1;
-        }
-        a[kappa * m + kappa] = 2 * bSigmaB;
-        a[kappa * m + k + 1] = muB;
-        a[(k + 1) * m + kappa] = muB;
-        a[kappa * m + k + 2] = sumB - 1;
-        a[(k + 2) * m + kappa] = sumB - 1;
-        rhs[k + 1] = 1;
-        if (!DenseSystem.solveInPlace(a, rhs, m) || !(rhs[kappa] > 0)) {
-            return null;
-        }
-        double[] w = b.clone();
-        for (int r = 0; r < k; r++) {
-            w[free[r]] = rhs[r] / rhs[kappa];
-        }
-        return w;
-    }
 }

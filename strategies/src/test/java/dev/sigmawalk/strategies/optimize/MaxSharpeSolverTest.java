@@ -1,0 +1,74 @@
+package dev.sigmawalk.strategies.optimize;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertInstanceOf;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Arrays;
+import java.util.Optional;
+import java.util.Random;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * The bounded max-Sharpe solver's two routes (its own start, and the start from ojAlgo 57.1.0's
+ * {@code ConvexSolver} on the transformed program, an independent solver) must land on the same
+ * verified portfolio.
+ */
+class MaxSharpeSolverTest {
+    private static final double SAME_PORTFOLIO = 1e-9;
+
+    private final MaxSharpeSolver solver = new MaxSharpeSolver(SolverSettings.standard());
+
+    @ParameterizedTest(name = "n = {0}, seed = {1}, bounds [{2}, {3}]")
+    @CsvSource({"4, 1, 0, 0.5", "12, 2, 0, 0.2", "30, 3, 0, 0.1", "30, 4, -0.05, 0.15", "60, 5, 0, 1"})
+    void ownRoute_matchesConvexSolverRoute(int n, long seed, double lower, double upper) {
+        Random random = new Random(seed);
+        double[] sigma = RandomProblems.covariance(random, n, n + 40);
+        double[] mu = RandomProblems.expectedReturns(random, n);
+        double[] lo = new double[n];
+        double[] hi = new double[n];
+        Arrays.fill(lo, lower);
+        Arrays.fill(hi, upper);
+        assertTrue(MaxSharpeSolver.highestExpectedReturn(mu, lo, hi) > 0, "a positive-return portfolio exists");
+        Optional<SolveOutcome.Optimal> ownRoute = solver.solveFromOwnStart(sigma, mu, lo, hi);
+        assertTrue(ownRoute.isPresent(), "the route without ojAlgo verifies");
+        SolveOutcome.Optimal own = ownRoute.get();
+        SolveOutcome.Optimal viaOjAlgo = assertInstanceOf(SolveOutcome.Optimal.class,
+                solver.solveFromConvexSolver(sigma, mu, lo, hi));
+        for (int i = 0; i < n; i++) {
+            assertEquals(viaOjAlgo.weights()[i], own.weights()[i], SAME_PORTFOLIO, "weight " + i);
+        }
+    }
+
+    /**
+     * Greedy linear program by hand: μ = (0.03, −0.01, 0.02), bounds [0.1, 0.6]. Start at 0.1 each,
+     * leaving 0.7 to place; the highest μ takes its room 0.5, the next highest the last 0.2:
+     * w = (0.6, 0.1, 0.3), μ'w = 0.018 − 0.001 + 0.006 = 0.023.
+     */
+    @Test
+    void highestExpectedReturn_isGreedyByHand() {
+        double value = MaxSharpeSolver.highestExpectedReturn(new double[] {0.03, -0.01, 0.02},
+                new double[] {0.1, 0.1, 0.1}, new double[] {0.6, 0.6, 0.6});
+        assertEquals(0.023, value, 1e-15, "max μ'w");
+    }
+
+    /** Bounds that cannot sum to 1 report −∞ (no portfolio at all), which the rule treats as infeasible. */
+    @Test
+    void highestExpectedReturn_infeasibleBounds_isMinusInfinity() {
+        double value = MaxSharpeSolver.highestExpectedReturn(new double[] {0.03, 0.02}, new double[2],
+                new double[] {0.3, 0.3});
+        assertEquals(Double.NEGATIVE_INFINITY, value, "no feasible portfolio");
+    }
+
+    /** Without bounds the tangency Σ⁻¹μ / 1'Σ⁻¹μ is found in closed form; a singular Σ is named. */
+    @Test
+    void unbounded_singularCovariance_isFailedNamingSingular() {
+        double[] sigma = RandomProblems.covariance(new Random(8), 6, 4);
+        Optional<SolveOutcome> out = solver.unbounded(sigma, new double[] {0.01, 0.02, 0.01, 0, 0.03, 0.01});
+        assertTrue(out.isPresent(), "an outcome");
+        SolveOutcome.Failed failed = assertInstanceOf(SolveOutcome.Failed.class, out.get());
+        assertTrue(failed.reason().contains("singular"), failed.reason());
+    }
+}
