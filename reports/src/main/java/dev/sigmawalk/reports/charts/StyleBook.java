@@ -13,7 +13,9 @@ import java.util.Objects;
  */
 public final class StyleBook {
     private static final float MAIN_WIDTH = 2.2f;
-    private static final float[][] ALTERNATIVE_DASHES = {{6f, 3f}, {1.5f, 2.5f}, {10f, 3f, 2f, 3f}, {3f, 3f}};
+    private static final float[][] ALTERNATIVE_DASHES = {{1.5f, 2.5f}, {10f, 3f, 2f, 3f}, {5f, 5f}, {16f, 4f}};
+    /** Two dash patterns whose first dashes differ by less than this many pixels look alike. */
+    private static final float ALIKE = 2f;
 
     private final Map<String, SeriesStyle> styles;
 
@@ -36,12 +38,24 @@ public final class StyleBook {
         return new StyleBook(styles);
     }
 
-    /** The k-th (0-based) dash pattern of a family. */
+    /**
+     * The k-th (0-based) dash pattern of a family: its own for k = 0, then the alternatives in
+     * turn, skipping any that looks like the family's own (first dash within {@value #ALIKE} px, or
+     * both solid).
+     */
     static float[] dashFor(ModelFamily family, int k) {
+        float[] own = family.dash();
         if (k == 0) {
-            return family.dash();
+            return own;
         }
-        return ALTERNATIVE_DASHES[(k - 1) % ALTERNATIVE_DASHES.length].clone();
+        java.util.List<float[]> usable = new java.util.ArrayList<>();
+        for (float[] d : ALTERNATIVE_DASHES) {
+            boolean alike = own.length > 0 && Math.abs(own[0] - d[0]) < ALIKE;
+            if (!alike) {
+                usable.add(d);
+            }
+        }
+        return usable.get((k - 1) % usable.size()).clone();
     }
 
     /** The style of {@code name}; throws when the name was not registered. */

@@ -30,6 +30,23 @@ class StyleBookTest {
         assertEquals(ModelFamily.SHRINKAGE.colour(), book.style("third").colour());
     }
 
+    /** Within every family, the first three variants have first dashes at least 2 px apart (or solid vs dashed). */
+    @Test
+    void variants_ofEveryFamily_lookDifferent() {
+        for (ModelFamily f : ModelFamily.values()) {
+            for (int a = 0; a < 3; a++) {
+                for (int b = a + 1; b < 3; b++) {
+                    float[] x = StyleBook.dashFor(f, a);
+                    float[] y = StyleBook.dashFor(f, b);
+                    boolean differ = (x.length == 0) != (y.length == 0)
+                            || (x.length > 0 && Math.abs(x[0] - y[0]) >= 2f);
+                    assertTrue(differ, f + " variants " + a + " and " + b + ": " + Arrays.toString(x) + " vs "
+                            + Arrays.toString(y));
+                }
+            }
+        }
+    }
+
     @Test
     void unknownName_isRejectedWithItsName() {
         StyleBook book = StyleBook.of(Map.of("a", ModelFamily.SAMPLE));
