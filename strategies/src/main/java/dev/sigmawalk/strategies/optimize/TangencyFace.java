@@ -6,6 +6,8 @@ package dev.sigmawalk.strategies.optimize;
  * equality constraints and is solved exactly from its KKT system by {@link DenseSystem}, O(k³).
  */
 final class TangencyFace {
+    /** How far the pinned weights of a vertex may sum from 1 (rounding of the bound values). */
+    private static final double VERTEX_BUDGET_SLACK = 1e-12;
     private TangencyFace() {
     }
 
@@ -26,6 +28,9 @@ final class TangencyFace {
             } else {
                 b[i] = sides[i] == BoundSide.LOWER ? lower[i] : upper[i];
             }
+        }
+        if (k == 0) {
+            return vertex(b);
         }
         int m = k + 3;
         double[] a = new double[m * m];
@@ -74,5 +79,17 @@ final class TangencyFace {
             w[free[r]] = rhs[r] / rhs[kappa];
         }
         return w;
+    }
+
+    /**
+     * With every weight pinned the face is the single point b, which only the budget can rule
+     * out (the κ equation degenerates to 0 = 0 there, so the KKT system would be singular).
+     */
+    private static double[] vertex(double[] b) {
+        double total = 0;
+        for (double v : b) {
+            total += v;
+        }
+        return Math.abs(total - 1) <= VERTEX_BUDGET_SLACK ? b : null;
     }
 }

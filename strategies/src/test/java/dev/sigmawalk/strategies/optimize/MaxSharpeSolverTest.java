@@ -7,6 +7,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.Arrays;
 import java.util.Optional;
 import java.util.Random;
+import net.jqwik.api.Assume;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -39,6 +43,32 @@ class MaxSharpeSolverTest {
                 solver.solveFromConvexSolver(sigma, mu, lo, hi));
         for (int i = 0; i < n; i++) {
             assertEquals(viaOjAlgo.weights()[i], own.weights()[i], SAME_PORTFOLIO, "weight " + i);
+        }
+    }
+
+    /**
+     * Random problems: the answer is verified whichever route produced it, and where the route
+     * without ojAlgo verifies it agrees with ojAlgo's route.
+     */
+    @Property(tries = 25)
+    void randomProblems_routesAgreeWhereBothVerify(@ForAll @IntRange(min = 2, max = 15) int n, @ForAll long seed) {
+        Random random = new Random(seed);
+        double[] sigma = RandomProblems.covariance(random, n, n + 20);
+        double[] mu = RandomProblems.expectedReturns(random, n);
+        double[] lo = new double[n];
+        double[] hi = new double[n];
+        Arrays.fill(lo, random.nextBoolean() ? 0 : -0.1);
+        Arrays.fill(hi, (1.2 + 3 * random.nextDouble()) / n);
+        Assume.that(MaxSharpeSolver.highestExpectedReturn(mu, lo, hi) > 0);
+        SolveOutcome.Optimal chosen = assertInstanceOf(SolveOutcome.Optimal.class, solver.solve(sigma, mu, lo, hi));
+        assertTrue(chosen.kktResidual() <= 1e-9, "verified");
+        Optional<SolveOutcome.Optimal> own = solver.solveFromOwnStart(sigma, mu, lo, hi);
+        SolveOutcome viaOjAlgo = solver.solveFromConvexSolver(sigma, mu, lo, hi);
+        if (own.isPresent() && viaOjAlgo instanceof SolveOutcome.Optimal) {
+            for (int i = 0; i < n; i++) {
+                assertEquals(((SolveOutcome.Optimal) viaOjAlgo).weights()[i], own.get().weights()[i], SAME_PORTFOLIO,
+                        "weight " + i);
+            }
         }
     }
 
