@@ -87,6 +87,10 @@ public final class ActiveSetSolver {
         return null;
     }
 
+    /** The longest feasible step along a direction and the weight that limits it (−1 when none). */
+    private record Ratio(double step, int blocking) {
+    }
+
     /** One run of the active-set loop over a started working set. */
     private static final class Iteration {
         private final WorkingSet s;
@@ -158,12 +162,12 @@ public final class ActiveSetSolver {
                 return true;
             }
             System.arraycopy(s.free, 0, support, 0, k);
-            double[] ratio = ratioTest(support, step, k);
-            double alpha = Math.min(1, ratio[0]);
+            Ratio ratio = ratioTest(support, step, k);
+            double alpha = Math.min(1, ratio.step());
             s.move(alpha, support, step, k);
             changes++;
-            if (ratio[0] < 1) {
-                int blocking = (int) ratio[1];
+            if (ratio.step() < 1) {
+                int blocking = ratio.blocking();
                 s.pin(blocking, step[s.position[blocking]] < 0 ? BoundSide.LOWER : BoundSide.UPPER);
                 singular = !maintain();
                 return false;
@@ -187,9 +191,9 @@ public final class ActiveSetSolver {
 
         /**
          * The largest α ≤ +∞ keeping w + α d within the bounds on the support, and the weight
-         * that stops it (−1 when none); returned as {α, index}. Ties go to the first in support order.
+         * that stops it (−1 when none). Ties go to the first in support order.
          */
-        private double[] ratioTest(int[] on, double[] d, int count) {
+        private Ratio ratioTest(int[] on, double[] d, int count) {
             double best = Double.POSITIVE_INFINITY;
             int blocking = -1;
             for (int r = 0; r < count; r++) {
@@ -209,7 +213,7 @@ public final class ActiveSetSolver {
                     blocking = i;
                 }
             }
-            return new double[] {best, blocking};
+            return new Ratio(best, blocking);
         }
 
         /** The pinned weight whose multiplier is most negative below −dropTolerance·scale, or −1. */
@@ -265,15 +269,15 @@ public final class ActiveSetSolver {
             }
             step[k] = sigma;
             support[k] = j;
-            double[] ratio = ratioTest(support, step, k + 1);
-            if (!Double.isFinite(ratio[0])) {
+            Ratio ratio = ratioTest(support, step, k + 1);
+            if (!Double.isFinite(ratio.step())) {
                 return "objective is unbounded below: the quadratic matrix is singular along a direction"
                         + " no bound limits (weight " + j + ")";
             }
             BoundSide from = s.side[j];
-            s.move(ratio[0], support, step, k + 1);
+            s.move(ratio.step(), support, step, k + 1);
             changes++;
-            int blocking = (int) ratio[1];
+            int blocking = ratio.blocking();
             if (blocking == j) {
                 s.side[j] = from == BoundSide.LOWER ? BoundSide.UPPER : BoundSide.LOWER;
                 s.w[j] = s.side[j] == BoundSide.LOWER ? lo[j] : hi[j];

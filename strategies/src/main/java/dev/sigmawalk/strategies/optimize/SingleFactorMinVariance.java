@@ -52,6 +52,10 @@ public final class SingleFactorMinVariance {
 
     private final SolverSettings settings;
 
+    /** The two numbers that fix every weight: the level a (= ν) and the slope c = s β'w. */
+    private record Levels(double a, double c) {
+    }
+
     public SingleFactorMinVariance(SolverSettings settings) {
         this.settings = Objects.requireNonNull(settings, "settings");
     }
@@ -127,14 +131,14 @@ public final class SingleFactorMinVariance {
         if (cap == null) {
             return Optional.empty();
         }
-        double[] levels = iterate ? partitionIteration(s, beta, d, lower, cap) : null;
+        Levels levels = iterate ? partitionIteration(s, beta, d, lower, cap) : null;
         if (levels == null) {
             levels = bisection(s, beta, d, lower, cap);
         }
         if (levels == null) {
             return Optional.empty();
         }
-        double[] w = exactFromPartition(s, beta, d, lower, cap, levels[0], levels[1]);
+        double[] w = exactFromPartition(s, beta, d, lower, cap, levels.a(), levels.c());
         if (w == null) {
             return Optional.empty();
         }
@@ -168,19 +172,19 @@ public final class SingleFactorMinVariance {
      * Partition iteration (a semismooth Newton method on the piecewise-linear KKT map): from the
      * all-free (a, c), classify each weight by its clamp, solve the 2×2 system for that
      * partition, and repeat until the partition reproduces itself, which is then exactly the KKT
-     * partition. O(n) per round; usually a few rounds. Returns {a, c}, or null when it has not
-     * settled after {@link #MAX_PARTITION_ROUNDS} rounds (it can cycle; bisection then decides).
+     * partition. O(n) per round; usually a few rounds. Returns (a, c), or null when it has not
+     * settled after a fixed number of rounds (it can cycle; bisection then decides).
      */
-    private static double[] partitionIteration(double s, double[] beta, double[] d, double[] lower, double[] cap) {
+    private static Levels partitionIteration(double s, double[] beta, double[] d, double[] lower, double[] cap) {
         int n = beta.length;
         byte[] partition = new byte[n];
         Arrays.fill(partition, FREE);
         for (int round = 0; round < MAX_PARTITION_ROUNDS; round++) {
-            double[] levels = solvePartition(s, beta, d, lower, cap, partition);
+            Levels levels = solvePartition(s, beta, d, lower, cap, partition);
             if (levels == null) {
                 return null;
             }
-            byte[] next = classify(beta, d, lower, cap, levels[0], levels[1]);
+            byte[] next = classify(beta, d, lower, cap, levels.a(), levels.c());
             if (Arrays.equals(next, partition)) {
                 return levels;
             }
@@ -199,8 +203,8 @@ public final class SingleFactorMinVariance {
         return partition;
     }
 
-    /** {a, c} from the 2×2 system of a partition (see the class description); null when no weight is free. */
-    private static double[] solvePartition(double s, double[] beta, double[] d, double[] lower, double[] cap,
+    /** (a, c) from the 2×2 system of a partition (see the class description); null when no weight is free. */
+    private static Levels solvePartition(double s, double[] beta, double[] d, double[] lower, double[] cap,
                                            byte[] partition) {
         double a0 = 0;
         double a1 = 0;
@@ -224,18 +228,18 @@ public final class SingleFactorMinVariance {
         double k = 1 + s * a2;
         double level = (1 - pinnedSum + s * a1 * pinnedExposure / k) / (a0 - s * a1 * a1 / k);
         double slope = s * (level * a1 + pinnedExposure) / k;
-        return Double.isFinite(level) && Double.isFinite(slope) ? new double[] {level, slope} : null;
+        return Double.isFinite(level) && Double.isFinite(slope) ? new Levels(level, slope) : null;
     }
 
-    /** {a, c} by bisection on c and the exact level a(c); null when a level cannot be found. */
-    private static double[] bisection(double s, double[] beta, double[] d, double[] lower, double[] cap) {
+    /** (a, c) by bisection on c and the exact level a(c); null when a level cannot be found. */
+    private static Levels bisection(double s, double[] beta, double[] d, double[] lower, double[] cap) {
         OptionalDouble root = rootOfC(s, beta, d, lower, cap);
         if (root.isEmpty()) {
             return null;
         }
         double c = root.getAsDouble();
         OptionalDouble a = level(c, beta, d, lower, cap);
-        return a.isPresent() ? new double[] {a.getAsDouble(), c} : null;
+        return a.isPresent() ? new Levels(a.getAsDouble(), c) : null;
     }
 
     /** Bisection for the root of h(c) = s β'w(c) − c on [s·min β'w, s·max β'w]. */
