@@ -15,10 +15,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.SplittableRandom;
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.constraints.IntRange;
-import net.jqwik.api.constraints.LongRange;
 import org.junit.jupiter.api.Test;
 
 class WalkForwardTest {
@@ -46,11 +42,19 @@ class WalkForwardTest {
 
     /**
      * No look-ahead (METHODS §2): replacing every value after a random row τ with random numbers
-     * leaves every weight chosen at or before τ bit-for-bit unchanged.
+     * leaves every weight chosen at or before τ bit-for-bit unchanged. Twenty-five seeded cases
+     * (τ and the scrambling seed drawn from a fixed seed, so a failure reproduces).
      */
-    @Property(tries = 25)
-    void weightsChosenByTau_doNotDependOnLaterRows(@ForAll @IntRange(min = 36, max = 90) int tau,
-                                                   @ForAll @LongRange(min = 1, max = 1_000_000) long seed) {
+    @Test
+    void weightsChosenByTau_doNotDependOnLaterRows() {
+        SplittableRandom cases = new SplittableRandom(20_240_601L);
+        for (int c = 0; c < 25; c++) {
+            int tau = cases.nextInt(36, 91);
+            assertUnchangedUpTo(tau, cases.nextLong(1, 1_000_000));
+        }
+    }
+
+    private static void assertUnchangedUpTo(int tau, long seed) {
         ReturnPanel original = TestPanels.random(96, 6, 11);
         ReturnPanel scrambled = scrambleAfter(original, tau, seed);
         RunResult<Integer> a = run(original, 1);

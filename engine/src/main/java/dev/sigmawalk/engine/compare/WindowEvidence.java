@@ -1,0 +1,29 @@
+package dev.sigmawalk.engine.compare;
+
+import dev.sigmawalk.engine.evidence.ResidualDiagnostics;
+import dev.sigmawalk.engine.evidence.ResidualPair;
+import dev.sigmawalk.engine.evidence.SectorCoMovement;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Single-index adequacy of one estimation window (METHODS §8), kept small: the statistics, the
+ * most correlated residual pairs and, where sectors are known, the within-sector co-movement.
+ *
+ * @param date rebalance date
+ * @param window L
+ * @param diagnostics mean |ρ|, Breusch-Pagan LM and Pesaran CD; empty with fewer than two assets
+ * @param largestPairs the pairs with the largest residual correlation, largest first
+ * @param sectors residual correlation within and across sectors, when sectors are known
+ */
+public record WindowEvidence(LocalDate date, int window, Optional<ResidualDiagnostics> diagnostics,
+                             List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors) {
+    public WindowEvidence {
+        Objects.requireNonNull(date, "date");
+        Objects.requireNonNull(diagnostics, "diagnostics");
+        largestPairs = List.copyOf(largestPairs);
+        Objects.requireNonNull(sectors, "sectors");
+    }
+}

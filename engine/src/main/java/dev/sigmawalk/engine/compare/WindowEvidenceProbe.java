@@ -1,0 +1,39 @@
+package dev.sigmawalk.engine.compare;
+
+import dev.sigmawalk.engine.evidence.ResidualCorrelations;
+import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.run.WindowProbe;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * Computes {@link WindowEvidence} from each estimation window, from the window's shared moments
+ * (O(n²) per window, no second pass over the data).
+ */
+public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
+    private final Map<String, String> sectors;
+    private final int pairs;
+
+    /**
+     * @param sectors asset to sector (may be empty)
+     * @param pairs how many of the most correlated residual pairs to keep per window
+     */
+    public WindowEvidenceProbe(Map<String, String> sectors, int pairs) {
+        this.sectors = Map.copyOf(sectors);
+        if (!(pairs >= 0)) {
+            throw new IllegalArgumentException("pairs (" + pairs + ") must be >= 0");
+        }
+        this.pairs = pairs;
+    }
+
+    @Override
+    public WindowEvidence probe(EstimationWindow window) {
+        if (window.assetCount() < 2) {
+            return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty());
+        }
+        ResidualCorrelations rho = ResidualCorrelations.of(window);
+        return new WindowEvidence(window.date(), window.length(), Optional.of(rho.diagnostics()),
+                rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectors)));
+    }
+}

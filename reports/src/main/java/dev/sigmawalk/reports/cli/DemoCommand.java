@@ -1,0 +1,59 @@
+package dev.sigmawalk.reports.cli;
+
+import dev.sigmawalk.sample.SampleUniverse;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/**
+ * {@code sigmawalk demo [--out DIR]}: runs the built-in monthly study on the fictional sample
+ * universe shipped inside the jar. The data are unpacked to a temporary folder first, so the
+ * demo runs from any working directory.
+ */
+@Command(name = "demo", description = "Run the built-in study on the fictional sample universe.")
+public final class DemoCommand implements Callable<Integer> {
+    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: sigmawalk-demo).")
+    Path out;
+
+    @Option(names = "--force", description = "Write into a non-empty folder sigmawalk did not write.")
+    boolean force;
+
+    @Option(names = "--quiet", description = "No progress line on standard error.")
+    boolean quiet;
+
+    @Option(names = "--daily", description = "Run the daily study instead of the monthly one.")
+    boolean daily;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Path unpacked;
+        try {
+            unpacked = Files.createTempDirectory("sigmawalk-sample-");
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot create a temporary folder for the sample data", e);
+        }
+        try {
+            Path study = daily ? SampleUniverse.extractTo(unpacked, "demo-daily.yaml") : SampleUniverse.extractTo(unpacked);
+            Path target = out != null ? out : Paths.get("sigmawalk-demo");
+            StudyRun.Options options = new StudyRun.Options(Optional.of(target), force, quiet,
+                    Runtime.getRuntime().availableProcessors());
+            StudyRun.Outcome outcome = StudyRun.execute(study, options, System.err);
+            spec.commandLine().getOut().println("sigmawalk: wrote " + outcome.folder().resolve("report.html"));
+            spec.commandLine().getOut().flush();
+            return 0;
+        } finally {
+            TempFiles.deleteQuietly(unpacked);
+        }
+    }
+}

@@ -1,0 +1,74 @@
+package dev.sigmawalk.reports.cli;
+
+import dev.sigmawalk.engine.compare.Comparison;
+import dev.sigmawalk.engine.compare.WindowEvidence;
+import dev.sigmawalk.engine.data.FileFingerprint;
+import dev.sigmawalk.engine.data.ReturnPanel;
+import dev.sigmawalk.engine.data.StudyData;
+import dev.sigmawalk.engine.evidence.InputListSize;
+import dev.sigmawalk.engine.measures.Summary;
+import dev.sigmawalk.engine.run.RunResult;
+import dev.sigmawalk.engine.study.Study;
+import dev.sigmawalk.reports.html.DiagnosticsPoint;
+import dev.sigmawalk.reports.html.InputFile;
+import dev.sigmawalk.reports.html.PairComparison;
+import dev.sigmawalk.reports.html.ReportData;
+import dev.sigmawalk.reports.html.ReportEvidence;
+import dev.sigmawalk.reports.html.ReportWriter;
+import dev.sigmawalk.reports.html.RunRecord;
+import dev.sigmawalk.reports.html.WindowDiagnostics;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/** Assembles the report's input from a finished run and writes report.html and charts/. */
+final class ReportStep {
+    private ReportStep() {
+    }
+
+    static void write(Path dir, Study study, StudyData data, RunResult<WindowEvidence> run, List<Summary> summaries,
+                      List<Comparison> comparisons, List<String> warnings, Instant started) {
+        ReturnPanel panel = data.panel();
+        List<InputFile> inputs = new ArrayList<>();
+        for (FileFingerprint f : data.fingerprints()) {
+            inputs.add(new InputFile(String.valueOf(f.path().getFileName()), f.sha256()));
+        }
+        RunRecord record = new RunRecord(VersionProvider.version(), inputs, panel.date(0),
+                panel.date(panel.rows() - 1), panel.assetCount(), started, Instant.now(), warnings);
+        ReportEvidence evidence = new ReportEvidence(diagnostics(run, study.walkForward().windows()),
+                pairs(comparisons), Optional.of(new InputListSize(panel.assetCount())));
+        try {
+            new ReportWriter().write(new ReportData(study, run, summaries, record, evidence), dir.resolve("report.html"),
+                    dir.resolve("charts"));
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write the report", e);
+        }
+    }
+
+    private static List<WindowDiagnostics> diagnostics(RunResult<WindowEvidence> run, List<Integer> windows) {
+        List<WindowDiagnostics> out = new ArrayList<>();
+        for (int w : windows) {
+            List<DiagnosticsPoint> points = new ArrayList<>();
+            for (WindowEvidence e : run.probes().getOrDefault(w, List.of())) {
+                e.diagnostics().ifPresent(d -> points.add(new DiagnosticsPoint(e.date(), d, e.largestPairs())));
+            }
+            if (!points.isEmpty()) {
+                out.add(new WindowDiagnostics(w, points));
+            }
+        }
+        return out;
+    }
+
+    private static List<PairComparison> pairs(List<Comparison> comparisons) {
+        List<PairComparison> out = new ArrayList<>();
+        for (Comparison c : comparisons) {
+            out.add(new PairComparison(c.strategy(), c.baseline(), c.window(), c.sharpe(), c.variance(),
+                    c.jobsonKorkie(), c.holmSharpe(), c.holmVariance(), c.skipped()));
+        }
+        return out;
+    }
+}

@@ -1,0 +1,121 @@
+package dev.sigmawalk.reports.cli;
+
+import dev.sigmawalk.engine.compare.Baselines;
+import dev.sigmawalk.engine.compare.Comparison;
+import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.WindowEvidence;
+import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
+import dev.sigmawalk.engine.data.StudyData;
+import dev.sigmawalk.engine.evidence.DifferenceTests;
+import dev.sigmawalk.engine.evidence.HacKernel;
+import dev.sigmawalk.engine.measures.PerformanceMeasures;
+import dev.sigmawalk.engine.measures.Summary;
+import dev.sigmawalk.engine.model.StrategyDefinition;
+import dev.sigmawalk.engine.run.PathResult;
+import dev.sigmawalk.engine.run.ProgressListener;
+import dev.sigmawalk.engine.run.RebalanceRecord;
+import dev.sigmawalk.engine.run.RunResult;
+import dev.sigmawalk.engine.run.WalkForward;
+import dev.sigmawalk.engine.study.Study;
+import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.reports.files.EvidenceFiles;
+import dev.sigmawalk.reports.files.Manifest;
+import dev.sigmawalk.reports.files.OutputFolder;
+import dev.sigmawalk.reports.files.ResultFiles;
+import dev.sigmawalk.strategies.StrategyCatalog;
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * Wires one run: read and validate the study and its data, prepare the output folder (refusing
+ * a foreign one before any work), walk forward, measure, test, write every output into a
+ * staging folder and move it into place only when all of it succeeded.
+ */
+final class StudyRun {
+    /** Residual pairs kept per window for the report. */
+    private static final int LARGEST_PAIRS = 10;
+
+    private StudyRun() {
+    }
+
+    /** Command-line choices of a run. */
+    record Options(Optional<Path> out, boolean force, boolean quiet, int threads) {
+        Options {
+            if (!(threads >= 1)) {
+                throw new dev.sigmawalk.engine.data.InputException("--threads (" + threads + ") must be >= 1");
+            }
+        }
+    }
+
+    /** Where the outputs went. */
+    record Outcome(Path folder, List<Summary> summaries, RunResult<WindowEvidence> run) {
+    }
+
+    static Outcome execute(Path studyFile, Options options, PrintStream err) {
+        Instant started = Instant.now();
+        Study study = StudyReader.read(studyFile);
+        StudyData data = StudyData.load(study);
+        List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        Path target = options.out().orElse(study.output());
+        try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
+            ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
+            RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
+                    study.walkForward().windows(), study.walkForward().costBps(),
+                    new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS)).run(options.threads(), progress);
+            List<Summary> summaries = summaries(run);
+            List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
+                    study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
+            List<String> warnings = warnings(data, run);
+            Path dir = folder.staging();
+            ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
+            ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
+            ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
+            ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
+            EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+            EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons);
+            ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
+            Manifest.write(dir.resolve("manifest.json"), new Manifest.Content(VersionProvider.version(), study,
+                    data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
+                    Instant.now(), options.threads()));
+            folder.commit();
+            return new Outcome(folder.target(), summaries, run);
+        }
+    }
+
+    private static List<Summary> summaries(RunResult<?> run) {
+        PerformanceMeasures measures = new PerformanceMeasures(run.riskFree(), run.market(), run.periodsPerYear());
+        List<Summary> out = new ArrayList<>();
+        for (PathResult p : run.paths()) {
+            out.add(measures.of(p));
+        }
+        out.add(measures.market());
+        return out;
+    }
+
+    /** Data warnings, then one line per path whose allocation failed at some rebalance. */
+    private static List<String> warnings(StudyData data, RunResult<?> run) {
+        List<String> out = new ArrayList<>(data.warnings());
+        for (PathResult p : run.paths()) {
+            List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
+            if (!failed.isEmpty()) {
+                RebalanceRecord first = failed.get(0);
+                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": no portfolio formed at "
+                        + failed.size() + " of " + p.rebalances().size() + " rebalances (first " + first.date() + ": "
+                        + first.failure().get() + "); the drifted previous portfolio was held instead");
+            }
+            long notes = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).count();
+            if (notes > 0) {
+                RebalanceRecord first = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).findFirst().get();
+                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": " + notes + " rebalances with notes"
+                        + " (first " + first.date() + ": " + String.join("; ", first.notes()) + ")");
+            }
+        }
+        return out;
+    }
+
+}
