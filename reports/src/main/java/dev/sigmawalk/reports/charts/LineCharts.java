@@ -25,6 +25,8 @@ import org.jfree.data.xy.XYSeriesCollection;
 public final class LineCharts {
     /** Side of the square marker in pixels; squares need far less SVG markup than circles. */
     private static final double MARKER = 4.5;
+    /** Lines longer than this are thinned by {@link Decimation} before drawing. */
+    static final int MAX_POINTS = 1200;
 
     private LineCharts() {
     }
@@ -91,7 +93,7 @@ public final class LineCharts {
         for (int s = 0; s < lines.size(); s++) {
             ChartLine line = lines.get(s);
             XYSeries series = new XYSeries(new SeriesKey(s, line.label()), false, true);
-            for (int k = 0; k < line.size(); k++) {
+            for (int k : Decimation.minMax(line.y(), MAX_POINTS)) {
                 series.add(line.xAt(k), line.yAt(k), false);
             }
             data.addSeries(series);
