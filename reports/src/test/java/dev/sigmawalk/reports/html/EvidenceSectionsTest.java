@@ -14,10 +14,22 @@ import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
 import org.jsoup.select.Elements;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
 
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
 class EvidenceSectionsTest {
+    private ReportData data;
+    private Document doc;
+
+    /** One report with evidence serves every test that reads it: rendering is the slow part. */
+    @BeforeAll
+    void renderWithEvidence(@TempDir Path dir) throws Exception {
+        data = EvidenceFixture.data();
+        doc = render(data, dir);
+    }
 
     private static Document render(ReportData data, Path dir) throws Exception {
         Path out = dir.resolve("report.html");
@@ -31,9 +43,7 @@ class EvidenceSectionsTest {
      * README lists the same), 1 − 152/1325 = 88.53 % fewer.
      */
     @Test
-    void givenEvidence_rendersItsThreeSections(@TempDir Path dir) throws Exception {
-        ReportData data = EvidenceFixture.data();
-        Document doc = render(data, dir);
+    void givenEvidence_rendersItsThreeSections() {
         for (String id : new String[] {"single-index-check", "differences", "input-list"}) {
             Element s = doc.getElementById(id);
             assertNotNull(s, id);
@@ -47,9 +57,7 @@ class EvidenceSectionsTest {
 
     /** The Sharpe ratios shown are the tests' per-period estimates times √12, two decimals. */
     @Test
-    void differencesTable_showsAnnualisedSharpeRatiosOfTheTests(@TempDir Path dir) throws Exception {
-        ReportData data = EvidenceFixture.data();
-        Document doc = render(data, dir);
+    void differencesTable_showsAnnualisedSharpeRatiosOfTheTests() {
         Elements rows = doc.getElementById("differences").select("tbody tr");
         assertEquals(data.evidence().comparisons().size(), rows.size());
         for (int k = 0; k < rows.size(); k++) {
@@ -63,9 +71,7 @@ class EvidenceSectionsTest {
 
     /** Counts of rejections at 5 % in the diagnostics table agree with the diagnostics given. */
     @Test
-    void diagnosticsTable_countsRejectionsAtFivePercent(@TempDir Path dir) throws Exception {
-        ReportData data = EvidenceFixture.data();
-        Document doc = render(data, dir);
+    void diagnosticsTable_countsRejectionsAtFivePercent() {
         Elements rows = doc.getElementById("single-index-check").select("tbody tr");
         assertEquals(data.evidence().diagnostics().size(), rows.size());
         for (int k = 0; k < rows.size(); k++) {

@@ -137,6 +137,20 @@ class ReportWriterTest {
                 "one lowest volatility in this run");
     }
 
+    /**
+     * One colour family per risk model: the equal-weight rule has its own family whatever model
+     * forecasts its risk, the others follow their risk model, the benchmark has its own.
+     */
+    @Test
+    void rows_carryTheirModelFamilyColourClass() {
+        Elements rows = doc.getElementById("headline-table").select("tbody tr");
+        assertTrue(rows.get(0).hasClass("fam-sample"), "diag uses the sample model");
+        assertTrue(rows.get(1).hasClass("fam-shrinkage"), "pulled uses shrinkage");
+        assertTrue(rows.get(2).hasClass("fam-equal-weight"), "equal weights");
+        assertTrue(rows.last().hasClass("fam-market") && rows.last().hasClass("benchmark"), "market row");
+        assertTrue(html.contains(".fam-shrinkage .swatch { background: #b57f00; }"), "swatch colour from the palette");
+    }
+
     @Test
     void headlineAnswer_namesTheLowestVolatilityPathAndItsValue() {
         PathResult best = data.run().paths().get(0);
