@@ -49,7 +49,8 @@ public final class StudyDefaults {
                 "strategies[].expected_returns: " + EXPECTED_RETURNS.spelling() + " for mean-variance and max-sharpe",
                 "strategies[].alphas: none (every alpha 0)",
                 "strategies[].market_premium: the window's mean market excess return",
-                "strategies[].baseline: none",
+                "strategies[].baseline: the first sample-covariance strategy with the same objective and bounds"
+                        + " (none when the study has no such strategy)",
                 "evidence.resamples: " + evidence.resamples(),
                 "evidence.seed: " + evidence.seed(),
                 "evidence.block_length: chosen from the data",
