@@ -108,8 +108,8 @@ final class EvidenceSections {
                 method = c.sharpe().or(c::variance).map(DifferenceTest::method).orElse("");
             }
         }
-        String answer = "Of " + comparisons.size() + " comparisons with a baseline, " + varianceRejected
-                + " showed a difference in volatility and " + sharpeRejected + " a difference in Sharpe ratio that is "
+        String answer = "Of " + comparisons.size() + " comparisons with a baseline, " + Words.howMany(varianceRejected)
+                + " showed a difference in volatility and " + Words.howMany(sharpeRejected) + " a difference in Sharpe ratio that is "
                 + "unlikely to be chance (Holm-adjusted bootstrap p-value at or below 5 %).";
         List<String> notes = new ArrayList<>();
         notes.add("Each p-value is the chance of a difference at least this large if the two strategies were in truth "

@@ -12,6 +12,11 @@ final class Words {
         return n + (n == 1 ? " period" : " periods");
     }
 
+    /** "none" for 0, otherwise the number: reads better at the start of a clause. */
+    static String howMany(int n) {
+        return n == 0 ? "none" : Integer.toString(n);
+    }
+
     /** "a", "a and b", "a, b and c". */
     static String list(List<String> items) {
         if (items.isEmpty()) {
