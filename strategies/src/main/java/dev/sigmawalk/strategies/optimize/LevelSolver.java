@@ -87,12 +87,17 @@ final class LevelSolver {
             return OptionalDouble.empty();
         }
         if (slope == 0) {
-            return constant == target && Double.isFinite(probe) ? OptionalDouble.of(probe) : OptionalDouble.empty();
+            // A flat piece between two breakpoints is bracketed (S(left) < target <= S(right)), so
+            // S equals the target on it up to rounding (for example one weight at the cap that
+            // the budget implies, all others at their lower bounds); any point of it will do.
+            boolean bracketed = Double.isFinite(left) && Double.isFinite(right);
+            return bracketed || constant == target ? OptionalDouble.of(probe) : OptionalDouble.empty();
         }
         double t = (target - constant) / slope;
-        // Accept a level within a few ulps of the piece's ends; neighbouring pieces agree there.
-        double slack = 4 * Math.ulp(Math.max(Math.abs(t), Math.max(finiteOrZero(left), finiteOrZero(right))));
-        return t >= left - slack && t <= right + slack ? OptionalDouble.of(t) : OptionalDouble.empty();
+        // The binary search brackets the root, S(left) < target <= S(right); a level computed just
+        // outside the piece (cancellation in the constant when the target sits at a breakpoint)
+        // is rounding, so it is clamped to the piece.
+        return OptionalDouble.of(Math.max(left, Math.min(right, t)));
     }
 
     private static double midpoint(double left, double right) {
@@ -106,9 +111,5 @@ final class LevelSolver {
             return left + 1 + Math.abs(left);
         }
         return left + (right - left) / 2;
-    }
-
-    private static double finiteOrZero(double x) {
-        return Double.isFinite(x) ? Math.abs(x) : 0;
     }
 }

@@ -131,14 +131,24 @@ public final class SingleFactorMinVariance {
         if (cap == null) {
             return Optional.empty();
         }
-        Levels levels = iterate ? partitionIteration(s, beta, d, lower, cap) : null;
-        if (levels == null) {
-            levels = bisection(s, beta, d, lower, cap);
+        if (iterate) {
+            Optional<SolveOutcome.Optimal> quick = verified(form, lower, upper, cap,
+                    partitionIteration(s, beta, d, lower, cap));
+            if (quick.isPresent()) {
+                return quick;
+            }
         }
+        return verified(form, lower, upper, cap, bisection(s, beta, d, lower, cap));
+    }
+
+    /** The weights of (a, c)'s partition, when they respect the bounds and pass the KKT check. */
+    private Optional<SolveOutcome.Optimal> verified(SingleFactorForm form, double[] lower, double[] upper, double[] cap,
+                                                    Levels levels) {
         if (levels == null) {
             return Optional.empty();
         }
-        double[] w = exactFromPartition(s, beta, d, lower, cap, levels.a(), levels.c());
+        double[] w = exactFromPartition(form.factorVariance(), form.loadings(), form.specificVariances(), lower, cap,
+                levels.a(), levels.c());
         if (w == null) {
             return Optional.empty();
         }

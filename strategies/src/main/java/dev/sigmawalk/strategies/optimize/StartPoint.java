@@ -15,7 +15,8 @@ final class StartPoint {
     /**
      * Cold start at a vertex: every weight at a finite bound (lower preferred; 0 when both are
      * infinite), then weights are moved toward their other bound in order of their gradient
-     * (cheapest first) until the budget holds. The weight that absorbs the remainder is the one
+     * (cheapest first; ties, such as the all-zero gradient of minimum variance at w = 0, by the
+     * diagonal Q_ii, lowest first) until the budget holds. The weight that absorbs the remainder is the one
      * free weight (plus any weight with no finite bound), so the first factor is tiny and
      * always positive definite.
      *
@@ -50,7 +51,8 @@ final class StartPoint {
 
     /** Raises weights toward their upper bound, lowest gradient first; returns the last one moved or −1. */
     private static int raise(WorkingSet s, double amount) {
-        Integer[] order = order(s, Comparator.comparingDouble((Integer i) -> s.g[i]));
+        Integer[] order = order(s, Comparator.comparingDouble((Integer i) -> s.g[i])
+                .thenComparingDouble(i -> s.q[i * s.n + i]));
         double left = amount;
         int last = -1;
         for (int i : order) {
@@ -77,7 +79,8 @@ final class StartPoint {
 
     /** Lowers weights toward their lower bound, highest gradient first; returns the last one moved or −1. */
     private static int lower(WorkingSet s, double amount) {
-        Integer[] order = order(s, Comparator.comparingDouble((Integer i) -> -s.g[i]));
+        Integer[] order = order(s, Comparator.comparingDouble((Integer i) -> -s.g[i])
+                .thenComparingDouble(i -> s.q[i * s.n + i]));
         double left = amount;
         int last = -1;
         for (int i : order) {

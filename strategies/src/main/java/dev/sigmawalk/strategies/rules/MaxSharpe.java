@@ -37,6 +37,10 @@ public record MaxSharpe(SolverSettings settings) implements PortfolioRule {
 
     @Override
     public RuleOutcome apply(RuleInput input, WarmStart warm) {
+        return Solved.guarded(NAME, () -> applyChecked(input, warm));
+    }
+
+    private RuleOutcome applyChecked(RuleInput input, WarmStart warm) {
         RuleOutcome none = Solved.unusable(NAME, input);
         if (none == null) {
             none = Solved.missingExpectedReturns(NAME, input);

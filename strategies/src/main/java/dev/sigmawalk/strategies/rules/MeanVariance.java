@@ -28,6 +28,10 @@ public record MeanVariance(double riskAversion, SolverSettings settings) impleme
 
     @Override
     public RuleOutcome apply(RuleInput input, WarmStart warm) {
+        return Solved.guarded(NAME, () -> applyChecked(input, warm));
+    }
+
+    private RuleOutcome applyChecked(RuleInput input, WarmStart warm) {
         RuleOutcome none = Solved.unusable(NAME, input);
         if (none == null) {
             none = Solved.missingExpectedReturns(NAME, input);

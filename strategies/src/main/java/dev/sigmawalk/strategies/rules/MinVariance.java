@@ -42,7 +42,7 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
         if (none != null) {
             return none;
         }
-        return Solved.from(NAME, solve(input, warm), input, warm, notes);
+        return Solved.guarded(NAME, () -> Solved.from(NAME, solve(input, warm), input, warm, notes));
     }
 
     private SolveOutcome solve(RuleInput input, WarmStart warm) {

@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.study.Bounds;
 import dev.sigmawalk.strategies.optimize.SolveOutcome;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.Supplier;
 
 /** Conversions shared by the rules: bounds to arrays, solver outcomes to rule outcomes. */
 final class Solved {
@@ -48,6 +49,19 @@ final class Solved {
     static RuleOutcome chosen(double[] weights, RuleInput input, List<String> notes) {
         double variance = input.covariance().portfolioVariance(weights);
         return new RuleOutcome.Chosen(weights, Math.max(0, variance), notes);
+    }
+
+    /**
+     * Runs a rule's body, turning a rejected problem (for example a covariance that is not
+     * symmetric, which {@code QuadraticProblem} refuses) into NotFormed with the rejection's
+     * message rather than an exception that would stop the whole run.
+     */
+    static RuleOutcome guarded(String rule, Supplier<RuleOutcome> body) {
+        try {
+            return body.get();
+        } catch (IllegalArgumentException e) {
+            return new RuleOutcome.NotFormed(rule + ": " + e.getMessage());
+        }
     }
 
     /** NotFormed when the rule needs expected returns and none were given; null otherwise. */

@@ -191,6 +191,27 @@ class ActiveSetSolverEdgeTest {
         assertTrue(failed.reason().contains("unbounded"), failed.reason());
     }
 
+    /**
+     * Single factor with s = 0.01, β = (2, 1, 2, 2), d = (0.01, 0.0001, 0.01, 0.01), long only:
+     * w = (0, 1, 0, 0) is optimal because g2 = sβ2² + d2 = 0.0101 = ν and every other
+     * g_i = s β_i β2 = 0.02 ≥ ν (hand computation). Every weight is pinned (the second by the cap
+     * 1 that the budget implies), the vertex case of the fast paths.
+     */
+    @Test
+    void singleFactorVertex_allPathsGiveTheOneHeldAsset() {
+        SingleFactorForm form = RandomProblems.form(0.01, new double[] {2, 1, 2, 2},
+                new double[] {0.01, 0.0001, 0.01, 0.01});
+        double[] lo = new double[4];
+        double[] hi = {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY,
+            Double.POSITIVE_INFINITY};
+        double[] expected = {0, 1, 0, 0};
+        SingleFactorMinVariance fast = new SingleFactorMinVariance(settings);
+        assertWeights(expected, fast.threshold(form, lo, hi).orElseThrow(), EXACT);
+        assertWeights(expected, fast.thresholdByBisection(form, lo, hi).orElseThrow(), EXACT);
+        QuadraticProblem dense = new QuadraticProblem(4, SingleFactorMinVariance.dense(form), new double[4], lo, hi);
+        assertWeights(expected, solver.solve(dense), EXACT);
+    }
+
     /** No bounds at all: the active-set solver must agree with the closed form (same problem, two methods). */
     @Test
     void infiniteBounds_matchClosedForm() {

@@ -118,6 +118,16 @@ class MinVarianceRuleTest {
         assertTrue(failed.reason().contains("(P, Q) is NaN"), failed.reason());
     }
 
+    /** A covariance whose (0, 1) and (1, 0) entries differ is refused by the solver: NotFormed, not an exception. */
+    @Test
+    void asymmetricCovariance_isNotFormedNamingSymmetry() {
+        double[] sigma = {0.04, 0.01, 0.02, 0.01};
+        RuleOutcome out = rule.apply(new RuleInput(List.of("P", "Q"), TestCovariances.dense(sigma), null,
+                Optional.of(new Bounds(0, 1))), new WarmStart());
+        RuleOutcome.NotFormed failed = assertInstanceOf(RuleOutcome.NotFormed.class, out);
+        assertTrue(failed.reason().contains("not symmetric"), failed.reason());
+    }
+
     static RuleOutcome.Chosen assertChosen(double[] expected, RuleOutcome out, double tolerance) {
         RuleOutcome.Chosen chosen = assertInstanceOf(RuleOutcome.Chosen.class, out, () -> out.toString());
         for (int i = 0; i < expected.length; i++) {
