@@ -169,9 +169,28 @@ public final class MaxSharpeSolver {
                     + " solution of the transformed program");
         }
         SolveOutcome.Optimal refined = refine(sigma, mu, lower, upper, partition(start, lower, upper));
-        return refined != null ? refined
-                : new SolveOutcome.Failed("max-sharpe: no partition passed the KKT check after " + MAX_ROUNDS
-                        + " rounds of polishing");
+        if (refined != null) {
+            return refined;
+        }
+        String cause = positiveDefinite(sigma, mu.length) ? ""
+                : " (the covariance matrix is singular, so the highest Sharpe ratio may not be attained)";
+        return new SolveOutcome.Failed("max-sharpe: no partition passed the KKT check after " + MAX_ROUNDS
+                + " rounds of polishing" + cause);
+    }
+
+    /** Whether every Cholesky pivot of Σ clears the settings' singularity floor. */
+    private boolean positiveDefinite(double[] sigma, int n) {
+        CholeskyFactor factor = new CholeskyFactor(n);
+        double[] column = new double[n];
+        for (int i = 0; i < n; i++) {
+            for (int r = 0; r < i; r++) {
+                column[r] = sigma[r * n + i];
+            }
+            if (!factor.append(column, sigma[i * n + i], settings.singularPivot())) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

@@ -92,6 +92,21 @@ class MaxSharpeSolverTest {
         assertEquals(Double.NEGATIVE_INFINITY, value, "no feasible portfolio");
     }
 
+    /**
+     * Two copies of one asset (Σ = v·11', singular) with μ = (0.02, 0.01) and bounds [−1, 2]: on
+     * the budget every portfolio has variance v, so the Sharpe ratio (0.01 + 0.01 w1)/√v grows
+     * with w1 up to its bound: w = (2, −1) (hand computation).
+     */
+    @Test
+    void duplicateAssetPair_singularCovariance_takesTheBound() {
+        double v = 0.04;
+        double[] sigma = {v, v, v, v};
+        SolveOutcome out = solver.solve(sigma, new double[] {0.02, 0.01}, new double[] {-1, -1}, new double[] {2, 2});
+        SolveOutcome.Optimal optimal = assertInstanceOf(SolveOutcome.Optimal.class, out, out::toString);
+        assertEquals(2, optimal.weights()[0], 1e-12, "w1");
+        assertEquals(-1, optimal.weights()[1], 1e-12, "w2");
+    }
+
     /** Without bounds the tangency Σ⁻¹μ / 1'Σ⁻¹μ is found in closed form; a singular Σ is named. */
     @Test
     void unbounded_singularCovariance_isFailedNamingSingular() {
