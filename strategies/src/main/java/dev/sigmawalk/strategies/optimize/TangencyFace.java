@@ -1,5 +1,7 @@
 package dev.sigmawalk.strategies.optimize;
 
+import java.util.Arrays;
+
 /**
  * The maximum-Sharpe portfolio on one face of the box: with the weights of a partition pinned
  * (y_B = κ b_B after the change of variables y = κw), the remaining problem in (y_F, κ) has only
@@ -8,7 +10,28 @@ package dev.sigmawalk.strategies.optimize;
 final class TangencyFace {
     /** How far the pinned weights of a vertex may sum from 1 (rounding of the bound values). */
     private static final double VERTEX_BUDGET_SLACK = 1e-12;
+
     private TangencyFace() {
+    }
+
+    /**
+     * The free weights (in index order) and every weight's pinned value b_i (0 for free ones).
+     */
+    private record Face(int[] free, double[] pinned) {
+        static Face of(BoundSide[] sides, double[] lower, double[] upper) {
+            int n = sides.length;
+            int[] free = new int[n];
+            int k = 0;
+            double[] b = new double[n];
+            for (int i = 0; i < n; i++) {
+                if (sides[i] == BoundSide.FREE) {
+                    free[k++] = i;
+                } else {
+                    b[i] = sides[i] == BoundSide.LOWER ? lower[i] : upper[i];
+                }
+            }
+            return new Face(Arrays.copyOf(free, k), b);
+        }
     }
 
     /**
@@ -18,67 +41,68 @@ final class TangencyFace {
      * null when the system is singular or κ ≤ 0.
      */
     static double[] solve(double[] sigma, double[] mu, double[] lower, double[] upper, BoundSide[] sides) {
-        int n = mu.length;
-        int[] free = new int[n];
-        int k = 0;
-        double[] b = new double[n];
-        for (int i = 0; i < n; i++) {
-            if (sides[i] == BoundSide.FREE) {
-                free[k++] = i;
-            } else {
-                b[i] = sides[i] == BoundSide.LOWER ? lower[i] : upper[i];
-            }
-        }
+        Face face = Face.of(sides, lower, upper);
+        int k = face.free().length;
         if (k == 0) {
-            return vertex(b);
+            return vertex(face.pinned());
         }
         int m = k + 3;
-        double[] a = new double[m * m];
+        double[] a = kktMatrix(sigma, mu, face);
         double[] rhs = new double[m];
+        rhs[k + 1] = 1;
+        if (!DenseSystem.solveInPlace(a, rhs, m) || !(rhs[k] > 0)) {
+            return null;
+        }
+        double[] w = face.pinned().clone();
+        for (int r = 0; r < k; r++) {
+            w[face.free()[r]] = rhs[r] / rhs[k];
+        }
+        return w;
+    }
+
+    /**
+     * The (k+3)×(k+3) KKT matrix, unknowns ordered (y_F, κ, η_μ, η_budget): rows 0..k-1 and k
+     * hold 2M and the constraint gradients, rows k+1 and k+2 the constraints μ_F'y_F + κ μ_B'b_B
+     * = 1 and 1'y_F + κ (1'b_B − 1) = 0.
+     */
+    private static double[] kktMatrix(double[] sigma, double[] mu, Face face) {
+        int n = mu.length;
+        int[] free = face.free();
+        double[] b = face.pinned();
+        int k = free.length;
+        int m = k + 3;
         double[] sigmaB = new double[n];
-        double bSigmaB = 0;
         double muB = 0;
         double sumB = 0;
         for (int i = 0; i < n; i++) {
-            if (b[i] == 0) {
-                continue;
-            }
-            muB += mu[i] * b[i];
-            sumB += b[i];
-            for (int j = 0; j < n; j++) {
-                sigmaB[j] += sigma[j * n + i] * b[i];
+            if (b[i] != 0) {
+                muB += mu[i] * b[i];
+                sumB += b[i];
+                for (int j = 0; j < n; j++) {
+                    sigmaB[j] += sigma[j * n + i] * b[i];
+                }
             }
         }
-        for (int i = 0; i < n; i++) {
-            bSigmaB += b[i] * sigmaB[i];
-        }
-        int kappa = k;
+        double[] a = new double[m * m];
         for (int r = 0; r < k; r++) {
             int i = free[r];
             for (int s = 0; s < k; s++) {
                 a[r * m + s] = 2 * sigma[i * n + free[s]];
             }
-            a[r * m + kappa] = 2 * sigmaB[i];
-            a[kappa * m + r] = 2 * sigmaB[i];
-            a[r * m + k + 1] = mu[i];
-            a[(k + 1) * m + r] = mu[i];
-            a[r * m + k + 2] = 1;
-            a[(k + 2) * m + r] = 1;
+            setPair(a, m, r, k, 2 * sigmaB[i]);
+            setPair(a, m, r, k + 1, mu[i]);
+            setPair(a, m, r, k + 2, 1);
         }
-        a[kappa * m + kappa] = 2 * bSigmaB;
-        a[kappa * m + k + 1] = muB;
-        a[(k + 1) * m + kappa] = muB;
-        a[kappa * m + k + 2] = sumB - 1;
-        a[(k + 2) * m + kappa] = sumB - 1;
-        rhs[k + 1] = 1;
-        if (!DenseSystem.solveInPlace(a, rhs, m) || !(rhs[kappa] > 0)) {
-            return null;
-        }
-        double[] w = b.clone();
-        for (int r = 0; r < k; r++) {
-            w[free[r]] = rhs[r] / rhs[kappa];
-        }
-        return w;
+        a[k * m + k] = 2 * WorkingSet.dot(b, sigmaB);
+        setPair(a, m, k, k + 1, muB);
+        setPair(a, m, k, k + 2, sumB - 1);
+        return a;
+    }
+
+    /** a[r][c] = a[c][r] = v. */
+    private static void setPair(double[] a, int m, int r, int c, double v) {
+        a[r * m + c] = v;
+        a[c * m + r] = v;
     }
 
     /**

@@ -177,6 +177,16 @@ final class WorkingSet {
         return a;
     }
 
+    /** Σ_i a_i b_i over the full length. */
+    static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += a[i] * b[i];
+        }
+        return s;
+    }
+
+    /** Σ of the first k entries. */
     static double sum(double[] v, int k) {
         double s = 0;
         for (int r = 0; r < k; r++) {
