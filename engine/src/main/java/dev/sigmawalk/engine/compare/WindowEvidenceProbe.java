@@ -3,6 +3,7 @@ package dev.sigmawalk.engine.compare;
 import dev.sigmawalk.engine.evidence.ResidualCorrelations;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.run.WindowProbe;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -12,6 +13,9 @@ import java.util.Optional;
  * (O(n²) per window, no second pass over the data).
  */
 public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
+    /** The group of assets the sectors file does not name. */
+    public static final String UNLISTED = "(no sector given)";
+
     private final Map<String, String> sectors;
     private final int pairs;
 
@@ -34,6 +38,15 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         }
         ResidualCorrelations rho = ResidualCorrelations.of(window);
         return new WindowEvidence(window.date(), window.length(), Optional.of(rho.diagnostics()),
-                rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectors)));
+                rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectorsOf(window))));
+    }
+
+    /** Every asset of the window with its sector; assets the sectors file does not list form their own group. */
+    private Map<String, String> sectorsOf(EstimationWindow window) {
+        Map<String, String> out = new HashMap<>();
+        for (String a : window.assets()) {
+            out.put(a, sectors.getOrDefault(a, UNLISTED));
+        }
+        return out;
     }
 }

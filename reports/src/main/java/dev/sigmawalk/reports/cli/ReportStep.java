@@ -11,7 +11,6 @@ import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.reports.html.DiagnosticsPoint;
 import dev.sigmawalk.reports.html.InputFile;
-import dev.sigmawalk.reports.html.PairComparison;
 import dev.sigmawalk.reports.html.ReportData;
 import dev.sigmawalk.reports.html.ReportEvidence;
 import dev.sigmawalk.reports.html.ReportWriter;
@@ -40,7 +39,7 @@ final class ReportStep {
         RunRecord record = new RunRecord(VersionProvider.version(), inputs, panel.date(0),
                 panel.date(panel.rows() - 1), panel.assetCount(), started, Instant.now(), warnings);
         ReportEvidence evidence = new ReportEvidence(diagnostics(run, study.walkForward().windows()),
-                pairs(comparisons), Optional.of(new InputListSize(panel.assetCount())));
+                comparisons, Optional.of(new InputListSize(panel.assetCount())));
         try {
             new ReportWriter().write(new ReportData(study, run, summaries, record, evidence), dir.resolve("report.html"),
                     dir.resolve("charts"));
@@ -54,20 +53,11 @@ final class ReportStep {
         for (int w : windows) {
             List<DiagnosticsPoint> points = new ArrayList<>();
             for (WindowEvidence e : run.probes().getOrDefault(w, List.of())) {
-                e.diagnostics().ifPresent(d -> points.add(new DiagnosticsPoint(e.date(), d, e.largestPairs())));
+                e.diagnostics().ifPresent(d -> points.add(new DiagnosticsPoint(e.date(), d, e.largestPairs(), e.sectors())));
             }
             if (!points.isEmpty()) {
                 out.add(new WindowDiagnostics(w, points));
             }
-        }
-        return out;
-    }
-
-    private static List<PairComparison> pairs(List<Comparison> comparisons) {
-        List<PairComparison> out = new ArrayList<>();
-        for (Comparison c : comparisons) {
-            out.add(new PairComparison(c.strategy(), c.baseline(), c.window(), c.sharpe(), c.variance(),
-                    c.jobsonKorkie(), c.holmSharpe(), c.holmVariance(), c.skipped()));
         }
         return out;
     }

@@ -55,6 +55,8 @@ public final class SigmawalkCommand implements Runnable {
     }
 
     public static void main(String[] args) {
+        // Charts are drawn off-screen; set before any AWT class loads so no display is needed.
+        System.setProperty("java.awt.headless", "true");
         CommandLine cl = commandLine();
         int code = cl.execute(args);
         System.exit(code);

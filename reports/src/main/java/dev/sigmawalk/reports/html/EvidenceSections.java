@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.evidence.DifferenceTest;
 import dev.sigmawalk.engine.evidence.InputListSize;
 import dev.sigmawalk.engine.evidence.ResidualPair;
@@ -67,6 +68,11 @@ final class EvidenceSections {
                 + "Breusch-Pagan (1980) tests the sum of squared residual correlations; Pesaran (2004) tests their sum "
                 + "and stays reliable when there are many assets for the window length. Frequent rejections mean "
                 + "assets share influences beyond the market, such as an industry.");
+        SectorReading reading = SectorReading.of(longest);
+        if (!reading.isEmpty()) {
+            answer += " " + sectorAnswer(reading, longest.window());
+            notes.add(sectorNote(reading, longest.window()));
+        }
         List<ResidualPair> pairs = longest.latest().largestPairs();
         if (!pairs.isEmpty()) {
             List<String> items = new ArrayList<>();
@@ -84,8 +90,35 @@ final class EvidenceSections {
                 rows, notes, List.of(residualChart(windows))));
     }
 
+    private static String sectorAnswer(SectorReading reading, int window) {
+        List<SectorReading.Sector> moving = reading.coMoving();
+        String across = reading.across().isPresent()
+                ? "; between sectors it averaged " + Formats.ratio(reading.across().getAsDouble()) : "";
+        if (moving.isEmpty()) {
+            return "No sector's residuals moved together on average (every within-sector mean stayed below "
+                    + Formats.ratio(SectorReading.CO_MOVING) + across + ").";
+        }
+        List<String> names = new ArrayList<>();
+        for (SectorReading.Sector s : moving) {
+            names.add(s.name() + " (" + Formats.ratio(s.meanCorrelation()) + ")");
+        }
+        return "Residuals moved together within " + Words.list(names) + ", averaged over every rebalance of the "
+                + window + "-period window" + across + ": the market alone does not explain "
+                + (moving.size() == 1 ? "that sector" : "those sectors") + ".";
+    }
+
+    private static String sectorNote(SectorReading reading, int window) {
+        List<String> items = new ArrayList<>();
+        for (SectorReading.Sector s : reading.sectors()) {
+            items.add(s.name() + " " + Formats.ratio(s.meanCorrelation()) + " (" + s.assets() + " assets)");
+        }
+        return "Mean residual correlation within each sector, averaged over the rebalances of the " + window
+                + "-period window (a sector at or above " + Formats.ratio(SectorReading.CO_MOVING)
+                + " is read as co-moving, a rule of thumb): " + String.join("; ", items) + ".";
+    }
+
     Optional<ReportView.EvidenceBlock> differences() {
-        List<PairComparison> comparisons = data.evidence().comparisons();
+        List<Comparison> comparisons = data.evidence().comparisons();
         if (comparisons.isEmpty()) {
             return Optional.empty();
         }
@@ -94,7 +127,7 @@ final class EvidenceSections {
         int sharpeRejected = 0;
         int varianceRejected = 0;
         String method = "";
-        for (PairComparison c : comparisons) {
+        for (Comparison c : comparisons) {
             String sharpe = c.sharpe().map(t -> Formats.ratio(rootP * t.first()) + " vs " + Formats.ratio(rootP * t.second()))
                     .orElse(Formats.NOT_APPLICABLE);
             String vol = c.variance().map(t -> Formats.ratio(Math.sqrt(t.first() / t.second()))).orElse(Formats.NOT_APPLICABLE);

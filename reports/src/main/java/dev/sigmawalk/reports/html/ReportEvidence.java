@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.evidence.InputListSize;
 import java.util.List;
 import java.util.Objects;
@@ -13,7 +14,7 @@ import java.util.Optional;
  * @param comparisons strategy-against-baseline tests
  * @param inputList estimates needed per rebalance by the full and the single-index model
  */
-public record ReportEvidence(List<WindowDiagnostics> diagnostics, List<PairComparison> comparisons,
+public record ReportEvidence(List<WindowDiagnostics> diagnostics, List<Comparison> comparisons,
                              Optional<InputListSize> inputList) {
     public ReportEvidence {
         diagnostics = List.copyOf(diagnostics);

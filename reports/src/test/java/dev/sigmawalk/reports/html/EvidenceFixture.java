@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.evidence.DifferenceTest;
 import dev.sigmawalk.engine.evidence.DifferenceTests;
 import dev.sigmawalk.engine.evidence.HacKernel;
@@ -56,7 +57,7 @@ final class EvidenceFixture {
         return new ReportEvidence(diagnostics, comparisons(run), Optional.of(new InputListSize(INPUT_LIST_ASSETS)));
     }
 
-    private static List<PairComparison> comparisons(RunResult<?> run) {
+    private static List<Comparison> comparisons(RunResult<?> run) {
         DifferenceTests tests = new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(200, 7L, 0));
         List<DifferenceTest> sharpe = new ArrayList<>();
         List<DifferenceTest> variance = new ArrayList<>();
@@ -70,11 +71,11 @@ final class EvidenceFixture {
         }
         double[] holmSharpe = HolmAdjustment.adjust(sharpe.stream().mapToDouble(DifferenceTest::bootstrapPValue).toArray());
         double[] holmVariance = HolmAdjustment.adjust(variance.stream().mapToDouble(DifferenceTest::bootstrapPValue).toArray());
-        List<PairComparison> out = new ArrayList<>();
+        List<Comparison> out = new ArrayList<>();
         for (int k = 0; k < pairs.size(); k++) {
             PathResult a = pairs.get(k)[0];
             PathResult b = pairs.get(k)[1];
-            out.add(new PairComparison("pulled", "diag", a.window(), Optional.of(sharpe.get(k)), Optional.of(variance.get(k)),
+            out.add(new Comparison("pulled", "diag", a.window(), Optional.of(sharpe.get(k)), Optional.of(variance.get(k)),
                     Optional.of(JobsonKorkieMemmel.test(SeriesStats.minus(a.net(), run.riskFree()),
                             SeriesStats.minus(b.net(), run.riskFree()))),
                     holmSharpe[k], holmVariance[k], Optional.empty()));

@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.compare.Comparison;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -61,7 +62,7 @@ class EvidenceSectionsTest {
         Elements rows = doc.getElementById("differences").select("tbody tr");
         assertEquals(data.evidence().comparisons().size(), rows.size());
         for (int k = 0; k < rows.size(); k++) {
-            PairComparison c = data.evidence().comparisons().get(k);
+            Comparison c = data.evidence().comparisons().get(k);
             var t = c.sharpe().orElseThrow();
             String expected = String.format(Locale.ROOT, "%.2f vs %.2f", Math.sqrt(12) * t.first(), Math.sqrt(12) * t.second());
             assertEquals(expected, rows.get(k).select("td").get(3).text(), "row " + k);

@@ -1,0 +1,49 @@
+package dev.sigmawalk.reports.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.jsoup.Jsoup;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+/**
+ * The built-in demo end to end. The sample universe is generated with residuals that share a
+ * sector shock in exactly three sectors (Tidewater Power ρ = 0.30, Lending Houses 0.22, Ferry and
+ * Freight 0.15; sample-universe/README.md, "The model and the true parameters"): the report must
+ * find those three and no other.
+ */
+class DemoCommandTest {
+
+    @Test
+    void demo_findsTheSectorsBuiltToCoMove(@TempDir Path out) throws IOException {
+        CommandLine cl = SigmawalkCommand.commandLine();
+        StringWriter err = new StringWriter();
+        cl.setErr(new PrintWriter(err));
+        cl.setOut(new PrintWriter(new StringWriter()));
+        int code = cl.execute("demo", "--out", out.resolve("demo").toString(), "--quiet");
+        assertEquals(0, code, err.toString());
+        Document doc = Jsoup.parse(out.resolve("demo").resolve("report.html").toFile(), "UTF-8");
+        Element section = doc.getElementById("single-index-check");
+        assertTrue(section != null, "the single-index check section exists");
+        String answer = section.text();
+        for (String built : new String[] {"Tidewater Power", "Lending Houses", "Ferry and Freight"}) {
+            assertTrue(answer.contains(built), built + " named in: " + answer);
+        }
+        String verdict = answer.substring(answer.indexOf("Residuals moved together within"),
+                answer.indexOf("averaged over every rebalance"));
+        for (String calm : new String[] {"Saltworks", "Orchard", "Glass", "Signal", "Timber"}) {
+            assertFalse(verdict.contains(calm), calm + " must not be read as co-moving: " + verdict);
+        }
+        assertTrue(Files.size(out.resolve("demo").resolve("report.html")) < 5L * 1024 * 1024, "report under 5 MiB");
+    }
+}
