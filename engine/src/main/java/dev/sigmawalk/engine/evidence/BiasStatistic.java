@@ -56,6 +56,39 @@ public record BiasStatistic(int periods, double value, double bandLow, double ba
         return new BiasStatistic(n, Math.sqrt(squares / (n - 1)), 1 - halfWidth, 1 + halfWidth, (double) beyond / n);
     }
 
+    /**
+     * The statistic over the rows that had a forecast: rows whose σ̂ is not a positive number
+     * (a rebalance where no portfolio was formed leaves NaN) are left out.
+     *
+     * @return empty when fewer than two rows had a forecast
+     */
+    public static java.util.Optional<BiasStatistic> overForecastRows(double[] returns, double[] riskFree,
+                                                                     double[] forecastVolatility) {
+        SeriesChecks.requireSameLength("returns", returns, "forecast volatilities", forecastVolatility);
+        SeriesChecks.requireSameLength("returns", returns, "risk-free rates", riskFree);
+        int count = 0;
+        for (double v : forecastVolatility) {
+            if (v > 0) {
+                count++;
+            }
+        }
+        if (count < 2) {
+            return java.util.Optional.empty();
+        }
+        double[] r = new double[count];
+        double[] f = new double[count];
+        double[] s = new double[count];
+        int k = 0;
+        for (int t = 0; t < returns.length; t++) {
+            if (forecastVolatility[t] > 0) {
+                r[k] = returns[t];
+                f[k] = riskFree[t];
+                s[k++] = forecastVolatility[t];
+            }
+        }
+        return java.util.Optional.of(of(r, f, s));
+    }
+
     /** True when the statistic lies inside the rough 95 % band. */
     public boolean withinBand() {
         return value >= bandLow && value <= bandHigh;

@@ -1,5 +1,6 @@
 package dev.sigmawalk.engine.measures;
 
+import dev.sigmawalk.engine.evidence.BiasStatistic;
 import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.RebalanceRecord;
 import java.util.List;
@@ -88,18 +89,7 @@ public final class PerformanceMeasures {
      * R_t gross (Menchero, Wang & Orr 2011). Empty with fewer than two such rows.
      */
     OptionalDouble bias(PathResult path) {
-        double[] g = path.gross();
-        double[] sigma = path.forecastVolatility();
-        double[] z = new double[g.length];
-        int count = 0;
-        for (int k = 0; k < g.length; k++) {
-            if (sigma[k] > 0) {
-                z[count++] = (g[k] - riskFree[k]) / sigma[k];
-            }
-        }
-        if (count < 2) {
-            return OptionalDouble.empty();
-        }
-        return OptionalDouble.of(SeriesStats.sd(java.util.Arrays.copyOf(z, count)));
+        return BiasStatistic.overForecastRows(path.gross(), riskFree, path.forecastVolatility())
+                .map(b -> OptionalDouble.of(b.value())).orElse(OptionalDouble.empty());
     }
 }

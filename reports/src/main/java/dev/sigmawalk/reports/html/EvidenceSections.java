@@ -144,6 +144,7 @@ final class EvidenceSections {
         String answer = "Of " + comparisons.size() + " comparisons with a baseline, " + Words.howMany(varianceRejected)
                 + " showed a difference in volatility and " + Words.howMany(sharpeRejected) + " a difference in Sharpe ratio that is "
                 + "unlikely to be chance (Holm-adjusted bootstrap p-value at or below 5 %).";
+        answer += windowChoice(comparisons);
         List<String> notes = new ArrayList<>();
         notes.add("Each p-value is the chance of a difference at least this large if the two strategies were in truth "
                 + "equally good. p-values are given as HAC / bootstrap / Holm-adjusted bootstrap; the Holm adjustment "
@@ -156,6 +157,38 @@ final class EvidenceSections {
                 answer, List.of("Strategy", "Baseline", "Window", "Sharpe ratio (strategy vs baseline)",
                         "Sharpe p-values", "Volatility ratio", "Variance p-values", "Jobson-Korkie p", "Note"),
                 rows, notes, List.of()));
+    }
+
+    /**
+     * Choosing the window is a test too: the comparison with the strongest volatility edge (the
+     * smallest bootstrap p-value among strategies less volatile than their baseline), and whether
+     * that edge survives Holm's correction for the number of windows tried.
+     */
+    static String windowChoice(List<Comparison> comparisons) {
+        Comparison best = null;
+        for (Comparison c : comparisons) {
+            if (c.variance().isPresent() && c.variance().get().difference() < 0 && !Double.isNaN(c.holmVariance())
+                    && (best == null || c.variance().get().bootstrapPValue() < best.variance().get().bootstrapPValue())) {
+                best = c;
+            }
+        }
+        if (best == null) {
+            return " No strategy was less volatile than its baseline at any window.";
+        }
+        DifferenceTest t = best.variance().get();
+        final String strategy = best.strategy();
+        final String baseline = best.baseline();
+        long tried = comparisons.stream().filter(c -> c.strategy().equals(strategy) && c.baseline().equals(baseline)
+                && c.variance().isPresent()).count();
+        double lower = 1 - Math.sqrt(t.first() / t.second());
+        boolean survives = best.holmVariance() <= LEVEL;
+        return " The strongest edge in volatility was " + strategy + " over " + baseline + " with the "
+                + best.window() + "-period window (" + Formats.percent(lower) + " lower; bootstrap p-value "
+                + Formats.pValue(t.bootstrapPValue()) + ")." + (tried > 1
+                ? " Because " + tried + " windows were tried and the best one is reported, its p-value after Holm's "
+                        + "correction is " + Formats.pValue(best.holmVariance()) + ": the edge "
+                        + (survives ? "survives" : "does not survive") + " that correction at the 5 % level."
+                : "");
     }
 
     Optional<ReportView.EvidenceBlock> inputList() {

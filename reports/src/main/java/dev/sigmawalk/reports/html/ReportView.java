@@ -67,7 +67,7 @@ public record ReportView(String title, String subtitle, List<Swatch> palette, Li
     }
 
     public record HonestyRow(String name, String cssClass, String window, String forecast, String realised,
-                             String bias, String band, String periods, String verdict) {
+                             String bias, String band, String beyondTwo, String periods, String verdict) {
     }
 
     public record Concentration(String answer, List<ConcentrationRow> rows, List<Figure> figures) {

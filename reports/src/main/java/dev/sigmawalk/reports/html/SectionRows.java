@@ -2,6 +2,7 @@ package dev.sigmawalk.reports.html;
 
 import dev.sigmawalk.engine.evidence.VolatilityByYear;
 import dev.sigmawalk.engine.evidence.YearVolatility;
+import dev.sigmawalk.engine.evidence.BiasStatistic;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.reports.charts.StyleBook;
@@ -49,9 +50,11 @@ final class SectionRows {
                 double v = s.bias().getAsDouble();
                 verdict = b.contains(v) ? "inside the band" : v > b.high() ? "risk understated" : "risk overstated";
             }
+            String beyond = BiasStatistic.overForecastRows(p.gross(), data.run().riskFree(), p.forecastVolatility())
+                    .map(b -> Formats.percent(b.shareBeyondTwo())).orElse(Formats.NOT_APPLICABLE);
             rows.add(new ReportView.HonestyRow(p.strategy(), css(p), Words.periods(p.window()),
                     Formats.percent(s.forecastVolatility()), Formats.percent(s.volatility()), Formats.ratio(s.bias()),
-                    band, Integer.toString(n), verdict));
+                    band, beyond, Integer.toString(n), verdict));
         }
         return rows;
     }
