@@ -27,6 +27,7 @@ import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -58,15 +59,18 @@ final class StudyRun {
 
     static Outcome execute(Path studyFile, Options options, PrintStream err) {
         Instant started = Instant.now();
+        long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
         List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
             RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
                     new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS)).run(options.threads(), progress);
+            long walked = System.nanoTime();
             List<Summary> summaries = summaries(run);
             List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
                     study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
@@ -78,10 +82,17 @@ final class StudyRun {
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
             EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
             EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons);
+            long tested = System.nanoTime();
             ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
+            long reported = System.nanoTime();
+            Map<String, Double> seconds = new LinkedHashMap<>();
+            seconds.put("read_and_check", (loaded - begin) / 1e9);
+            seconds.put("walk_forward", (walked - loaded) / 1e9);
+            seconds.put("measures_tests_and_csv", (tested - walked) / 1e9);
+            seconds.put("report", (reported - tested) / 1e9);
             Manifest.write(dir.resolve("manifest.json"), new Manifest.Content(VersionProvider.version(), study,
                     data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
-                    Instant.now(), options.threads()));
+                    Instant.now(), options.threads(), seconds));
             folder.commit();
             return new Outcome(folder.target(), summaries, run);
         }

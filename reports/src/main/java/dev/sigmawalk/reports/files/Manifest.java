@@ -20,6 +20,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
+import java.util.Map;
 
 /**
  * {@code manifest.json}: what was run, on what, by which version, and what went wrong along the
@@ -32,7 +33,7 @@ public final class Manifest {
     /** Everything the manifest records. */
     public record Content(String version, Study study, ReturnPanel panel, boolean periodsInferred,
                           List<FileFingerprint> inputs, RunResult<?> run, List<String> warnings, Instant started,
-                          Instant finished, int threads) {
+                          Instant finished, int threads, Map<String, Double> seconds) {
     }
 
     public static void write(Path file, Content c) {
@@ -70,6 +71,8 @@ public final class Manifest {
         root.put("started", c.started().toString());
         root.put("finished", c.finished().toString());
         root.put("threads", c.threads());
+        ObjectNode timing = root.putObject("seconds");
+        c.seconds().forEach(timing::put);
         try {
             Files.writeString(file, mapper.writeValueAsString(root) + "\n", StandardCharsets.UTF_8);
         } catch (IOException e) {
