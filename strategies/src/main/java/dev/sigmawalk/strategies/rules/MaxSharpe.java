@@ -41,10 +41,7 @@ public record MaxSharpe(SolverSettings settings) implements PortfolioRule {
     }
 
     private RuleOutcome applyChecked(RuleInput input, WarmStart warm) {
-        RuleOutcome none = Solved.unusable(NAME, input);
-        if (none == null) {
-            none = Solved.missingExpectedReturns(NAME, input);
-        }
+        RuleOutcome none = Solved.unusableWithoutReturns(NAME, input);
         if (none != null) {
             return none;
         }

@@ -32,10 +32,7 @@ public record MeanVariance(double riskAversion, SolverSettings settings) impleme
     }
 
     private RuleOutcome applyChecked(RuleInput input, WarmStart warm) {
-        RuleOutcome none = Solved.unusable(NAME, input);
-        if (none == null) {
-            none = Solved.missingExpectedReturns(NAME, input);
-        }
+        RuleOutcome none = Solved.unusableWithoutReturns(NAME, input);
         if (none != null) {
             return none;
         }

@@ -64,6 +64,15 @@ final class Solved {
         }
     }
 
+    /**
+     * For rules that use expected returns: NotFormed when the input is unusable or carries no
+     * expected returns; null when the rule may proceed.
+     */
+    static RuleOutcome unusableWithoutReturns(String rule, RuleInput input) {
+        RuleOutcome none = unusable(rule, input);
+        return none != null ? none : missingExpectedReturns(rule, input);
+    }
+
     /** NotFormed when the rule needs expected returns and none were given; null otherwise. */
     static RuleOutcome missingExpectedReturns(String rule, RuleInput input) {
         return input.expectedReturns() == null
