@@ -135,12 +135,13 @@ public final class ResidualCorrelations {
         PriorityQueue<int[]> kept = new PriorityQueue<>(Math.max(1, k), better);
         for (int i = 0; i < n && k > 0; i++) {
             for (int j = i + 1; j < n; j++) {
-                int[] pair = {i, j};
                 if (kept.size() < k) {
-                    kept.add(pair);
-                } else if (better.compare(pair, kept.peek()) > 0) {
+                    kept.add(new int[] {i, j});
+                } else if (correlation(i, j) > correlation(kept.peek()[0], kept.peek()[1])) {
+                    // Pairs come in ascending (i, j) order, so a later pair that only ties the
+                    // worst kept one never beats it: comparing the correlations alone is exact.
                     kept.poll();
-                    kept.add(pair);
+                    kept.add(new int[] {i, j});
                 }
             }
         }
