@@ -16,22 +16,21 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ForkJoinTask;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
- * The walk-forward loop. For each window length (in parallel, one thread per length), at each
- * rebalance τ it builds one estimation window from rows τ−L+1..τ, lets every strategy decide on
+ * The walk-forward loop. For each window length (window lengths run in parallel, and so do the
+ * strategies' decisions at one rebalance), at each rebalance τ it builds one estimation window from rows τ−L+1..τ, lets every strategy decide on
  * that same window (so the window's moments are computed once and shared), then holds each
  * strategy's portfolio over the rows up to the next rebalance. The moments come from running
  * sums per window length ({@link RunningMoments}), moved from one rebalance to the next by
  * adding and removing rows.
  *
- * <p>Every path is computed by one thread in date order and written into a slot fixed by study
- * order, so the result does not depend on the number of threads.
+ * <p>Every path is advanced by one task at a time in date order, with its own allocator and
+ * book, and written into a slot fixed by study order, so the result does not depend on the
+ * number of threads. The running sums of a window length are moved only by that length's task.
  */
 public final class WalkForward<T> {
     private final ReturnPanel panel;
@@ -75,15 +74,9 @@ public final class WalkForward<T> {
         WindowBuilder builder = new WindowBuilder(panel);
         int total = schedule.count() * windows.size();
         AtomicInteger done = new AtomicInteger();
-        List<WindowRun> outcomes = new ArrayList<>();
-        int workers = Math.max(1, Math.min(threads, windows.size()));
-        if (workers == 1) {
-            for (int w : windows) {
-                outcomes.add(runWindow(builder, w, done, total, listener));
-            }
-        } else {
-            outcomes.addAll(runInParallel(builder, workers, done, total, listener));
-        }
+        List<WindowRun> outcomes = threads <= 1
+                ? sequential(builder, done, total, listener)
+                : parallel(builder, threads, done, total, listener);
         List<PathResult> paths = new ArrayList<>();
         Map<Integer, List<T>> probes = new LinkedHashMap<>();
         for (WindowRun o : outcomes) {
@@ -103,39 +96,41 @@ public final class WalkForward<T> {
         return new RunResult<>(dates, market, rf, panel.periodsPerYear(), schedule, paths, probes);
     }
 
-    private List<WindowRun> runInParallel(WindowBuilder builder, int workers, AtomicInteger done, int total,
-                                          ProgressListener listener) {
-        ExecutorService pool = Executors.newFixedThreadPool(workers, r -> {
-            Thread t = new Thread(r, "sigmawalk-window");
-            t.setDaemon(true);
-            return t;
-        });
+    private List<WindowRun> sequential(WindowBuilder builder, AtomicInteger done, int total,
+                                       ProgressListener listener) {
+        List<WindowRun> out = new ArrayList<>();
+        for (int w : windows) {
+            out.add(runWindow(builder, w, done, total, listener, false));
+        }
+        return out;
+    }
+
+    /**
+     * Windows run as tasks of one fork-join pool, and at each rebalance the strategies of a
+     * window decide as subtasks of the same pool, so both levels share the cores: a study with
+     * one window still uses every core, and a window that finishes last is not left alone.
+     * Each path is still advanced by one task at a time, in date order.
+     */
+    private List<WindowRun> parallel(WindowBuilder builder, int threads, AtomicInteger done, int total,
+                                     ProgressListener listener) {
+        ForkJoinPool pool = new ForkJoinPool(threads);
         try {
-            List<Future<WindowRun>> futures = new ArrayList<>();
+            List<ForkJoinTask<WindowRun>> tasks = new ArrayList<>();
             for (int w : windows) {
-                futures.add(pool.submit(() -> runWindow(builder, w, done, total, listener)));
+                tasks.add(pool.submit(() -> runWindow(builder, w, done, total, listener, true)));
             }
             List<WindowRun> out = new ArrayList<>();
-            for (Future<WindowRun> f : futures) {
-                out.add(f.get());
+            for (ForkJoinTask<WindowRun> t : tasks) {
+                out.add(t.join());
             }
             return out;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("walk-forward run interrupted", e);
-        } catch (ExecutionException e) {
-            Throwable cause = e.getCause();
-            if (cause instanceof RuntimeException re) {
-                throw re;
-            }
-            throw new IllegalStateException("walk-forward run failed: " + cause, cause);
         } finally {
             pool.shutdownNow();
         }
     }
 
     private WindowRun runWindow(WindowBuilder builder, int length, AtomicInteger done, int total,
-                                ProgressListener listener) {
+                                ProgressListener listener, boolean forkStrategies) {
         int s = strategies.size();
         PathState[] states = new PathState[s];
         for (int k = 0; k < s; k++) {
@@ -153,8 +148,12 @@ public final class WalkForward<T> {
             if (probe != null) {
                 probed.add(probe.probe(window));
             }
-            for (PathState st : states) {
-                st.rebalance(window, panel);
+            if (forkStrategies && states.length > 1) {
+                decideInParallel(states, window);
+            } else {
+                for (PathState st : states) {
+                    st.rebalance(window, panel);
+                }
             }
             for (int t = tau + 1; t <= schedule.holdEnd(j); t++) {
                 for (PathState st : states) {
@@ -172,6 +171,21 @@ public final class WalkForward<T> {
             paths.add(states[k].result(def.name(), def.riskLabel(), length));
         }
         return new WindowRun(length, paths, probed);
+    }
+
+    /**
+     * Every strategy decides on the same window at once. The window's moments are computed
+     * first, on this thread, because the window computes them lazily and is not thread-safe.
+     */
+    private void decideInParallel(PathState[] states, EstimationWindow window) {
+        if (window.assetCount() > 0) {
+            window.moments();
+        }
+        List<ForkJoinTask<?>> decisions = new ArrayList<>(states.length);
+        for (PathState st : states) {
+            decisions.add(ForkJoinTask.adapt(() -> st.rebalance(window, panel)));
+        }
+        ForkJoinTask.invokeAll(decisions);
     }
 
     private final class WindowRun {

@@ -103,6 +103,33 @@ class WalkForwardTest {
         assertEquals(one.probes(), two.probes());
     }
 
+    /**
+     * One window and several strategies: the strategies decide in parallel at each rebalance,
+     * and the result equals the one-thread run bit for bit.
+     */
+    @Test
+    void oneWindow_strategiesDecidingInParallel_matchOneThread() {
+        ReturnPanel panel = TestPanels.random(90, 7, 17);
+        WalkForwardSpec spec = new WalkForwardSpec(List.of(30), new RebalanceRule.EveryRows(2), Optional.empty(),
+                Optional.empty(), 5);
+        Schedule schedule = Timeline.plan(panel, spec);
+        List<StrategyDefinition> strategies = List.of(new InverseVarianceStrategy("a", -1),
+                new InverseVarianceStrategy("b", 41), new InverseVarianceStrategy("c", 60),
+                new InverseVarianceStrategy("d", -1));
+        RunResult<Integer> one = new WalkForward<>(panel, schedule, strategies, List.of(30), 5,
+                EstimationWindowProbe.COUNT).run(1, ProgressListener.NONE);
+        RunResult<Integer> four = new WalkForward<>(panel, schedule, strategies, List.of(30), 5,
+                EstimationWindowProbe.COUNT).run(4, ProgressListener.NONE);
+        for (int p = 0; p < one.paths().size(); p++) {
+            assertArrayEquals(one.paths().get(p).net(), four.paths().get(p).net(), 0.0, "path " + p);
+            assertEquals(one.paths().get(p).rebalances().size(), four.paths().get(p).rebalances().size());
+            for (int j = 0; j < one.paths().get(p).rebalances().size(); j++) {
+                assertArrayEquals(one.paths().get(p).rebalances().get(j).weights(),
+                        four.paths().get(p).rebalances().get(j).weights(), 0.0, "path " + p + " rebalance " + j);
+            }
+        }
+    }
+
     /** All windows share one out-of-sample period starting after τ_0 = L_max − 1 (METHODS §2). */
     @Test
     void everyWindow_sharesTheOutOfSamplePeriod() {
