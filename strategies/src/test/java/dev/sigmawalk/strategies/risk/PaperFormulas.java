@@ -3,7 +3,7 @@ package dev.sigmawalk.strategies.risk;
 import dev.sigmawalk.engine.model.EstimationWindow;
 
 /**
- * A literal, pair-by-pair transcription of the Ledoit-Wolf intensity estimators, written
+ * A literal, pair-by-pair rendering of the Ledoit-Wolf intensity estimators, written
  * independently of the production code: it recomputes every moment from the raw window with
  * divisor L and loops over t for each pair (i, j) exactly as the papers write the sums, O(L n²).
  * Used to check the O(L n) rearrangements in {@link ShrinkageIntensity} and
