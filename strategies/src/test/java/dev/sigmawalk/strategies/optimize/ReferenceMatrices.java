@@ -57,22 +57,7 @@ public final class ReferenceMatrices {
     public static SingleFactorForm singleIndexForm() {
         double[] beta = betas();
         double[] d = residualVariances();
-        return new SingleFactorForm() {
-            @Override
-            public double factorVariance() {
-                return MARKET_VARIANCE;
-            }
-
-            @Override
-            public double[] loadings() {
-                return beta;
-            }
-
-            @Override
-            public double[] specificVariances() {
-                return d;
-            }
-        };
+        return RandomProblems.form(MARKET_VARIANCE, beta, d);
     }
 
     private static List<double[]> rows(String name, int skipColumns) {
