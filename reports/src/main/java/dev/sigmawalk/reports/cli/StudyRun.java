@@ -117,7 +117,8 @@ final class StudyRun {
                 RebalanceRecord first = failed.get(0);
                 out.add("strategy '" + p.strategy() + "', window " + p.window() + ": no portfolio formed at "
                         + failed.size() + " of " + p.rebalances().size() + " rebalances (first " + first.date() + ": "
-                        + first.failure().get() + "); the drifted previous portfolio was held instead");
+                        + first.failure().get() + "); at those rebalances the path kept its previous portfolio, or cash"
+                        + " before its first one");
             }
             long notes = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).count();
             if (notes > 0) {

@@ -23,7 +23,7 @@ final class Findings {
 
     /** The path with the lowest realised (net) volatility. */
     PathResult lowestVolatility() {
-        return data.run().paths().stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()))
+        return data.rankedPaths().stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()))
                 .orElseThrow();
     }
 
@@ -32,14 +32,31 @@ final class Findings {
         Summary b = data.summary(best);
         String lead = "With a " + best.window() + "-period window, " + best.strategy()
                 + " had the lowest realised volatility: " + Formats.percent(b.volatility()) + " a year";
-        Optional<PathResult> next = data.paths(best.window()).stream().filter(p -> p != best)
+        Optional<PathResult> next = data.rankedPaths(best.window()).stream().filter(p -> p != best)
                 .min(Comparator.comparingDouble(p -> data.summary(p).volatility()));
-        if (next.isPresent()) {
-            return lead + ", against " + Formats.percent(data.summary(next.get()).volatility()) + " for "
-                    + next.get().strategy() + " with the same window and " + Formats.percent(data.market().volatility())
-                    + " for the market.";
+        String sentence = next.isPresent()
+                ? lead + ", against " + Formats.percent(data.summary(next.get()).volatility()) + " for "
+                        + next.get().strategy() + " with the same window and " + Formats.percent(data.market().volatility())
+                        + " for the market."
+                : lead + ", against " + Formats.percent(data.market().volatility()) + " for the market.";
+        return sentence + leftOut();
+    }
+
+    /** Names the paths kept out of the rankings because some allocation failed. */
+    private String leftOut() {
+        List<PathResult> ranked = data.rankedPaths();
+        List<String> out = new ArrayList<>();
+        for (PathResult p : data.run().paths()) {
+            if (!ranked.contains(p)) {
+                out.add(name(p) + " (no portfolio at " + p.failures() + " of " + p.rebalances().size() + " rebalances)");
+            }
         }
-        return lead + ", against " + Formats.percent(data.market().volatility()) + " for the market.";
+        if (out.isEmpty()) {
+            return data.run().paths().stream().allMatch(p -> p.failures() == 0) ? ""
+                    : " Every strategy failed to form a portfolio at some rebalance, so all are ranked; see the run record.";
+        }
+        return " Not ranked, because no portfolio could be formed at some rebalances and the path held cash or an"
+                + " old portfolio instead: " + Words.list(out) + ".";
     }
 
     String cost() {
@@ -128,8 +145,12 @@ final class Findings {
         }
         List<String> parts = new ArrayList<>();
         for (int w : windows) {
-            PathResult best = data.paths(w).stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()))
-                    .orElseThrow();
+            Optional<PathResult> ranked = data.rankedPaths(w).stream()
+                    .min(Comparator.comparingDouble(p -> data.summary(p).volatility()));
+            if (ranked.isEmpty()) {
+                continue;
+            }
+            PathResult best = ranked.get();
             parts.add(Words.periods(w) + ", " + best.strategy() + " at " + Formats.percent(data.summary(best).volatility()));
         }
         return "Lowest realised volatility for each window: " + String.join("; ", parts) + " (all a year).";

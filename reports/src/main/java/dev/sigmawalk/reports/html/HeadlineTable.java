@@ -47,10 +47,11 @@ final class HeadlineTable {
     /** Whether {@code s} holds the best value of measure {@code m} among the strategy rows. */
     static boolean isBest(Measure m, Summary s, ReportData data) {
         OptionalDouble v = m.of(s);
-        if (m.best() == Measure.Best.NONE || v.isEmpty() || !Double.isFinite(v.getAsDouble())) {
+        if (m.best() == Measure.Best.NONE || v.isEmpty() || !Double.isFinite(v.getAsDouble())
+                || data.rankedPaths().stream().noneMatch(p -> data.summary(p) == s)) {
             return false;
         }
-        for (PathResult other : data.run().paths()) {
+        for (PathResult other : data.rankedPaths()) {
             OptionalDouble o = m.of(data.summary(other));
             if (o.isPresent() && Double.isFinite(o.getAsDouble()) && m.best().better(o.getAsDouble(), v.getAsDouble())) {
                 return false;

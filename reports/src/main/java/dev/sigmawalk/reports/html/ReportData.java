@@ -56,6 +56,23 @@ public record ReportData(Study study, RunResult<?> run, List<Summary> summaries,
         return run.paths().stream().map(PathResult::window).distinct().toList();
     }
 
+    /**
+     * The paths that compete in rankings ("lowest realised risk", best values): those that formed a
+     * portfolio at every rebalance. A path that held cash or a stale portfolio because an
+     * allocation failed would otherwise win on low risk for the wrong reason. When every path
+     * failed somewhere, all of them are ranked.
+     */
+    public List<PathResult> rankedPaths() {
+        List<PathResult> clean = run.paths().stream().filter(p -> p.failures() == 0).toList();
+        return clean.isEmpty() ? run.paths() : clean;
+    }
+
+    /** The ranked paths of one window, in run order. */
+    public List<PathResult> rankedPaths(int window) {
+        List<PathResult> ranked = rankedPaths();
+        return paths(window).stream().filter(ranked::contains).toList();
+    }
+
     /** The paths of one window, in run order. */
     public List<PathResult> paths(int window) {
         return run.paths().stream().filter(p -> p.window() == window).toList();

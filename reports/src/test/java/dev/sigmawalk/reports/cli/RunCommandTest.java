@@ -225,6 +225,46 @@ class RunCommandTest {
         }
     }
 
+    /**
+     * A sample matrix with more assets than window rows is singular, so unbounded minimum variance
+     * fails at every rebalance (METHODS §5) and the path holds cash: it must be recorded, warned
+     * about, and kept out of the "lowest realised risk" answer it would otherwise win.
+     */
+    @Test
+    void strategyThatNeverFormsAPortfolio_isRecorded_andNotRanked(@TempDir Path out) throws IOException {
+        Path singular = data.resolve("singular.yaml");
+        Files.writeString(singular, String.join("\n",
+                "title: More assets than rows",
+                "data:",
+                "  assets: assets-monthly.csv",
+                "  values: returns",
+                "  market: market-monthly.csv",
+                "  riskfree: riskfree-monthly.csv",
+                "walkforward:",
+                "  windows: [24]",
+                "  rebalance_every: 6",
+                "  start: 2020-01-01",
+                "strategies:",
+                "  - name: plain-unbounded",
+                "    risk: sample",
+                "    objective: min-variance",
+                "  - name: index-unbounded",
+                "    risk: single-index",
+                "    objective: min-variance",
+                ""), StandardCharsets.UTF_8);
+        Result r = sigmawalk("run", singular.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(0, r.code(), r.err());
+        List<String[]> rebalances = csv(out.resolve("rebalances.csv"));
+        long failed = rebalances.stream().filter(row -> row[1].equals("plain-unbounded") && row[9].equals("failed")).count();
+        assertEquals(10, failed, "every rebalance of the singular path is recorded as failed");
+        assertTrue(Files.readString(out.resolve("manifest.json")).contains("no portfolio formed at 10 of 10 rebalances"));
+        String headline = org.jsoup.Jsoup.parse(out.resolve("report.html").toFile(), "UTF-8")
+                .getElementById("lowest-risk").selectFirst(".answer").text();
+        assertTrue(headline.startsWith("With a 24-period window, index-unbounded had the lowest realised volatility"),
+                headline);
+        assertTrue(headline.contains("Not ranked") && headline.contains("plain-unbounded"), headline);
+    }
+
     private static double mean(List<Double> x) {
         double s = 0;
         for (double v : x) {
