@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import dev.sigmawalk.engine.study.ValueKind;
 import java.util.Arrays;
+import dev.sigmawalk.engine.SeededCases;
 import java.util.SplittableRandom;
 import java.util.stream.Stream;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -66,34 +67,15 @@ class ValueConversionTest {
 
     static Stream<Arguments> pricePathsWithGap() {
         SplittableRandom rng = new SplittableRandom(0x5EED_0002L);
-        return Stream.generate(() -> Arguments.of(prices(rng, 4, 30), inRange(rng, 0, 1))).limit(100);
+        return Stream.generate(() -> Arguments.of(prices(rng, 4, 30), SeededCases.inRange(rng, 0, 1))).limit(100);
     }
 
     /** Between min and max prices, each in [1, 100]. */
     private static double[] prices(SplittableRandom rng, int min, int max) {
         double[] p = new double[rng.nextInt(min, max + 1)];
         for (int i = 0; i < p.length; i++) {
-            p[i] = inRange(rng, 1, 100);
+            p[i] = SeededCases.inRange(rng, 1, 100);
         }
         return p;
-    }
-
-    /**
-     * A value in [lo, hi]: now and then an end itself, often a decimal with two places (so ties
-     * and round numbers occur), otherwise any double.
-     */
-    private static double inRange(SplittableRandom rng, double lo, double hi) {
-        int pick = rng.nextInt(20);
-        if (pick == 0) {
-            return lo;
-        }
-        if (pick == 1) {
-            return hi;
-        }
-        if (pick < 10) {
-            long cents = Math.round(lo * 100);
-            return (cents + rng.nextLong(Math.round(hi * 100) - cents + 1)) / 100.0;
-        }
-        return lo + (hi - lo) * rng.nextDouble();
     }
 }

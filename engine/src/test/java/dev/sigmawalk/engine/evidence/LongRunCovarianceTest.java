@@ -6,6 +6,7 @@ import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
 import java.util.Arrays;
+import dev.sigmawalk.engine.SeededCases;
 import java.util.SplittableRandom;
 import java.util.stream.Stream;
 
@@ -157,28 +158,9 @@ class LongRunCovarianceTest {
         return Stream.generate(() -> {
             double[] y = new double[rng.nextInt(2, 41)];
             for (int t = 0; t < y.length; t++) {
-                y[t] = inRange(rng, -1, 1);
+                y[t] = SeededCases.inRange(rng, -1, 1);
             }
-            return Arguments.of(y, inRange(rng, 0, 50));
+            return Arguments.of(y, SeededCases.inRange(rng, 0, 50));
         }).limit(200);
-    }
-
-    /**
-     * A value in [lo, hi]: now and then an end itself, often a decimal with two places (so ties
-     * and round numbers occur), otherwise any double.
-     */
-    private static double inRange(SplittableRandom rng, double lo, double hi) {
-        int pick = rng.nextInt(20);
-        if (pick == 0) {
-            return lo;
-        }
-        if (pick == 1) {
-            return hi;
-        }
-        if (pick < 10) {
-            long cents = Math.round(lo * 100);
-            return (cents + rng.nextLong(Math.round(hi * 100) - cents + 1)) / 100.0;
-        }
-        return lo + (hi - lo) * rng.nextDouble();
     }
 }
