@@ -1,7 +1,7 @@
 package dev.sigmawalk.engine.evidence;
 
 /**
- * Is the single-index assumption (uncorrelated residuals) holding in one window? METHODS §8.
+ * Is the single-index assumption (uncorrelated residuals) holding in one window? Method §8.
  *
  * <ul>
  *   <li>mean |ρ_ij| over the n(n-1)/2 pairs i &lt; j;</li>

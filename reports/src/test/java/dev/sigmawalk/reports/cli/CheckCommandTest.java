@@ -285,7 +285,7 @@ class CheckCommandTest {
         assertRejected("study.yaml line 3, column 3: data: missing key 'assets'; it is required");
     }
 
-    /** Three assets with upper bound 0.3: 3 · 0.3 = 0.9 < 1 (METHODS §5). */
+    /** Three assets with upper bound 0.3: 3 · 0.3 = 0.9 < 1 (Method §5). */
     @Test
     void boundsInfeasibleForTheUniverse_areRejected() {
         edit("study.yaml", "bounds: [0, 0.5]", "bounds: [0, 0.3]");

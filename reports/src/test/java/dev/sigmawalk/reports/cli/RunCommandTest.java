@@ -119,7 +119,7 @@ class RunCommandTest {
     }
 
     /**
-     * summary.csv against a second computation from returns.csv (METHODS §7): volatility
+     * summary.csv against a second computation from returns.csv (Method §7): volatility
      * √12·sd(net, N−1), Sharpe √12·mean(net − rf)/sd(net − rf) with rf from the invented bill file,
      * and the market row's mean return 12·mean(market).
      */
@@ -227,7 +227,7 @@ class RunCommandTest {
 
     /**
      * A sample matrix with more assets than window rows is singular, so unbounded minimum variance
-     * fails at every rebalance (METHODS §5) and the path holds cash: it must be recorded, warned
+     * fails at every rebalance (Method §5) and the path holds cash: it must be recorded, warned
      * about, and kept out of the "lowest realised risk" answer it would otherwise win.
      */
     @Test
