@@ -17,6 +17,8 @@ final class IntakeChecks {
     static final double MEAN_MARKET_TOLERANCE = 1e-10;
     /** Decimal returns above this in size in most rows mean the file holds percent. */
     static final double PERCENT_MEDIAN = 0.5;
+    /** Fewer returns beyond ±100 % in a column are left to the +500 % warning. */
+    static final int MANY_BEYOND_ONE = 3;
 
     private final ReturnPanel panel;
     private final ValueKind kind;
@@ -102,8 +104,8 @@ final class IntakeChecks {
     }
 
     /**
-     * Warns about a column where more than a tenth of the returns exceed 100 % in size: a mix
-     * of percent and decimal values, or prices given as returns.
+     * Warns about a column where more than a tenth of the returns (and at least three) exceed
+     * 100 % in size: a mix of percent and decimal values, or prices given as returns.
      */
     void warnManyReturnsBeyondOne(WideTable table, List<Integer> assetCols, List<Integer> kept) {
         for (int k = 0; k < kept.size(); k++) {
@@ -116,7 +118,7 @@ final class IntakeChecks {
                     beyond += Math.abs(r) > 1 ? 1 : 0;
                 }
             }
-            if (beyond * 10 > present) {
+            if (beyond >= MANY_BEYOND_ONE && beyond * 10 > present) {
                 warnings.add(table.file().getFileName() + " column '" + table.columns().get(assetCols.get(kept.get(k)))
                         + "': " + beyond + " of " + present + " returns exceed 100 % in size in one period;"
                         + (kind == ValueKind.PRICES ? " check the prices" : " check that they are decimals, not percent"));

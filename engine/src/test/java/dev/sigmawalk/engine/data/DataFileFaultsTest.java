@@ -176,8 +176,9 @@ class DataFileFaultsTest {
     void columnWithManyReturnsBeyondOne_warns() {
         StudyFixture f = new StudyFixture(dir).edit("assets.csv", "2020-01-31,0.01", "2020-01-31,1.2")
                 .edit("assets.csv", "2020-02-29,0.02", "2020-02-29,-0.99");
-        List<String> w = f.edit("assets.csv", "2020-04-30,0.04", "2020-04-30,1.4").load().warnings();
-        assertTrue(w.contains("assets.csv column 'A01': 2 of 8 returns exceed 100 % in size in one period;"
+        List<String> w = f.edit("assets.csv", "2020-04-30,0.04", "2020-04-30,1.4")
+                .edit("assets.csv", "2020-06-30,-0.02", "2020-06-30,2.5").load().warnings();
+        assertTrue(w.contains("assets.csv column 'A01': 3 of 8 returns exceed 100 % in size in one period;"
                 + " check that they are decimals, not percent"), w.toString());
     }
 
