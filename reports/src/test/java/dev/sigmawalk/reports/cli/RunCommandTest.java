@@ -104,7 +104,8 @@ class RunCommandTest {
                 "weights.csv", "date,strategy,window,asset,weight",
                 "summary.csv", "strategy,window,periods,mean_return,volatility,sharpe,cagr,max_drawdown,mean_turnover,"
                         + "tracking_error,information_ratio,forecast_volatility,bias",
-                "diagnostics.csv", "date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,cd_pvalue");
+                "diagnostics.csv", "date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,cd_pvalue,"
+                        + "lm_adj_stat,lm_adj_pvalue");
         for (Map.Entry<String, String> h : headers.entrySet()) {
             assertEquals(h.getValue(), Files.readAllLines(res.resolve(h.getKey())).get(0), h.getKey());
         }
