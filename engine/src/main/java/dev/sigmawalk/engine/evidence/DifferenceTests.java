@@ -56,6 +56,11 @@ public final class DifferenceTests {
         this.evidence = Objects.requireNonNull(evidence, "evidence");
     }
 
+    /** The bootstrap settings (resamples, seed, block length). */
+    public EvidenceSpec evidence() {
+        return evidence;
+    }
+
     /** Equal Sharpe ratios of two aligned excess-return series. */
     public DifferenceTest sharpeRatio(double[] excessA, double[] excessB) {
         return compare(DifferenceMeasure.SHARPE_RATIO, excessA, excessB);
