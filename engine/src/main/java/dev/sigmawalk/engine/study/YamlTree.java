@@ -6,9 +6,9 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.data.InputFile;
+import dev.sigmawalk.engine.data.TextEncoding;
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -34,10 +34,7 @@ final class YamlTree {
      * @throws InputException when the file is missing, empty or not valid YAML
      */
     static YamlNode parse(Path file) {
-        if (!Files.isRegularFile(file)) {
-            throw new InputException(new InputException.Location(file, 0, null),
-                    "study file not found (looked for " + file.toAbsolutePath() + ")");
-        }
+        TextEncoding.requireUtf8(file, "study file");
         try (JsonParser parser = new YAMLFactory().createParser(file.toFile())) {
             JsonToken first = parser.nextToken();
             if (first == null) {
@@ -50,7 +47,7 @@ final class YamlTree {
             throw InputException.at(file, at == null ? 0 : at.getLineNr(), at == null ? 0 : at.getColumnNr(),
                     "not valid YAML (" + e.getOriginalMessage() + ")");
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read " + file, e);
+            throw InputFile.unreadable(file, e);
         }
     }
 
