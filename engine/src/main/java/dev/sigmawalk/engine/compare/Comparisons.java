@@ -33,15 +33,15 @@ public final class Comparisons {
      */
     public static List<Comparison> of(RunResult<?> run, Map<String, String> baselines, List<Integer> windows,
                                       DifferenceTests tests) {
-        return of(run, baselines, windows, tests, Optional.empty());
+        return of(run, baselines, windows, tests, List.of());
     }
 
     /**
-     * @param scanned a pair the report picks from the data, compared at its one window and added
-     *        to the family unless a baseline comparison already covers it (in either order)
+     * @param scanned pairs the report picks from the data, each compared at its one window and
+     *        added to the family unless a baseline comparison already covers it (in either order)
      */
     public static List<Comparison> of(RunResult<?> run, Map<String, String> baselines, List<Integer> windows,
-                                      DifferenceTests tests, Optional<ScannedPair> scanned) {
+                                      DifferenceTests tests, List<ScannedPair> scanned) {
         List<Comparison> out = new ArrayList<>();
         for (Map.Entry<String, String> e : baselines.entrySet()) {
             List<Comparison> pair = new ArrayList<>();
@@ -50,8 +50,7 @@ public final class Comparisons {
             }
             out.addAll(withHolm(pair));
         }
-        if (scanned.isPresent()) {
-            ScannedPair s = scanned.get();
+        for (ScannedPair s : scanned) {
             boolean covered = out.stream().anyMatch(c -> s.sameAs(c.strategy(), c.baseline(), c.window()));
             if (!covered) {
                 out.addAll(withHolm(List.of(compare(run, s.strategy(), s.other(), s.window(), tests))));
