@@ -3,6 +3,7 @@ package dev.sigmawalk.reports.cli;
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
@@ -64,6 +65,7 @@ final class StudyRun {
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
         List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
@@ -76,7 +78,7 @@ final class StudyRun {
             List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
                     study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()),
                     ScannedPair.lowestVolatility(run));
-            List<String> warnings = warnings(data, run);
+            List<String> warnings = warnings(data, preview, run);
             Path dir = folder.staging();
             ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
             ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
@@ -110,9 +112,15 @@ final class StudyRun {
         return out;
     }
 
-    /** Data warnings, then one line per path whose allocation failed at some rebalance. */
-    private static List<String> warnings(StudyData data, RunResult<?> run) {
+    /**
+     * Data warnings, what the preview found (the same lines {@code check} prints), what the
+     * residual diagnostics left out, then one line per path whose allocation failed at some
+     * rebalance.
+     */
+    private static List<String> warnings(StudyData data, RunPreview preview, RunResult<WindowEvidence> run) {
         List<String> out = new ArrayList<>(data.warnings());
+        out.addAll(preview.warnings());
+        out.addAll(EvidenceNotes.warnings(run.probes()));
         for (PathResult p : run.paths()) {
             List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
             if (!failed.isEmpty()) {
