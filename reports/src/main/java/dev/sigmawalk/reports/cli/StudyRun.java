@@ -3,6 +3,8 @@ package dev.sigmawalk.reports.cli;
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.EvidenceNotes;
+import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
@@ -63,6 +65,7 @@ final class StudyRun {
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
         List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
@@ -73,15 +76,16 @@ final class StudyRun {
             long walked = System.nanoTime();
             List<Summary> summaries = summaries(run);
             List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
-                    study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
-            List<String> warnings = warnings(data, run);
+                    study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()),
+                    ScannedPair.lowestVolatility(run));
+            List<String> warnings = warnings(data, preview, run);
             Path dir = folder.staging();
             ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
             ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
             ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
             EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
-            EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons);
+            EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
             long tested = System.nanoTime();
             ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
             long reported = System.nanoTime();
@@ -108,9 +112,15 @@ final class StudyRun {
         return out;
     }
 
-    /** Data warnings, then one line per path whose allocation failed at some rebalance. */
-    private static List<String> warnings(StudyData data, RunResult<?> run) {
+    /**
+     * Data warnings, what the preview found (the same lines {@code check} prints), what the
+     * residual diagnostics left out, then one line per path whose allocation failed at some
+     * rebalance.
+     */
+    private static List<String> warnings(StudyData data, RunPreview preview, RunResult<WindowEvidence> run) {
         List<String> out = new ArrayList<>(data.warnings());
+        out.addAll(preview.warnings());
+        out.addAll(EvidenceNotes.warnings(run.probes()));
         for (PathResult p : run.paths()) {
             List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
             if (!failed.isEmpty()) {
