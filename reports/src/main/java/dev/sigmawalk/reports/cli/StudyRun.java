@@ -64,7 +64,7 @@ final class StudyRun {
         long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
-        List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
         RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
