@@ -64,11 +64,11 @@ final class StudyRun {
         long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
-        List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
         RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
-        try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
+        try (OutputFolder folder = OutputFolder.prepare(target, options.force(), inputs(study, data))) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
             RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
@@ -101,6 +101,14 @@ final class StudyRun {
             folder.commit();
             return new Outcome(folder.target(), summaries, run);
         }
+    }
+
+    /** Every file the run reads: the study file and each data file. */
+    private static List<Path> inputs(Study study, StudyData data) {
+        List<Path> out = new ArrayList<>();
+        out.add(study.file());
+        data.fingerprints().forEach(f -> out.add(f.path()));
+        return out;
     }
 
     private static List<Summary> summaries(RunResult<?> run) {
