@@ -72,6 +72,7 @@ final class StudyRun {
             ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
             EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+            EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
             EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
             long tested = System.nanoTime();
             ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
