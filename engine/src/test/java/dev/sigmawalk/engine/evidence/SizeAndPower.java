@@ -7,8 +7,10 @@ import java.util.Locale;
  * the tool reports under three nulls at the demo studies' sizes, and power at one stated
  * alternative, printed as Markdown tables. Run by {@code bench/size-power.sh}; not a test.
  *
- * <p>Arguments (all optional): a draw multiplier (default 1.0; 0.2 for a quick look) and a seed
- * (default 20_050_101).
+ * <p>Arguments (all optional): a draw multiplier (default 1.0, the counts of the developer guide's
+ * table; 0.2 for a quick look) and a seed (default 20_050_101). The bootstrap cells use fewer
+ * draws and resamples than the HAC ones, and the daily cells fewer than the monthly, to keep the
+ * run to minutes on two cores.
  */
 public final class SizeAndPower {
     /** Monthly demo: 72 companies; out-of-sample months of the longest window (276 - 120). */
@@ -25,13 +27,13 @@ public final class SizeAndPower {
     public static void main(String[] args) {
         double scale = args.length > 0 ? Double.parseDouble(args[0]) : 1.0;
         long seed = args.length > 1 ? Long.parseLong(args[1]) : 20_050_101L;
-        int residualDraws = draws(1000, scale);
-        int hacMonthly = draws(2000, scale);
-        int bootMonthly = draws(500, scale);
-        int hacDaily = draws(300, scale);
-        int bootDaily = draws(150, scale);
-        int familyMonthly = draws(300, scale);
-        int familyDaily = draws(60, scale);
+        int residualDraws = draws(500, scale);
+        int hacMonthly = draws(1000, scale);
+        int bootMonthly = draws(250, scale);
+        int hacDaily = draws(150, scale);
+        int bootDaily = draws(75, scale);
+        int familyMonthly = draws(150, scale);
+        int familyDaily = draws(30, scale);
         long started = System.nanoTime();
         StringBuilder out = new StringBuilder();
         out.append("Residual tests, n = ").append(ASSETS).append(", ").append(residualDraws)
