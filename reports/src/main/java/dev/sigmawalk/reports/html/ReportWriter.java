@@ -132,7 +132,8 @@ public final class ReportWriter {
 
     private static String subtitle(ReportData data, int focus, int span) {
         return "Out-of-sample period " + RunFacts.period(data.run()) + ". The sections' charts over time show the "
-                + focus + "-period window, where the lowest realised volatility was found; every window's charts are "
+                + focus + "-period window, the window of the lowest realised volatility in this history (whether"
+                + " that edge is more than chance is said in the first section); every window's charts are "
                 + "under \"Over time, window by window\". Trailing volatility uses " + span + " periods.";
     }
 
