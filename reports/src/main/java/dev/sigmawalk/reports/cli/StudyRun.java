@@ -37,7 +37,7 @@ import java.util.Optional;
  * a foreign one before any work), walk forward, measure, test, write every output into a
  * staging folder and move it into place only when all of it succeeded.
  */
-final class StudyRun {
+public final class StudyRun {
     /** Residual pairs kept per window for the report. */
     private static final int LARGEST_PAIRS = 10;
 
@@ -62,40 +62,57 @@ final class StudyRun {
         long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
-        List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
-        long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
-            RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
-                    study.walkForward().windows(), study.walkForward().costBps(),
-                    new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS)).run(options.threads(), progress);
-            long walked = System.nanoTime();
-            List<Summary> summaries = summaries(run);
-            List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
-                    study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
-            List<String> warnings = warnings(data, run);
-            Path dir = folder.staging();
-            ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
-            ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
-            ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
-            ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
-            EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
-            EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons);
-            long tested = System.nanoTime();
-            ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
-            long reported = System.nanoTime();
-            Map<String, Double> seconds = new LinkedHashMap<>();
-            seconds.put("read_and_check", (loaded - begin) / 1e9);
-            seconds.put("walk_forward", (walked - loaded) / 1e9);
-            seconds.put("measures_tests_and_csv", (tested - walked) / 1e9);
-            seconds.put("report", (reported - tested) / 1e9);
-            Manifest.write(dir.resolve("manifest.json"), new Manifest.Content(VersionProvider.version(), study,
-                    data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
-                    Instant.now(), options.threads(), seconds));
+            Written written = writeInto(folder.staging(), study, data, options.threads(), progress, started, begin);
             folder.commit();
-            return new Outcome(folder.target(), summaries, run);
+            return new Outcome(folder.target(), written.summaries(), written.run());
         }
+    }
+
+    /** What {@link #writeInto} computed, besides the files. */
+    public record Written(List<Summary> summaries, RunResult<WindowEvidence> run) {
+    }
+
+    /**
+     * Walks forward, measures, tests and writes every output of a run of {@code study} into
+     * {@code dir} (a staging folder the caller publishes). The files depend only on the study and
+     * its data, never on {@code threads}, except the manifest's clock readings and thread count.
+     *
+     * @param started when the run began (for the manifest and the report)
+     * @param begin {@link System#nanoTime} when reading the study began (for the manifest's timings)
+     */
+    public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
+                                    Instant started, long begin) {
+        List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        long loaded = System.nanoTime();
+        RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
+                study.walkForward().windows(), study.walkForward().costBps(),
+                new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS)).run(threads, progress);
+        long walked = System.nanoTime();
+        List<Summary> summaries = summaries(run);
+        List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
+                study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
+        List<String> warnings = warnings(data, run);
+        ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
+        ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
+        ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
+        ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
+        EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+        EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons);
+        long tested = System.nanoTime();
+        ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
+        long reported = System.nanoTime();
+        Map<String, Double> seconds = new LinkedHashMap<>();
+        seconds.put("read_and_check", (loaded - begin) / 1e9);
+        seconds.put("walk_forward", (walked - loaded) / 1e9);
+        seconds.put("measures_tests_and_csv", (tested - walked) / 1e9);
+        seconds.put("report", (reported - tested) / 1e9);
+        Manifest.write(dir.resolve("manifest.json"), new Manifest.Content(VersionProvider.version(), study,
+                data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
+                Instant.now(), threads, seconds));
+        return new Written(summaries, run);
     }
 
     private static List<Summary> summaries(RunResult<?> run) {
