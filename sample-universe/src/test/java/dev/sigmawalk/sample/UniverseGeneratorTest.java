@@ -92,7 +92,7 @@ class UniverseGeneratorTest {
         assertEquals(3, shockSectors, "sectors with a shared shock");
     }
 
-    /** METHODS §1: the index must be measured on its own, not the companies' equal-weighted mean. */
+    /** Method §1: the index must be measured on its own, not the companies' equal-weighted mean. */
     @Test
     void index_isNotTheCrossSectionalMeanOfTheCompanies() throws IOException {
         UniverseGenerator.generate(SMALL, tmp);

@@ -5,7 +5,7 @@ import java.util.Arrays;
 
 /**
  * The portfolio one path holds between rebalances, with the holding-period accounting of
- * METHODS §6: drift, turnover against the drifted weights, costs on the first held row, and the
+ * Method §6: drift, turnover against the drifted weights, costs on the first held row, and the
  * count of held assets with no return.
  *
  * <p>Holdings are kept by panel column so that an asset leaving the eligible set is sold at the

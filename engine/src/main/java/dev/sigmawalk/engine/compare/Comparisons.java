@@ -14,7 +14,7 @@ import java.util.Map;
 import java.util.Optional;
 
 /**
- * Runs the difference tests of METHODS §9 for every strategy against its baseline at every
+ * Runs the difference tests of Method §9 for every strategy against its baseline at every
  * window, then adjusts each pair's bootstrap p-values across windows with Holm's method, since
  * trying several windows and reporting the best is itself a search.
  */

@@ -9,7 +9,7 @@ import java.util.Objects;
 import java.util.Optional;
 
 /**
- * Single-index adequacy of one estimation window (METHODS §8), kept small: the statistics, the
+ * Single-index adequacy of one estimation window (Method §8), kept small: the statistics, the
  * most correlated residual pairs and, where sectors are known, the within-sector co-movement.
  *
  * @param date rebalance date

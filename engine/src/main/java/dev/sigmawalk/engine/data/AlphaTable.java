@@ -12,7 +12,7 @@ import java.util.Objects;
 import java.util.TreeMap;
 
 /**
- * A user's per-period alphas by asset and date (METHODS §4): the single-index expected return of
+ * A user's per-period alphas by asset and date (Method §4): the single-index expected return of
  * asset i at rebalance τ uses the latest alpha dated on or before τ, and 0 where none is given.
  * Immutable; lookups are a binary search over the asset's dates.
  */

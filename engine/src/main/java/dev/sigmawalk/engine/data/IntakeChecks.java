@@ -5,14 +5,14 @@ import java.util.List;
 
 /**
  * The checks run once the panel exists: completeness of the market and risk-free series over the
- * rows a study needs (an error), and the warnings of METHODS §1 and the study contract.
+ * rows a study needs (an error), and the warnings of Method §1 and the study contract.
  */
 final class IntakeChecks {
     /** A period return above +500 % is implausible for any listed asset. */
     static final double IMPLAUSIBLE_RETURN = 5.0;
     /** A risk-free rate above 100 % a year is implausible. */
     static final double IMPLAUSIBLE_ANNUAL_RATE = 1.0;
-    /** METHODS §1: the market "equals" the assets' mean when every row agrees within this. */
+    /** Method §1: the market "equals" the assets' mean when every row agrees within this. */
     static final double MEAN_MARKET_TOLERANCE = 1e-10;
 
     private final ReturnPanel panel;
@@ -34,7 +34,7 @@ final class IntakeChecks {
     }
 
     /**
-     * METHODS §1: the series must have a value in every panel row from {@code firstNeeded}
+     * Method §1: the series must have a value in every panel row from {@code firstNeeded}
      * (τ_0 − L_max + 1) to the last row.
      *
      * @param column where the series came from
@@ -98,7 +98,7 @@ final class IntakeChecks {
     }
 
     /**
-     * METHODS §1: warns when, in every row where the market and at least one asset have a
+     * Method §1: warns when, in every row where the market and at least one asset have a
      * return, the market equals the mean of the assets' returns within 1e-10; the single-index
      * residuals then sum to zero across assets and the §8 tests are distorted.
      */

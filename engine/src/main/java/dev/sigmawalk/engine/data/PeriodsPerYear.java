@@ -5,7 +5,7 @@ import java.time.temporal.ChronoUnit;
 import java.util.Arrays;
 
 /**
- * Periods per year inferred from the dates (METHODS §1): the median spacing of consecutive dates
+ * Periods per year inferred from the dates (Method §1): the median spacing of consecutive dates
  * in calendar days, then under 4 → 252 (trading days), under 15 → 52, under 60 → 12, under 200 →
  * 4, else 1. With an even number of spacings the median is the mean of the two middle ones.
  */
@@ -36,7 +36,7 @@ public final class PeriodsPerYear {
         return gaps.length % 2 == 1 ? gaps[m] : (gaps[m - 1] + gaps[m]) / 2.0;
     }
 
-    /** The METHODS §1 thresholds. */
+    /** The Method §1 thresholds. */
     public static int fromMedianSpacing(double days) {
         if (days < 4) {
             return 252;

@@ -11,10 +11,10 @@ import java.util.Map;
 import java.util.Objects;
 
 /**
- * Everything a study reads from disk, validated (METHODS §1, CONTRACT "Study file").
+ * Everything a study reads from disk, validated (Method §1, CONTRACT "Study file").
  *
  * @param panel the returns, first row = first return row, cut at {@code walkforward.end}
- * @param schedule the rebalance rows planned on {@code panel} (METHODS §2)
+ * @param schedule the rebalance rows planned on {@code panel} (Method §2)
  * @param periodsPerYearInferred whether periods per year came from the dates' spacing
  * @param sectors asset to sector for assets of the panel that the sectors file lists (empty map
  *        without {@code data.sectors}), in panel order

@@ -170,7 +170,7 @@ final class StudyDataLoader {
         return out;
     }
 
-    /** METHODS §1: an annual rate R is (1 + R)^(1/p) − 1 per period. */
+    /** Method §1: an annual rate R is (1 + R)^(1/p) − 1 per period. */
     static double[] annualToPeriod(double annual, int periods, int rows) {
         double perPeriod = Math.pow(1.0 + annual, 1.0 / periods) - 1.0;
         double[] out = new double[rows];
@@ -202,7 +202,7 @@ final class StudyDataLoader {
         }
     }
 
-    /** METHODS §5: bounds that cannot sum to 1 over the universe are an input error. */
+    /** Method §5: bounds that cannot sum to 1 over the universe are an input error. */
     private void requireFeasibleBounds(int n) {
         List<StrategySpec> strategies = study.strategies();
         for (int i = 0; i < strategies.size(); i++) {

@@ -3,7 +3,7 @@ package dev.sigmawalk.engine.data;
 import dev.sigmawalk.engine.study.ValueKind;
 
 /**
- * Turns a column of values into per-row simple returns (METHODS §1). Returns pass through. With
+ * Turns a column of values into per-row simple returns (Method §1). Returns pass through. With
  * prices, r_t = P_t / P_{t−1} − 1 from two consecutive rows; the first row and a row after a
  * missing price give no return, so the panel starts at the second row ({@link #offset} = 1).
  */

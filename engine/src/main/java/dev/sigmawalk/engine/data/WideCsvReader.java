@@ -11,7 +11,7 @@ import java.util.Set;
 
 /**
  * Reads a wide CSV (first column {@code date}, then one column per series) into a
- * {@link WideTable}, enforcing METHODS §1: ISO-8601 dates, strictly increasing with no
+ * {@link WideTable}, enforcing Method §1: ISO-8601 dates, strictly increasing with no
  * duplicates; distinct, non-empty column names; numeric cells (empty = missing); with prices,
  * every price strictly positive.
  */

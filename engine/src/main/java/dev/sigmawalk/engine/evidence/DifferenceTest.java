@@ -4,7 +4,7 @@ import java.util.Locale;
 import java.util.Objects;
 
 /**
- * Outcome of testing H0: the two series have the same measure (METHODS §9).
+ * Outcome of testing H0: the two series have the same measure (Method §9).
  *
  * @param measure what was compared
  * @param kernel the HAC kernel of the standard error

@@ -7,7 +7,7 @@ import java.util.Objects;
 /**
  * Is a difference between two strategies real? Tests of equal Sharpe ratios (Ledoit &amp; Wolf
  * 2008, J. Empirical Finance 15, 850-859) and equal variances (Ledoit &amp; Wolf 2011, Wilmott
- * Magazine) on two aligned series, METHODS §9.
+ * Magazine) on two aligned series, Method §9.
  *
  * <p>HAC test: Δ̂ = f(v̂), s(Δ̂) = √(∇f(v̂)' Ψ̂ ∇f(v̂) / T), where Ψ̂ is the kernel long-run
  * covariance ({@link LongRunCovariance}, automatic bandwidth) of y_t = (a_t - μ̂_a, b_t - μ̂_b,

@@ -1,7 +1,7 @@
 package dev.sigmawalk.engine.evidence;
 
 /**
- * How many estimates a mean-variance rebalance needs (METHODS §10): the full sample model needs
+ * How many estimates a mean-variance rebalance needs (Method §10): the full sample model needs
  * n expected returns and n(n+1)/2 distinct covariances, n + n(n+1)/2; the single-index model
  * needs α_i, β_i and the residual variance per asset plus the market premium and market
  * variance, 3n + 2. Counts are exact integers (long: n up to about 4 · 10⁹ fits).

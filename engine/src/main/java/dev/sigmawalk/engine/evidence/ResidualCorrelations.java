@@ -11,7 +11,7 @@ import java.util.Objects;
 import java.util.PriorityQueue;
 
 /**
- * Correlations ρ_ij of the market-model residuals of one estimation window (METHODS §8), the
+ * Correlations ρ_ij of the market-model residuals of one estimation window (Method §8), the
  * raw material of the single-index adequacy checks.
  *
  * <p>The residuals never need to be formed. With e_i = (x_i - x̄_i) - β_i (m - m̄) and
@@ -113,7 +113,7 @@ public final class ResidualCorrelations {
         return correlation[i * assets.size() + j];
     }
 
-    /** The adequacy statistics of METHODS §8 (mean |ρ|, Breusch-Pagan LM, Pesaran CD). */
+    /** The adequacy statistics of Method §8 (mean |ρ|, Breusch-Pagan LM, Pesaran CD). */
     public ResidualDiagnostics diagnostics() {
         return ResidualDiagnostics.of(this);
     }

@@ -1,7 +1,7 @@
 package dev.sigmawalk.engine.evidence;
 
 /**
- * Is the single-index assumption (uncorrelated residuals) holding in one window? METHODS §8.
+ * Is the single-index assumption (uncorrelated residuals) holding in one window? Method §8.
  *
  * <ul>
  *   <li>mean |ρ_ij| over the n(n-1)/2 pairs i &lt; j;</li>
@@ -12,7 +12,14 @@ package dev.sigmawalk.engine.evidence;
  *       CD = √(2L / (n(n-1))) Σ_{i&lt;j} ρ_ij, standard normal under the null; two-sided
  *       p = P(|Z| &gt; |CD|). Unlike LM it is not over-sized when n is large relative to L,
  *       but positive and negative correlations can cancel in it.</li>
+ *   <li>the bias-adjusted LM of Pesaran, Ullah &amp; Yamagata (2008), {@link BiasAdjustedLm}, with
+ *       every residual from the same regression on an intercept and the market (k = 2); upper-tail
+ *       p. It needs d = L - 2 &gt; 4; on shorter windows both its values are NaN (not defined).</li>
  * </ul>
+ *
+ * <p>Breusch-Pagan's χ² reference is badly over-sized when n is not small against L (about 64 %
+ * rejections at 5 % for n = 70, L = 36 with independent residuals), so verdicts rest on CD and
+ * LM_adj; LM is kept for continuity.
  *
  * @param assets n
  * @param length L
@@ -22,9 +29,12 @@ package dev.sigmawalk.engine.evidence;
  * @param lmPValue in [0, 1]
  * @param cdStatistic CD
  * @param cdPValue two-sided, in [0, 1]
+ * @param lmAdjStatistic LM_adj, finite; NaN when L - 2 &lt;= 4
+ * @param lmAdjPValue upper-tail, in [0, 1]; NaN exactly when the statistic is
  */
 public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelation, double lmStatistic,
-                                  int lmDegreesOfFreedom, double lmPValue, double cdStatistic, double cdPValue) {
+                                  int lmDegreesOfFreedom, double lmPValue, double cdStatistic, double cdPValue,
+                                  double lmAdjStatistic, double lmAdjPValue) {
     public ResidualDiagnostics {
         if (!(assets >= 2)) {
             throw new IllegalArgumentException("assets (" + assets + ") must be >= 2");
@@ -45,7 +55,23 @@ public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelat
         if (!(lmPValue >= 0 && lmPValue <= 1) || !(cdPValue >= 0 && cdPValue <= 1)) {
             throw new IllegalArgumentException("p-values (LM " + lmPValue + ", CD " + cdPValue + ") must be in [0, 1]");
         }
+        if (Double.isNaN(lmAdjStatistic) != Double.isNaN(lmAdjPValue) || Double.isInfinite(lmAdjStatistic)
+                || !(Double.isNaN(lmAdjPValue) || lmAdjPValue >= 0 && lmAdjPValue <= 1)) {
+            throw new IllegalArgumentException("LM_adj (" + lmAdjStatistic + ", p " + lmAdjPValue
+                    + ") must be finite with a p-value in [0, 1], or both NaN");
+        }
     }
+
+    /** Minimum window length for LM_adj with k = 2 regressors: d = L - 2 must exceed 4. */
+    public static final int MIN_LM_ADJ_LENGTH = 7;
+
+    /** True when LM_adj was defined for this window. */
+    public boolean hasLmAdj() {
+        return !Double.isNaN(lmAdjStatistic);
+    }
+
+    /** Intercept and market. */
+    private static final int SINGLE_INDEX_REGRESSORS = 2;
 
     /** The statistics of a window's residual correlations. */
     static ResidualDiagnostics of(ResidualCorrelations rho) {
@@ -65,7 +91,15 @@ public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelat
         int pairs = n * (n - 1) / 2;
         double lm = length * sumSquares;
         double cd = Math.sqrt(2.0 * length / ((double) n * (n - 1))) * sum;
+        double adjusted = Double.NaN;
+        double adjustedP = Double.NaN;
+        if (length >= MIN_LM_ADJ_LENGTH) {
+            BiasAdjustedLm test = BiasAdjustedLm.common(n, length, SINGLE_INDEX_REGRESSORS, rho::correlation);
+            adjusted = test.statistic();
+            adjustedP = test.pValue();
+        }
         return new ResidualDiagnostics(n, length, sumAbs / pairs, lm, pairs,
-                TailProbabilities.chiSquaredUpper(lm, pairs), cd, TailProbabilities.twoSidedNormal(cd));
+                TailProbabilities.chiSquaredUpper(lm, pairs), cd, TailProbabilities.twoSidedNormal(cd), adjusted,
+                adjustedP);
     }
 }

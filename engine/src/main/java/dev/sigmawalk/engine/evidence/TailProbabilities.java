@@ -45,4 +45,19 @@ final class TailProbabilities {
         }
         return Erf.erfc(Math.abs(z) / Math.sqrt(2.0));
     }
+
+    /**
+     * Upper-tail standard normal probability 1 - Φ(z) = erfc(z / √2) / 2.
+     *
+     * @param z a statistic, not NaN; +∞ gives 0 and -∞ gives 1
+     */
+    static double upperNormal(double z) {
+        if (Double.isNaN(z)) {
+            throw new IllegalArgumentException("normal statistic is NaN");
+        }
+        if (Double.isInfinite(z)) {
+            return z > 0 ? 0.0 : 1.0;
+        }
+        return 0.5 * Erf.erfc(z / Math.sqrt(2.0));
+    }
 }

@@ -13,7 +13,7 @@ import java.util.List;
  *   forecast_y = √p · mean(σ̂_t),
  * </pre>
  * with σ̂_t the per-period forecast volatility in force for row t (the forecast is averaged as a
- * volatility, not as a variance, matching METHODS §7's forecast_volatility). Excess returns are
+ * volatility, not as a variance, matching Method §7's forecast_volatility). Excess returns are
  * used because the forecasts are of excess-return risk; a constant rf makes no difference.
  * A year with fewer than 2 rows has no sample deviation and is left out of the result.
  */

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 
-/** Computes the {@link Summary} of a path or of the market benchmark (METHODS §7). */
+/** Computes the {@link Summary} of a path or of the market benchmark (Method §7). */
 public final class PerformanceMeasures {
     private final double[] riskFree;
     private final double[] market;

@@ -5,7 +5,7 @@ import java.util.OptionalDouble;
 import java.util.OptionalInt;
 
 /**
- * The annualised performance of one path over the out-of-sample rows (METHODS §7), one row of
+ * The annualised performance of one path over the out-of-sample rows (Method §7), one row of
  * {@code summary.csv}. Measures that do not apply (for the {@code market} benchmark: window,
  * turnover, tracking error, information ratio, forecast, bias) are empty.
  *

@@ -4,7 +4,7 @@ import dev.sigmawalk.engine.moments.CrossProducts;
 
 /**
  * Sample moments of one estimation window's excess returns, computed once and shared by every
- * model that uses them. Divisors are L-1 (unbiased), as in METHODS §3. Arrays are owned by this
+ * model that uses them. Divisors are L-1 (unbiased), as in Method §3. Arrays are owned by this
  * record and must not be modified by callers.
  *
  * @param assets n

@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.function.Supplier;
 
 /**
- * Cuts estimation windows out of a panel (METHODS §2-§3): an asset is eligible at τ for window L
+ * Cuts estimation windows out of a panel (Method §2-§3): an asset is eligible at τ for window L
  * when it has a return in every row τ−L+1..τ; the window holds excess returns x = r − rf and
  * m = r_m − rf over those rows. Only rows up to τ are read, so nothing after τ can reach a model.
  */

@@ -1,7 +1,7 @@
 package dev.sigmawalk.engine.timeline;
 
 /**
- * The rebalance rows of a study, shared by every window (METHODS §2). The weights chosen at
+ * The rebalance rows of a study, shared by every window (Method §2). The weights chosen at
  * {@code rebalanceRows[j]} earn rows {@code rebalanceRows[j]+1 .. holdEnd(j)}; the out-of-sample
  * period is rows {@code firstRebalance()+1 .. lastRow}.
  *

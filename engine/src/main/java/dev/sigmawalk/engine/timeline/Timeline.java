@@ -9,7 +9,7 @@ import java.time.LocalDate;
 import java.util.Arrays;
 
 /**
- * Plans the rebalance rows of a study (METHODS §2). All windows share one out-of-sample period:
+ * Plans the rebalance rows of a study (Method §2). All windows share one out-of-sample period:
  * the first rebalance is τ_0 = max(L_max − 1, first row on or after {@code start}); then every
  * k rows, or on each row that is the last of its calendar month / quarter / year in the data's
  * own dates (the first being the earliest such row at or after that τ_0). The last rebalance

@@ -8,7 +8,7 @@ import java.time.LocalDate;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 
-/** Holding-period accounting of METHODS §6, checked against hand computations shown inline. */
+/** Holding-period accounting of Method §6, checked against hand computations shown inline. */
 class HoldingBookTest {
     private static final double EXACT = 1e-15;
 

@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * Malformed data files: every rule of METHODS §1 stops the load with a message naming file,
+ * Malformed data files: every rule of Method §1 stops the load with a message naming file,
  * line (the header is line 1), column and value. Line numbers were counted by hand in the
  * fixtures of {@link StudyFixture}.
  */
@@ -132,7 +132,7 @@ class DataIntakeErrorTest {
         assertTrue(e.getMessage().contains("the row has 2 cells but the header has 4"), e.getMessage());
     }
 
-    /** 3 assets with bounds [0, 0.2]: 3 · 0.2 = 0.6 < 1, so no weights sum to 1 (METHODS §5). */
+    /** 3 assets with bounds [0, 0.2]: 3 · 0.2 = 0.6 < 1, so no weights sum to 1 (Method §5). */
     @Test
     void boundsThatCannotSumToOne_areAnErrorWithKeyPath() {
         InputException e = loadFails(new StudyFixture(dir).edit("study.yaml", "objective: min-variance",

@@ -10,7 +10,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** Periods per year from date spacing, METHODS §1 thresholds (4, 15, 60, 200 days). */
+/** Periods per year from date spacing, Method §1 thresholds (4, 15, 60, 200 days). */
 class PeriodsPerYearTest {
 
     private static LocalDate[] dates(String... iso) {

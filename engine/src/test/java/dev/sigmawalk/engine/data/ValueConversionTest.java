@@ -11,7 +11,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 
-/** Prices to returns (METHODS §1): r_t = P_t / P_{t−1} − 1, the first row giving none. */
+/** Prices to returns (Method §1): r_t = P_t / P_{t−1} − 1, the first row giving none. */
 class ValueConversionTest {
     /**
      * Relative error allowed after compounding up to 60 rounded returns. Forming 1 + r from

@@ -43,6 +43,20 @@ class ResidualCorrelationsTest {
     }
 
     /**
+     * Bias-adjusted LM (Pesaran, Ullah &amp; Yamagata 2008) on the reference window's residuals,
+     * k = 2: 1.359794124772336, upper-tail p 0.0869475410723013. Source: numpy 1.24.2 from the
+     * paper's exact moments, {@code lm_adj_stat_puy2008} and {@code lm_adj_pvalue_puy2008} in the
+     * copied {@code values.json}.
+     */
+    @Test
+    void referenceWindow_lmAdjMatchesNumpy() {
+        ResidualDiagnostics d = ResidualCorrelations.of(ReferenceWindow.load()).diagnostics();
+        assertTrue(d.hasLmAdj());
+        assertRelative(1.359794124772336, d.lmAdjStatistic(), "LM_adj");
+        assertEquals(0.0869475410723013, d.lmAdjPValue(), P_VALUE, "LM_adj p-value");
+    }
+
+    /**
      * Hand computation: s_mm = 1, s_im = (1, 1, 1), S = [[2, 1.5, 1], [1.5, 2, 1], [1, 1, 2]],
      * L = 10. Residual covariance S - s s'/s_mm = [[1, .5, 0], [.5, 1, 0], [0, 0, 1]], so
      * ρ12 = 0.5, ρ13 = ρ23 = 0; mean |ρ| = 0.5/3; LM = 10 · 0.25 = 2.5 on 3 df;
@@ -66,6 +80,10 @@ class ResidualCorrelationsTest {
         assertEquals(Math.sqrt(20.0 / 6.0) * 0.5, d.cdStatistic(), HAND);
         assertEquals(0.4752910833430205, d.lmPValue(), P_VALUE);
         assertEquals(0.3613104285261787, d.cdPValue(), P_VALUE);
+        // LM_adj with d = 8, μ = 1, v = √(2·7/10): √(1/3) ((8·0.25 - 1) + 2 (0 - 1)) / v; p from
+        // scipy.stats.norm.sf (scipy 1.17.1, computed for this test).
+        assertEquals(-0.48795003647426655, d.lmAdjStatistic(), HAND);
+        assertEquals(0.6872073842378373, d.lmAdjPValue(), P_VALUE);
     }
 
     /**

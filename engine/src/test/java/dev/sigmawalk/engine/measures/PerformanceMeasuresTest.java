@@ -12,7 +12,7 @@ import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
 
 /**
- * Measures of METHODS §7 on a four-row series, each checked against the arithmetic written
+ * Measures of Method §7 on a four-row series, each checked against the arithmetic written
  * beside it.
  */
 class PerformanceMeasuresTest {

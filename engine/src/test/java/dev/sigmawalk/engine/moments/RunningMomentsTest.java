@@ -23,7 +23,7 @@ class RunningMomentsTest {
     /**
      * Long run, 470 moves of three rows over a 1,500-row panel of 40 assets with a late listing,
      * a gap and a delisting, window 120, rebuilt every 20 moves: at every move the moments of the
-     * eligible assets match the METHODS §3 definitions computed in two passes (means, then
+     * eligible assets match the Method §3 definitions computed in two passes (means, then
      * centred products) by a plain loop in this test.
      */
     @Test
@@ -173,7 +173,7 @@ class RunningMomentsTest {
         }
     }
 
-    /** METHODS §3 in two passes over the eligible columns, excess returns x = r − rf, m = r_m − rf. */
+    /** Method §3 in two passes over the eligible columns, excess returns x = r − rf, m = r_m − rf. */
     private static WindowMoments reference(ReturnPanel panel, int tau, int length, int[] cols) {
         int n = cols.length;
         int first = tau - length + 1;

@@ -27,7 +27,7 @@ class SharedMomentsTest {
     /**
      * Every window of a run with rebalances every row (over 80 moves a window length, so the
      * sums are rebuilt several times) on a panel with a late listing, a gap and a delisting:
-     * the shared moments match {@link WindowMoments#of} on the window's own rows (METHODS §3,
+     * the shared moments match {@link WindowMoments#of} on the window's own rows (Method §3,
      * two passes) to 1e-12, over exactly the eligible assets.
      */
     @Test

@@ -41,7 +41,7 @@ class WalkForwardTest {
     }
 
     /**
-     * No look-ahead (METHODS §2): replacing every value after a random row τ with random numbers
+     * No look-ahead (Method §2): replacing every value after a random row τ with random numbers
      * leaves every weight chosen at or before τ bit-for-bit unchanged. Twenty-five seeded cases
      * (τ and the scrambling seed drawn from a fixed seed, so a failure reproduces).
      */
@@ -130,7 +130,7 @@ class WalkForwardTest {
         }
     }
 
-    /** All windows share one out-of-sample period starting after τ_0 = L_max − 1 (METHODS §2). */
+    /** All windows share one out-of-sample period starting after τ_0 = L_max − 1 (Method §2). */
     @Test
     void everyWindow_sharesTheOutOfSamplePeriod() {
         ReturnPanel panel = TestPanels.random(100, 5, 3);

@@ -17,7 +17,7 @@ import java.util.List;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
 
-/** The rebalance timeline of METHODS §2. */
+/** The rebalance timeline of Method §2. */
 class TimelineTest {
 
     private static ReturnPanel panel(LocalDate[] dates) {

@@ -1,5 +1,7 @@
 package dev.sigmawalk.reports.cli;
 
+import dev.sigmawalk.engine.compare.BaselineChoice;
+import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.data.AssetCoverage;
 import dev.sigmawalk.engine.data.ReturnPanel;
 import dev.sigmawalk.engine.data.StudyData;
@@ -18,7 +20,9 @@ import dev.sigmawalk.reports.sweep.SweepCheck;
 import dev.sigmawalk.reports.sweep.SweepReader;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -118,6 +122,8 @@ public final class CheckCommand implements Callable<Integer> {
 
     private static void printStrategies(PrintWriter out, Study study) {
         out.println("Strategies: " + study.strategies().size());
+        Map<String, BaselineChoice> baselines = new HashMap<>();
+        Baselines.choices(study.strategies()).forEach(c -> baselines.put(c.strategy(), c));
         for (StrategySpec s : study.strategies()) {
             StringBuilder line = new StringBuilder("  " + s.name() + ": " + s.objective().spelling()
                     + ", risk " + s.risk().spelling());
@@ -133,7 +139,7 @@ public final class CheckCommand implements Callable<Integer> {
                 s.alphas().ifPresent(a -> line.append(", alphas ").append(a.getFileName()));
                 s.marketPremium().ifPresent(m -> line.append(", market premium ").append(m).append(" a year"));
             }
-            s.baseline().ifPresent(b -> line.append(", compared with ").append(b));
+            line.append("; ").append(baselines.get(s.name()).describe());
             out.println(line);
         }
     }

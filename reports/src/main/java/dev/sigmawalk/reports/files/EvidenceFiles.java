@@ -16,20 +16,22 @@ public final class EvidenceFiles {
 
     /**
      * {@code diagnostics.csv}: date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,
-     * cd_pvalue, one row per window length per rebalance (windows in study order).
+     * cd_pvalue,lm_adj_stat,lm_adj_pvalue, one row per window length per rebalance (windows in study
+     * order). LM_adj cells are empty where the window is too short for it (Method §8).
      */
     public static void writeDiagnostics(Path file, Map<Integer, List<WindowEvidence>> byWindow, List<Integer> windows) {
         try (CsvWriter csv = new CsvWriter(file, "date", "window", "assets", "mean_abs_residual_corr", "lm_stat",
-                "lm_pvalue", "cd_stat", "cd_pvalue")) {
+                "lm_pvalue", "cd_stat", "cd_pvalue", "lm_adj_stat", "lm_adj_pvalue")) {
             for (int w : windows) {
                 for (WindowEvidence e : byWindow.getOrDefault(w, List.of())) {
                     csv.text(e.date().toString()).integer(w);
                     if (e.diagnostics().isPresent()) {
                         ResidualDiagnostics d = e.diagnostics().get();
                         csv.integer(d.assets()).number(d.meanAbsCorrelation()).number(d.lmStatistic())
-                                .number(d.lmPValue()).number(d.cdStatistic()).number(d.cdPValue());
+                                .number(d.lmPValue()).number(d.cdStatistic()).number(d.cdPValue())
+                                .number(d.lmAdjStatistic()).number(d.lmAdjPValue());
                     } else {
-                        csv.empty().empty().empty().empty().empty().empty();
+                        csv.empty().empty().empty().empty().empty().empty().empty().empty();
                     }
                     csv.end();
                 }

@@ -73,7 +73,7 @@ public final class ResultFiles {
         }
     }
 
-    /** {@code summary.csv}, one row per path and one for the market, annualised (METHODS §7). */
+    /** {@code summary.csv}, one row per path and one for the market, annualised (Method §7). */
     public static void writeSummary(Path file, List<Summary> rows) {
         try (CsvWriter csv = new CsvWriter(file, "strategy", "window", "periods", "mean_return", "volatility",
                 "sharpe", "cagr", "max_drawdown", "mean_turnover", "tracking_error", "information_ratio",

@@ -148,6 +148,9 @@ class CheckCommandTest {
         assertTrue(text.contains("window 4: first estimation date 2020-01-31"), text);
         assertTrue(text.contains("index-model: min-variance, risk single-index, bounds [0.0, 0.5]"), text);
         assertTrue(text.contains("equal: equal-weight, risk sample, no bounds"), text);
+        assertTrue(text.contains("index-model: min-variance, risk single-index, bounds [0.0, 0.5]; no baseline: no"
+                + " sample-covariance strategy with the same objective and bounds\n"), text);
+        assertTrue(text.contains("; no baseline: equal weight does not use the covariance estimate"), text);
         assertTrue(text.contains("walkforward.cost_bps: 0.0"), text);
         assertTrue(text.contains("Warnings:\n  none\n"), text);
         assertEquals("", err.toString());
@@ -282,7 +285,7 @@ class CheckCommandTest {
         assertRejected("study.yaml line 3, column 3: data: missing key 'assets'; it is required");
     }
 
-    /** Three assets with upper bound 0.3: 3 · 0.3 = 0.9 < 1 (METHODS §5). */
+    /** Three assets with upper bound 0.3: 3 · 0.3 = 0.9 < 1 (Method §5). */
     @Test
     void boundsInfeasibleForTheUniverse_areRejected() {
         edit("study.yaml", "bounds: [0, 0.5]", "bounds: [0, 0.3]");

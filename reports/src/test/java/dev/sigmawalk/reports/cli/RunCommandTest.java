@@ -104,7 +104,8 @@ class RunCommandTest {
                 "weights.csv", "date,strategy,window,asset,weight",
                 "summary.csv", "strategy,window,periods,mean_return,volatility,sharpe,cagr,max_drawdown,mean_turnover,"
                         + "tracking_error,information_ratio,forecast_volatility,bias",
-                "diagnostics.csv", "date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,cd_pvalue");
+                "diagnostics.csv", "date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,cd_pvalue,"
+                        + "lm_adj_stat,lm_adj_pvalue");
         for (Map.Entry<String, String> h : headers.entrySet()) {
             assertEquals(h.getValue(), Files.readAllLines(res.resolve(h.getKey())).get(0), h.getKey());
         }
@@ -119,7 +120,7 @@ class RunCommandTest {
     }
 
     /**
-     * summary.csv against a second computation from returns.csv (METHODS §7): volatility
+     * summary.csv against a second computation from returns.csv (Method §7): volatility
      * √12·sd(net, N−1), Sharpe √12·mean(net − rf)/sd(net − rf) with rf from the invented bill file,
      * and the market row's mean return 12·mean(market).
      */
@@ -227,7 +228,7 @@ class RunCommandTest {
 
     /**
      * A sample matrix with more assets than window rows is singular, so unbounded minimum variance
-     * fails at every rebalance (METHODS §5) and the path holds cash: it must be recorded, warned
+     * fails at every rebalance (Method §5) and the path holds cash: it must be recorded, warned
      * about, and kept out of the "lowest realised risk" answer it would otherwise win.
      */
     @Test

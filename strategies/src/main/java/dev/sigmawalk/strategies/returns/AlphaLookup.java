@@ -4,7 +4,7 @@ import java.time.LocalDate;
 
 /**
  * A user's per-period alpha forecasts: the latest value for an asset dated on or before a given
- * date, or 0 where none is given (METHODS §4). Implementations must be side-effect free and
+ * date, or 0 where none is given (Method §4). Implementations must be side-effect free and
  * return a finite value.
  */
 @FunctionalInterface

@@ -8,7 +8,7 @@ import java.util.OptionalDouble;
 
 /**
  * Per-period expected excess returns μ of a window's eligible assets, in the window's asset
- * order (METHODS §4), for the portfolio rules that need them. Models are immutable values.
+ * order (Method §4), for the portfolio rules that need them. Models are immutable values.
  */
 public sealed interface ExpectedReturnModel permits SingleIndexReturns, HistoricalReturns {
 

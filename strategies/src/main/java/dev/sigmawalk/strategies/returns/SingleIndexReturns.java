@@ -8,7 +8,7 @@ import java.util.Objects;
 import java.util.OptionalDouble;
 
 /**
- * The single-index input list (METHODS §4): μ_i = α_i + β_i μ_m, where β_i = s_im / s_mm is the
+ * The single-index input list (Method §4): μ_i = α_i + β_i μ_m, where β_i = s_im / s_mm is the
  * window's market-model beta (as in {@link SingleIndexCovariance}), α_i the user's alpha for the
  * asset as known on the rebalance date (0 where none is given) and μ_m the per-period market
  * premium: the given annual premium divided by p, else the window mean m̄. The regression

@@ -9,7 +9,7 @@ import java.util.Objects;
 
 /**
  * A per-period covariance forecast built from one estimation window's excess returns
- * (METHODS §3). Every model starts from the window's shared sample moments
+ * (Method §3). Every model starts from the window's shared sample moments
  * ({@link EstimationWindow#moments()}, divisor L-1) and never recomputes them.
  *
  * <p>Models are immutable values and may serve any number of windows and threads.

@@ -6,7 +6,7 @@ import dev.sigmawalk.engine.model.EstimationWindow;
 import java.util.OptionalDouble;
 
 /**
- * The full sample covariance matrix S = 1/(L-1) Σ_t (x_t - x̄)(x_t - x̄)' (METHODS §3), taken as
+ * The full sample covariance matrix S = 1/(L-1) Σ_t (x_t - x̄)(x_t - x̄)' (Method §3), taken as
  * is from the window's moments. With n ≥ L it is singular; that is left to the portfolio rule to
  * report.
  */

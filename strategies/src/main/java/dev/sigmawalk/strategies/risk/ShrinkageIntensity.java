@@ -3,7 +3,7 @@ package dev.sigmawalk.strategies.risk;
 /**
  * Estimators of the optimal Ledoit-Wolf shrinkage intensity δ for Σ = δF + (1-δ)S, one per
  * target. All are computed on demeaned window data with divisor-L moments, as the papers define
- * them (METHODS §3): a divisor-(L-1) quantity q enters as q (L-1)/L. δ is scale-free, so it
+ * them (Method §3): a divisor-(L-1) quantity q enters as q (L-1)/L. δ is scale-free, so it
  * applies unchanged to the divisor-(L-1) matrices the caller combines.
  *
  * <p>Common notation: x̃_ti and ỹ_t the demeaned asset and market excess returns; s_ij, s_i0,

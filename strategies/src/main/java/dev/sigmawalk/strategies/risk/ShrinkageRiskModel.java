@@ -9,7 +9,7 @@ import java.util.Objects;
 import java.util.OptionalDouble;
 
 /**
- * Ledoit-Wolf shrinkage Σ = δF + (1-δ)S (METHODS §3), with S the sample matrix (divisor L-1), F a
+ * Ledoit-Wolf shrinkage Σ = δF + (1-δ)S (Method §3), with S the sample matrix (divisor L-1), F a
  * structured target built from S and δ ∈ [0, 1] the estimated optimal intensity of the paper
  * that introduced the target (see {@link ShrinkageIntensity}):
  * <ul>

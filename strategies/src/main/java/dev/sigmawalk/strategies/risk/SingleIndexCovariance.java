@@ -7,7 +7,7 @@ import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import java.util.Objects;
 
 /**
- * The single-index covariance Σ_SI = s_mm ββ' + diag(d) in factor form (Sharpe 1963; METHODS §3).
+ * The single-index covariance Σ_SI = s_mm ββ' + diag(d) in factor form (Sharpe 1963; Method §3).
  *
  * <p>Fitted from a window's sample moments (all with divisor L-1): β_i = s_im / s_mm,
  * α_i = x̄_i - β_i m̄, d_i = S_ii - β_i² s_mm. Because s_mm β_i² + d_i = S_ii, the diagonal equals

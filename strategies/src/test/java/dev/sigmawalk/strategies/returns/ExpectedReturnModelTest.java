@@ -18,7 +18,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
- * Expected returns on a three-row window computed by hand (METHODS §4):
+ * Expected returns on a three-row window computed by hand (Method §4):
  * <pre>
  *   t   m      x_Z01  x_Z02
  *   0   0.01   0.00   0.03

@@ -49,7 +49,7 @@ class RiskModelProperties {
     }
 
     /**
-     * METHODS §3: Σ_SI keeps S's diagonal; shrinkage toward the single-index and
+     * Method §3: Σ_SI keeps S's diagonal; shrinkage toward the single-index and
      * constant-correlation targets keeps it too, as both targets carry S_ii on their diagonal.
      * The 60 windows are drawn from a fixed seed.
      */

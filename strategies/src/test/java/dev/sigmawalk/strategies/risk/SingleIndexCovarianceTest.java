@@ -47,7 +47,7 @@ class SingleIndexCovarianceTest {
         assertSame(si.dense(), si.dense(), "dense matrix is built once");
     }
 
-    /** METHODS §3: the single-index matrix keeps the sample variances on its diagonal. */
+    /** Method §3: the single-index matrix keeps the sample variances on its diagonal. */
     @Test
     void referenceWindow_diagonalEqualsSampleVariances() {
         var window = ReferenceData.window();
