@@ -68,11 +68,11 @@ public record HeatMap(String strategy, Measure measure, String rowKey, List<Stri
     }
 
     /** One heat map per strategy (in first-seen order) and measure. */
-    static List<HeatMap> of(SweepPlan plan, List<PointRow> rows) {
-        Axis first = plan.sweep().axes().get(0);
-        boolean byWindow = plan.sweep().axes().size() < 2;
-        List<String> columns = byWindow ? windows(rows) : labels(plan.sweep().axes().get(1));
-        String columnKey = byWindow ? "window" : plan.sweep().axes().get(1).key();
+    static List<HeatMap> of(SweepFile sweep, List<PointRow> rows) {
+        Axis first = sweep.axes().get(0);
+        boolean byWindow = sweep.axes().size() < 2;
+        List<String> columns = byWindow ? windows(rows) : labels(sweep.axes().get(1));
+        String columnKey = byWindow ? "window" : sweep.axes().get(1).key();
         List<HeatMap> maps = new ArrayList<>();
         for (String s : strategies(rows)) {
             for (Measure m : Measure.values()) {
@@ -88,7 +88,7 @@ public record HeatMap(String strategy, Measure measure, String rowKey, List<Stri
                     if (!r.strategy().equals(s) || !Double.isFinite(m.of(r))) {
                         continue;
                     }
-                    int[] at = plan.sweep().coordinates(r.point().number() - 1);
+                    int[] at = sweep.coordinates(r.point().number() - 1);
                     int j = byWindow ? columns.indexOf(r.window()) : at[1];
                     pools.get(at[0]).get(j).add(m.of(r));
                 }

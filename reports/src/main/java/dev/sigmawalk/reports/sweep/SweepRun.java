@@ -98,7 +98,7 @@ public final class SweepRun {
             }
         }
         GridEvidence evidence = GridEvidence.of(rows, tests);
-        List<HeatMap> maps = HeatMap.of(plan, rows);
+        List<HeatMap> maps = HeatMap.of(plan.sweep(), rows);
         try (OutputFolder folder = OutputFolder.prepare(plan.out(), force)) {
             Path dir = folder.staging();
             SweepFiles.writeSweep(dir.resolve("sweep.csv"), plan.keys(), lines);
