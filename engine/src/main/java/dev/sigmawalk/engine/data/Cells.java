@@ -60,6 +60,26 @@ final class Cells {
                 "'" + cell + "' is not a number; expected a decimal such as 0.0123 or an empty cell");
     }
 
+    /**
+     * Method §1: a price must be positive; a return or rate below -1 (a loss of more than all
+     * of it) is impossible. Missing values (NaN) pass.
+     *
+     * @param prices whether {@code value} is a price (false for returns and for rates beside prices)
+     */
+    static void requirePossible(double value, boolean prices, String cell, Path file, int line, String column) {
+        if (prices) {
+            if (!(value > 0) && !Double.isNaN(value)) {
+                throw new InputException(new InputException.Location(file, line, column),
+                        "'" + cell + "' is not a positive price; prices must be > 0");
+            }
+        } else if (value < -1) {
+            throw new InputException(new InputException.Location(file, line, column),
+                    "'" + cell + "' is a return below -1, a loss of more than everything, which is impossible;"
+                            + " expected decimal returns (-0.015 for a 1.5 % loss): if the file holds percent,"
+                            + " divide every value by 100");
+        }
+    }
+
     /** Sign, digits with at most one point, optional exponent: exactly what parseDouble accepts of these. */
     private static boolean looksNumeric(String s) {
         int i = 0;

@@ -19,7 +19,7 @@ import java.util.List;
  * dictionary (gigabytes for 2 000 × 5 000 cells) and forgets the line numbers once blank lines are
  * skipped. Spreadsheet exports are accepted: a UTF-8 byte-order mark, CRLF or LF line ends, quoted
  * headers and fields, and whitespace around a cell (trimmed). Blank lines are skipped but still
- * counted. A record with a line break inside quotes reports the line it ends on.
+ * counted. No cell may hold a line break: a quote left open is reported at the line where it opened.
  */
 final class CsvSource implements AutoCloseable {
     /**
@@ -45,10 +45,7 @@ final class CsvSource implements AutoCloseable {
      * @throws InputException when the file is missing, unreadable or empty
      */
     static CsvSource open(Path file) {
-        if (!Files.isRegularFile(file)) {
-            throw new InputException(new InputException.Location(file, 0, null),
-                    "file not found (looked for " + file.toAbsolutePath() + ")");
-        }
+        TextEncoding.requireUtf8(file, "data file");
         CsvParserSettings settings = new CsvParserSettings();
         settings.setNullValue("");
         settings.setEmptyValue("");
@@ -67,7 +64,14 @@ final class CsvSource implements AutoCloseable {
         }
         List<String> names = new ArrayList<>(first.length);
         for (String cell : first) {
-            names.add(trim(cell));
+            String name = trim(cell);
+            if (name.indexOf('\n') >= 0 || name.indexOf('\r') >= 0) {
+                QuoteScan.Span span = QuoteScan.firstMultiLine(file);
+                parser.stopParsing();
+                throw span != null ? QuoteScan.unclosed(file, span)
+                        : new InputException(new InputException.Location(file, 1, null), "a header cell holds a line break");
+            }
+            names.add(name);
         }
         return new CsvSource(file, parser, Collections.unmodifiableList(names));
     }
@@ -84,7 +88,7 @@ final class CsvSource implements AutoCloseable {
             }
             return Math.max(MIN_COLUMNS, commas + 2);
         } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException("cannot read " + file, e);
+            throw InputFile.unreadable(file, e);
         }
     }
 
@@ -97,12 +101,22 @@ final class CsvSource implements AutoCloseable {
         return header;
     }
 
-    /** The next record's cells, trimmed, or {@code null} at the end of the file. */
+    /**
+     * The next record's cells, trimmed, or {@code null} at the end of the file.
+     *
+     * @throws InputException at the line where a quote opened when a cell spans a line break
+     */
     String[] next() {
         String[] cells = nextRaw();
         if (cells != null) {
             for (int i = 0; i < cells.length; i++) {
                 cells[i] = trim(cells[i]);
+                if (cells[i].indexOf('\n') >= 0 || cells[i].indexOf('\r') >= 0) {
+                    QuoteScan.Span span = QuoteScan.firstMultiLine(file);
+                    throw span != null ? QuoteScan.unclosed(file, span)
+                            : new InputException(new InputException.Location(file, line(), null),
+                                    "a cell holds a line break; expected one row per line");
+                }
             }
         }
         return cells;
@@ -117,6 +131,10 @@ final class CsvSource implements AutoCloseable {
         try {
             return parser.parseNext();
         } catch (TextParsingException e) {
+            QuoteScan.Span span = QuoteScan.firstMultiLine(file);
+            if (span != null) {
+                throw QuoteScan.unclosed(file, span);
+            }
             // The parser counts lines from 0.
             throw new InputException(new InputException.Location(file, (int) e.getLineIndex() + 1, null),
                     "cannot read this row as CSV; expected no more cells than the header ("

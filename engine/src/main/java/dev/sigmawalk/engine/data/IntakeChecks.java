@@ -2,6 +2,7 @@ package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.ValueKind;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * The checks run once the panel exists: completeness of the market and risk-free series over the
@@ -14,6 +15,10 @@ final class IntakeChecks {
     static final double IMPLAUSIBLE_ANNUAL_RATE = 1.0;
     /** Method §1: the market "equals" the assets' mean when every row agrees within this. */
     static final double MEAN_MARKET_TOLERANCE = 1e-10;
+    /** Decimal returns above this in size in most rows mean the file holds percent. */
+    static final double PERCENT_MEDIAN = 0.5;
+    /** Fewer returns beyond ±100 % in a column are left to the +500 % warning. */
+    static final int MANY_BEYOND_ONE = 3;
 
     private final ReturnPanel panel;
     private final ValueKind kind;
@@ -48,11 +53,75 @@ final class IntakeChecks {
                 int fileRow = t + offset;
                 boolean earlierPrice = seriesKind == ValueKind.PRICES && !Double.isNaN(column.values()[fileRow]);
                 int cellRow = earlierPrice ? fileRow - 1 : fileRow;
-                throw new InputException(new InputException.Location(column.file(), column.lines()[cellRow], column.column()),
-                        "'' is missing" + (earlierPrice ? ", so the return to " + panel.date(t) + " cannot be computed" : "")
+                int line = column.lines()[cellRow];
+                String missing = line > 0 ? "'' is missing"
+                        : "no row of the file gives '" + column.column() + "' the value for the return to " + panel.date(t);
+                throw new InputException(new InputException.Location(column.file(), line, column.column()),
+                        missing + (earlierPrice ? ", so the return to " + panel.date(t) + " cannot be computed" : "")
                                 + "; the " + column.role() + " needs a value on every date from " + panel.date(firstNeeded)
                                 + " (the start of the longest window before the first rebalance on "
                                 + panel.date(firstRebalance) + ") to " + panel.date(panel.rows() - 1));
+            }
+        }
+    }
+
+    /**
+     * Refuses returns that are in percent: when most returns are above 0.5 in size (a median
+     * |r| over 50 % a period, which no listed asset shows in decimal returns), the file holds
+     * percent. Counting against 0.5 finds the median's side without sorting.
+     */
+    void requireDecimalScale(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        if (kind != ValueKind.RETURNS) {
+            return;
+        }
+        long present = 0;
+        long large = 0;
+        int firstRow = -1;
+        int firstCol = -1;
+        for (int t = 0; t < panel.rows(); t++) {
+            for (int k = 0; k < kept.size(); k++) {
+                double r = panel.value(t, k);
+                if (!Double.isNaN(r)) {
+                    present++;
+                    if (Math.abs(r) > PERCENT_MEDIAN) {
+                        large++;
+                        if (firstRow < 0) {
+                            firstRow = t;
+                            firstCol = k;
+                        }
+                    }
+                }
+            }
+        }
+        if (present > 0 && large * 2 > present) {
+            int col = assetCols.get(kept.get(firstCol));
+            throw new InputException(new InputException.Location(table.file(), 0, null), String.format(Locale.ROOT,
+                    "%.0f %% of the returns are larger than %.1f in size (line %d, column '%s' holds %s), so the file"
+                            + " looks like percent; expected decimal returns (0.012 for 1.2 %%): divide every value by 100",
+                    100.0 * large / present, PERCENT_MEDIAN, table.line(firstRow + offset, col), table.columns().get(col),
+                    panel.value(firstRow, firstCol)));
+        }
+    }
+
+    /**
+     * Warns about a column where more than a tenth of the returns (and at least three) exceed
+     * 100 % in size: a mix of percent and decimal values, or prices given as returns.
+     */
+    void warnManyReturnsBeyondOne(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        for (int k = 0; k < kept.size(); k++) {
+            int present = 0;
+            int beyond = 0;
+            for (int t = 0; t < panel.rows(); t++) {
+                double r = panel.value(t, k);
+                if (!Double.isNaN(r)) {
+                    present++;
+                    beyond += Math.abs(r) > 1 ? 1 : 0;
+                }
+            }
+            if (beyond >= MANY_BEYOND_ONE && beyond * 10 > present) {
+                warnings.add(table.file().getFileName() + " column '" + table.columns().get(assetCols.get(kept.get(k)))
+                        + "': " + beyond + " of " + present + " returns exceed 100 % in size in one period;"
+                        + (kind == ValueKind.PRICES ? " check the prices" : " check that they are decimals, not percent"));
             }
         }
     }
@@ -70,7 +139,8 @@ final class IntakeChecks {
             }
             if (count > 0) {
                 String name = table.columns().get(assetCols.get(kept.get(k)));
-                warnings.add(table.file().getFileName() + " line " + table.lines()[first + offset] + ", column '" + name
+                warnings.add(table.file().getFileName() + " line " + table.line(first + offset, assetCols.get(kept.get(k)))
+                        + ", column '" + name
                         + "': a return of " + panel.value(first, k) + " is above +500 % in one period"
                         + (count > 1 ? " (" + count + " such rows in this column)" : "")
                         + (kind == ValueKind.PRICES ? "; check the prices" : "; check that returns are decimals, not percent"));

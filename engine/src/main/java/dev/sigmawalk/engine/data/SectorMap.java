@@ -27,8 +27,10 @@ final class SectorMap {
             while ((cells = source.next()) != null) {
                 int line = source.line();
                 LongCsv.requireWidth(source, cells, HEADER.size(), line);
-                String asset = LongCsv.requireText(source, cells[0], line, "asset");
-                String sector = LongCsv.requireText(source, cells[1], line, "sector");
+                String asset = Names.requireInert(LongCsv.requireText(source, cells[0], line, "asset"), file, line,
+                        "asset", "asset");
+                String sector = Names.requireInert(LongCsv.requireText(source, cells[1], line, "sector"), file, line,
+                        "sector", "sector");
                 Integer earlier = firstLine.putIfAbsent(asset, line);
                 if (earlier != null) {
                     throw new InputException(new InputException.Location(file, line, "asset"),

@@ -12,14 +12,14 @@ import java.util.List;
  * @param file the file the values were read from
  * @param column the column's header name in that file
  * @param values one value per row of the assets file (NaN = empty cell)
- * @param lines the line in {@code file} of each value
+ * @param lines the line in {@code file} of each value (0 where a long file has no row for it)
  */
 record SeriesColumn(String role, Path file, String column, double[] values, int[] lines) {
 
     /** A column of the assets file itself. */
     static SeriesColumn fromColumn(String role, WideTable assets, int col) {
         return new SeriesColumn(role, assets.file(), assets.columns().get(col), assets.column(col),
-                assets.lines().clone());
+                assets.columnLines(col));
     }
 
     /**

@@ -1,7 +1,9 @@
 package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.Bounds;
+import dev.sigmawalk.engine.study.DataLayout;
 import dev.sigmawalk.engine.study.DataSpec;
+import dev.sigmawalk.engine.study.EvidenceSpec;
 import dev.sigmawalk.engine.study.SeriesSource;
 import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
@@ -21,6 +23,10 @@ import java.util.Optional;
 final class StudyDataLoader {
     private static final String MARKET = "market";
     private static final String RISK_FREE = "risk-free";
+    /** Unknown alpha assets named in the warning before "...". */
+    private static final int UNKNOWN_SHOWN = 10;
+    /** Fewer bootstrap resamples draw a warning (see {@link #warnFewResamples}). */
+    private static final int FEW_RESAMPLES = 1000;
 
     private final Study study;
     private final DataSpec spec;
@@ -35,7 +41,7 @@ final class StudyDataLoader {
     StudyData load() {
         // A risk-free column beside prices holds rates, which may be zero or negative.
         String rates = spec.riskFree() instanceof SeriesSource.Column c ? c.name() : null;
-        WideTable table = readWide(spec.assets(), spec.values(), rates);
+        WideTable table = readAssets(rates);
         SeriesColumn market = series(MARKET, spec.market(), table, spec.values());
         Optional<SeriesColumn> riskFreeColumn = spec.riskFree() instanceof SeriesSource.AnnualRate
                 ? Optional.empty()
@@ -75,13 +81,25 @@ final class StudyDataLoader {
         checks.requireComplete(market, spec.values(), marketReturns, firstNeeded, schedule.firstRebalance());
         riskFreeColumn.ifPresent(rf -> checks.requireComplete(rf, ValueKind.RETURNS, riskFree, firstNeeded,
                 schedule.firstRebalance()));
+        checks.requireDecimalScale(table, assetCols, kept);
+        checks.warnManyReturnsBeyondOne(table, assetCols, kept);
         checks.warnImplausibleReturns(table, assetCols, kept);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
         checks.warnMarketIsAssetMean();
         requireFeasibleBounds(panel.assetCount());
 
-        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(), fingerprints, warnings,
+        warnFewResamples();
+        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(panel), fingerprints, warnings,
                 AssetCoverage.of(panel));
+    }
+
+    private WideTable readAssets(String ratesColumn) {
+        if (spec.layout() == DataLayout.WIDE) {
+            return readWide(spec.assets(), spec.values(), ratesColumn);
+        }
+        WideTable t = LongAssetsReader.read(spec.assets(), spec.values(), ratesColumn);
+        fingerprints.add(FileFingerprint.of(spec.assets()));
+        return t;
     }
 
     private WideTable readWide(Path file, ValueKind kind, String ratesColumn) {
@@ -231,15 +249,46 @@ final class StudyDataLoader {
         return sectors;
     }
 
-    private Map<Path, AlphaTable> alphas() {
+    private Map<Path, AlphaTable> alphas(ReturnPanel panel) {
         Map<Path, AlphaTable> out = new LinkedHashMap<>();
         for (StrategySpec s : study.strategies()) {
             if (s.alphas().isPresent() && !out.containsKey(s.alphas().get())) {
                 Path file = s.alphas().get();
-                out.put(file, AlphaTable.read(file));
+                AlphaTable table = AlphaTable.read(file);
+                out.put(file, table);
                 fingerprints.add(FileFingerprint.of(file));
+                warnUnknownAlphaAssets(file, table, panel);
             }
         }
         return out;
+    }
+
+    /** An alpha for an asset the panel does not hold is never used; say which ones. */
+    private void warnUnknownAlphaAssets(Path file, AlphaTable table, ReturnPanel panel) {
+        List<String> unknown = new ArrayList<>();
+        for (String asset : table.assets()) {
+            if (panel.assetColumn(asset) < 0) {
+                unknown.add(asset);
+            }
+        }
+        if (!unknown.isEmpty()) {
+            int shown = Math.min(unknown.size(), UNKNOWN_SHOWN);
+            warnings.add(file.getFileName() + " gives alphas for " + unknown.size() + " asset"
+                    + (unknown.size() == 1 ? "" : "s") + " not in the universe, which are ignored: "
+                    + String.join(", ", unknown.subList(0, shown)) + (shown < unknown.size() ? ", ..." : ""));
+        }
+    }
+
+    /**
+     * With B resamples a bootstrap p-value moves in steps of 1/(B + 1); below 1 000 the steps
+     * are too coarse for the adjustments over windows and strategies that the report applies.
+     */
+    private void warnFewResamples() {
+        int b = study.evidence().resamples();
+        if (b < FEW_RESAMPLES) {
+            warnings.add("evidence.resamples: " + b + " resamples resolve bootstrap p-values only in steps of 1/" + (b + 1)
+                    + ", too coarse once they are adjusted for several windows and strategies; "
+                    + FEW_RESAMPLES + " or more (the default is " + EvidenceSpec.DEFAULT_RESAMPLES + ") is common practice");
+        }
     }
 }

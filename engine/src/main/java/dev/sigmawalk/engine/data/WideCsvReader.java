@@ -47,10 +47,8 @@ final class WideCsvReader {
                 int base = (rows.count - 1) * cols;
                 for (int j = 0; j < cols; j++) {
                     double v = Cells.number(cells[j + 1], file, line, columns.get(j));
-                    if (kind == ValueKind.PRICES && j != ratesAt && !(v > 0) && !Double.isNaN(v)) {
-                        throw new InputException(new InputException.Location(file, line, columns.get(j)),
-                                "'" + cells[j + 1] + "' is not a positive price; prices must be > 0");
-                    }
+                    Cells.requirePossible(v, kind == ValueKind.PRICES && j != ratesAt, cells[j + 1], file, line,
+                            columns.get(j));
                     target[base + j] = v;
                 }
             }
@@ -81,6 +79,7 @@ final class WideCsvReader {
                 throw new InputException(new InputException.Location(file, 1, null),
                         "header cell " + (j + 1) + " is empty; every column needs a name");
             }
+            Names.requireInert(name, file, 1, null, "column");
             if (!seen.add(name)) {
                 throw new InputException(new InputException.Location(file, 1, name),
                         "'" + name + "' names two columns; asset names must be distinct");

@@ -14,10 +14,12 @@ import java.util.OptionalInt;
  * @param riskFree the per-period risk-free rate (a file, a column, or an annual number)
  * @param periodsPerYear given periods per year; empty = inferred from the dates
  * @param sectors optional CSV {@code asset,sector}
+ * @param layout how the assets file is laid out (wide by default)
  */
 public record DataSpec(Path assets, ValueKind values, SeriesSource market, SeriesSource riskFree,
-                       OptionalInt periodsPerYear, Optional<Path> sectors) {
+                       OptionalInt periodsPerYear, Optional<Path> sectors, DataLayout layout) {
     public DataSpec {
+        Objects.requireNonNull(layout, "layout");
         Objects.requireNonNull(assets, "assets");
         Objects.requireNonNull(values, "values");
         Objects.requireNonNull(market, "market");
@@ -32,9 +34,15 @@ public record DataSpec(Path assets, ValueKind values, SeriesSource market, Serie
         }
     }
 
-    /** A data section with no sectors file. */
+    /** A wide assets file. */
+    public DataSpec(Path assets, ValueKind values, SeriesSource market, SeriesSource riskFree,
+                    OptionalInt periodsPerYear, Optional<Path> sectors) {
+        this(assets, values, market, riskFree, periodsPerYear, sectors, StudyDefaults.LAYOUT);
+    }
+
+    /** A wide assets file and no sectors file. */
     public DataSpec(Path assets, ValueKind values, SeriesSource market, SeriesSource riskFree,
                     OptionalInt periodsPerYear) {
-        this(assets, values, market, riskFree, periodsPerYear, Optional.empty());
+        this(assets, values, market, riskFree, periodsPerYear, Optional.empty(), StudyDefaults.LAYOUT);
     }
 }

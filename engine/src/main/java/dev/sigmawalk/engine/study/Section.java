@@ -101,13 +101,23 @@ final class Section {
     }
 
     double number(YamlNode n, String keyPath) {
-        if (n instanceof YamlNode.Scalar s && (s.kind() == YamlNode.Scalar.Kind.INTEGER || s.kind() == YamlNode.Scalar.Kind.DECIMAL)) {
-            double v = Double.parseDouble(s.text());
-            if (Double.isFinite(v)) {
-                return v;
-            }
+        if (n instanceof YamlNode.Scalar s && isNumeric(s)) {
+            requirePlain(s, keyPath);
+            return Double.parseDouble(s.text());
         }
         throw badAt(n, keyPath, "is not a number; expected a finite decimal number");
+    }
+
+    private static boolean isNumeric(YamlNode.Scalar s) {
+        return s.kind() == YamlNode.Scalar.Kind.INTEGER || s.kind() == YamlNode.Scalar.Kind.DECIMAL;
+    }
+
+    /** Refuses numeric forms other than a plain finite decimal ({@link YamlNumber}). */
+    private void requirePlain(YamlNode.Scalar s, String keyPath) {
+        String problem = YamlNumber.problem(s.text());
+        if (problem != null) {
+            throw badAt(s, keyPath, problem);
+        }
     }
 
     int integer(String key, int min) {
@@ -116,6 +126,7 @@ final class Section {
 
     int integer(YamlNode n, String keyPath, int min) {
         if (n instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.INTEGER) {
+            requirePlain(s, keyPath);
             try {
                 int v = Integer.parseInt(s.text());
                 if (v >= min) {
@@ -131,6 +142,7 @@ final class Section {
     long wholeNumber(String key) {
         YamlNode n = node(key);
         if (n instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.INTEGER) {
+            requirePlain(s, pathOf(key));
             try {
                 return Long.parseLong(s.text());
             } catch (NumberFormatException e) {

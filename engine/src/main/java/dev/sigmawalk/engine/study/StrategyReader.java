@@ -1,6 +1,7 @@
 package dev.sigmawalk.engine.study;
 
 import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.data.Names;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -65,6 +66,9 @@ final class StrategyReader {
         String name = s.text("name");
         if (RESERVED.equals(name)) {
             throw s.bad("name", "is reserved for the benchmark; expected another name");
+        }
+        if (Names.startsLikeFormula(name)) {
+            throw s.bad("name", Names.formulaProblem("strategy"));
         }
         Objective objective = s.choice("objective", Objective.class);
         RiskKind risk = objective == Objective.EQUAL_WEIGHT && !s.has("risk")

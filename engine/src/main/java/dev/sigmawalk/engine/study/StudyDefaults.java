@@ -10,6 +10,8 @@ import java.util.List;
 public final class StudyDefaults {
     /** {@code output:} when absent, resolved against the study file's folder. */
     public static final String OUTPUT = "sigmawalk-out";
+    /** {@code data.layout:} when absent: one column per asset. */
+    public static final DataLayout LAYOUT = DataLayout.WIDE;
     /** {@code walkforward.rebalance_every:} when neither it nor {@code rebalance:} is given. */
     public static final int REBALANCE_EVERY = 1;
     /** {@code walkforward.cost_bps:} when absent: no trading cost. */
@@ -34,6 +36,7 @@ public final class StudyDefaults {
         EvidenceSpec evidence = EvidenceSpec.defaults();
         return List.of(
                 "title: the study file's name without its extension",
+                "data.layout: " + LAYOUT.spelling(),
                 "data.periods_per_year: inferred from the median spacing of the dates"
                         + " (days < 4: 252, < 15: 52, < 60: 12, < 200: 4, else 1)",
                 "data.market, data.riskfree: a value ending in .csv or holding a '/' is a file; otherwise a column"

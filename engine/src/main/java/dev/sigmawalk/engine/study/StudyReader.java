@@ -17,8 +17,11 @@ import java.util.Set;
  */
 public final class StudyReader {
     private static final Set<String> ROOT = Set.of("title", "data", "walkforward", "strategies", "evidence", "output");
-    private static final Set<String> DATA = Set.of("assets", "values", "market", "riskfree", "periods_per_year", "sectors");
+    private static final Set<String> DATA = Set.of("assets", "layout", "values", "market", "riskfree", "periods_per_year",
+            "sectors");
     private static final Set<String> WALK = Set.of("windows", "rebalance_every", "rebalance", "start", "end", "cost_bps");
+    /** A cost of 10 000 bps takes the whole traded value; more is no longer a cost. */
+    private static final double MAX_COST_BPS = 10_000;
     private static final Set<String> EVIDENCE = Set.of("resamples", "seed", "block_length");
 
     private StudyReader() {
@@ -69,8 +72,9 @@ public final class StudyReader {
         ValueKind values = s.choice("values", ValueKind.class);
         SeriesSource market = series(s, "market", false);
         SeriesSource riskFree = series(s, "riskfree", true);
+        DataLayout layout = s.has("layout") ? s.choice("layout", DataLayout.class) : StudyDefaults.LAYOUT;
         return new DataSpec(assets, values, market, riskFree, s.optionalInteger("periods_per_year", 1),
-                s.has("sectors") ? Optional.of(s.path("sectors")) : Optional.empty());
+                s.has("sectors") ? Optional.of(s.path("sectors")) : Optional.empty(), layout);
     }
 
     /** A file (text ending in .csv or holding a '/'), a column of the assets file, or (risk-free) an annual number. */
@@ -117,6 +121,10 @@ public final class StudyReader {
         if (!(cost >= 0)) {
             throw s.bad("cost_bps", "is negative; expected a cost >= 0 in basis points");
         }
+        if (cost > MAX_COST_BPS) {
+            throw s.bad("cost_bps", "basis points would cost more than the whole traded value (10000 bps = 100 %);"
+                    + " expected basis points, such as 10 for 0.1 %");
+        }
         return new WalkForwardSpec(windows, rule, start, end, cost);
     }
 
@@ -133,7 +141,12 @@ public final class StudyReader {
 
     private static EvidenceSpec evidence(Section s) {
         EvidenceSpec d = EvidenceSpec.defaults();
-        int resamples = s.has("resamples") ? s.integer("resamples", 100) : d.resamples();
+        int resamples = s.has("resamples") ? s.integer("resamples", EvidenceSpec.MIN_RESAMPLES) : d.resamples();
+        if (resamples > EvidenceSpec.MAX_RESAMPLES) {
+            throw s.bad("resamples", "is beyond reason: p-values gain nothing past a few thousand resamples and each"
+                    + " one repeats every test; expected at most " + EvidenceSpec.MAX_RESAMPLES + " (the default is "
+                    + EvidenceSpec.DEFAULT_RESAMPLES + ")");
+        }
         long seed = s.has("seed") ? s.wholeNumber("seed") : d.seed();
         int block = s.has("block_length") ? s.integer("block_length", 0) : d.blockLength();
         return new EvidenceSpec(resamples, seed, block);

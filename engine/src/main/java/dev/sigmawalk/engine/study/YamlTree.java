@@ -6,9 +6,9 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.data.InputFile;
+import dev.sigmawalk.engine.data.TextEncoding;
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -34,11 +34,7 @@ public final class YamlTree {
      * @throws InputException when the file is missing, empty or not valid YAML
      */
     public static YamlNode parse(Path file) {
-        if (!Files.isRegularFile(file)) {
-            throw new InputException(new InputException.Location(file, 0, null),
-                    "study file not found (looked for " + file.toAbsolutePath() + ")");
-        }
-        // Jackson detects the file's encoding from its first bytes; reading the text here would not.
+        TextEncoding.requireUtf8(file, "study file");
         return parse(file, factory -> factory.createParser(file.toFile()));
     }
 
@@ -69,7 +65,7 @@ public final class YamlTree {
             throw InputException.at(file, at == null ? 0 : at.getLineNr(), at == null ? 0 : at.getColumnNr(),
                     "not valid YAML (" + e.getOriginalMessage() + ")");
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read " + file, e);
+            throw InputFile.unreadable(file, e);
         }
     }
 

@@ -158,7 +158,7 @@ class DataIntakeErrorTest {
     @Test
     void missingFile_isAnInputError() {
         InputException e = loadFails(new StudyFixture(dir).edit("study.yaml", "riskfree: riskfree.csv", "riskfree: rates.csv"));
-        assertTrue(e.getMessage().startsWith("rates.csv: file not found"), e.getMessage());
+        assertTrue(e.getMessage().startsWith("rates.csv: data file not found"), e.getMessage());
     }
 
     /** A row far wider than the header trips the parser's column limit; the line is still exact. */
