@@ -62,7 +62,14 @@ final class ComposedStrategy implements StrategyDefinition {
             return new Decision.Failed(risk.label() + " model could not be estimated: " + e.getMessage(),
                     OptionalDouble.empty());
         }
-        double[] mu = returns == null ? null : returns.expected(window);
+        double[] mu;
+        try {
+            mu = returns == null ? null : returns.expected(window);
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            // For example single-index expected returns in a window where the market is constant.
+            return new Decision.Failed("expected returns could not be estimated: " + e.getMessage(),
+                    sigma.shrinkage());
+        }
         return rule.apply(new RuleInput(window.assets(), sigma, mu, bounds), warm).toDecision(sigma.shrinkage());
     }
 }

@@ -17,13 +17,22 @@ import java.util.Optional;
  * @param diagnostics mean |ρ|, Breusch-Pagan LM and Pesaran CD; empty with fewer than two assets
  * @param largestPairs the pairs with the largest residual correlation, largest first
  * @param sectors residual correlation within and across sectors, when sectors are known
+ * @param notes what the diagnostics left out of this window and why (a constant market, an asset
+ *              that moves exactly with the market); empty for an ordinary window
  */
 public record WindowEvidence(LocalDate date, int window, Optional<ResidualDiagnostics> diagnostics,
-                             List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors) {
+                             List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors, List<String> notes) {
     public WindowEvidence {
         Objects.requireNonNull(date, "date");
         Objects.requireNonNull(diagnostics, "diagnostics");
         largestPairs = List.copyOf(largestPairs);
         Objects.requireNonNull(sectors, "sectors");
+        notes = List.copyOf(notes);
+    }
+
+    /** Evidence of an ordinary window, with nothing left out. */
+    public WindowEvidence(LocalDate date, int window, Optional<ResidualDiagnostics> diagnostics,
+                          List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors) {
+        this(date, window, diagnostics, largestPairs, sectors, List.of());
     }
 }

@@ -3,6 +3,7 @@ package dev.sigmawalk.engine.compare;
 import dev.sigmawalk.engine.evidence.ResidualCorrelations;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.run.WindowProbe;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -31,14 +32,30 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         this.pairs = pairs;
     }
 
+    /**
+     * Never throws for a degenerate window: {@link ResidualGuard} leaves out what cannot be
+     * computed and the evidence carries a note saying so, because evidence must never stop the
+     * portfolios.
+     */
     @Override
     public WindowEvidence probe(EstimationWindow window) {
-        if (window.assetCount() < 2) {
-            return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty());
+        ResidualGuard.Usable usable = ResidualGuard.of(window);
+        if (usable.moments().isEmpty()) {
+            return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty(),
+                    usable.notes());
         }
-        ResidualCorrelations rho = ResidualCorrelations.of(window);
+        ResidualCorrelations rho;
+        try {
+            rho = ResidualCorrelations.of(usable.moments().get(), usable.assets());
+        } catch (IllegalArgumentException e) {
+            List<String> notes = new ArrayList<>(usable.notes());
+            notes.add("residual diagnostics not computed: " + e.getMessage());
+            return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty(),
+                    notes);
+        }
         return new WindowEvidence(window.date(), window.length(), Optional.of(rho.diagnostics()),
-                rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectorsOf(window))));
+                rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectorsOf(window))),
+                usable.notes());
     }
 
     /** Every asset of the window with its sector; assets the sectors file does not list form their own group. */

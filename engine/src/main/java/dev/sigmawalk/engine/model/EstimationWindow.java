@@ -97,12 +97,27 @@ public final class EstimationWindow {
         return periodsPerYear;
     }
 
-    /** The window's sample moments, computed at most once. */
+    /**
+     * The window's sample moments, computed at most once. When the market's excess return is the
+     * same number in every row, s_mm and every s_im are exactly 0: running sums would otherwise
+     * leave rounding dust there, from which a single-index beta would be noise divided by noise.
+     */
     public WindowMoments moments() {
         if (moments == null) {
-            moments = momentsSource != null ? momentsSource.get() : WindowMoments.of(this);
+            WindowMoments computed = momentsSource != null ? momentsSource.get() : WindowMoments.of(this);
+            moments = marketVaries() ? computed : computed.withConstantMarket();
             momentsSource = null;
         }
         return moments;
+    }
+
+    /** Whether the market's excess return takes more than one value in the window (compared exactly). */
+    public boolean marketVaries() {
+        for (int t = 1; t < market.length; t++) {
+            if (market[t] != market[0]) {
+                return true;
+            }
+        }
+        return false;
     }
 }

@@ -26,6 +26,11 @@ public record WindowMoments(int assets, int length, double[] mean, double market
         }
     }
 
+    /** These moments with the market's variance and every asset's covariance with it set to exactly 0. */
+    public WindowMoments withConstantMarket() {
+        return new WindowMoments(assets, length, mean, marketMean, 0.0, new double[assets], covariance);
+    }
+
     /** S_ij. */
     public double covariance(int i, int j) {
         return covariance[i * assets + j];

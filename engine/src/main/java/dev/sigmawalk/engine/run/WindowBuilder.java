@@ -11,8 +11,10 @@ import java.util.function.Supplier;
 
 /**
  * Cuts estimation windows out of a panel (Method §2-§3): an asset is eligible at τ for window L
- * when it has a return in every row τ−L+1..τ; the window holds excess returns x = r − rf and
- * m = r_m − rf over those rows. Only rows up to τ are read, so nothing after τ can reach a model.
+ * when it has a return in every row τ−L+1..τ and its return, or its excess return, is not the
+ * same number in every one of those rows (see {@link #constant}); the window holds excess
+ * returns x = r − rf and m = r_m − rf over those rows. Only rows up to τ are read, so nothing
+ * after τ can reach a model.
  */
 final class WindowBuilder {
     private final ReturnPanel panel;
@@ -36,6 +38,19 @@ final class WindowBuilder {
 
     /** The panel columns eligible at τ for window L, ascending. */
     int[] eligible(int tau, int length) {
+        int[] complete = complete(tau, length);
+        int[] out = new int[complete.length];
+        int count = 0;
+        for (int c : complete) {
+            if (!constant(c, tau, length)) {
+                out[count++] = c;
+            }
+        }
+        return Arrays.copyOf(out, count);
+    }
+
+    /** The panel columns with a return in every row of the window, ascending (before the constancy rule). */
+    int[] complete(int tau, int length) {
         int n = panel.assetCount();
         int first = tau - length + 1;
         int[] out = new int[n];
@@ -46,6 +61,42 @@ final class WindowBuilder {
             }
         }
         return Arrays.copyOf(out, count);
+    }
+
+    /**
+     * Whether a complete column's return, or its excess return, is the same number in every row
+     * of the window. Such a series (a suspended stock with a stale price, or a cash-like asset)
+     * has zero sample variance: the sample matrix is singular, a minimum-variance rule would
+     * take it for a riskless asset, and its market-model residual has no correlation. It is left
+     * out of the window. Compared exactly, so the rule does not depend on rounding; a series
+     * that varies exits at its first change, so the check costs O(1) for ordinary assets.
+     */
+    boolean constant(int col, int tau, int length) {
+        int n = panel.assetCount();
+        double[] r = panel.rawReturns();
+        int first = tau - length + 1;
+        double raw = r[first * n + col];
+        double excess = raw - panel.riskFree(first);
+        boolean rawSame = true;
+        boolean excessSame = true;
+        for (int t = first + 1; t <= tau && (rawSame || excessSame); t++) {
+            double v = r[t * n + col];
+            rawSame &= v == raw;
+            excessSame &= v - panel.riskFree(t) == excess;
+        }
+        return rawSame || excessSame;
+    }
+
+    /** Whether the market's excess return is the same number in every row of the window (zero variance). */
+    boolean marketConstant(int tau, int length) {
+        int first = tau - length + 1;
+        double m0 = panel.market(first) - panel.riskFree(first);
+        for (int t = first + 1; t <= tau; t++) {
+            if (panel.market(t) - panel.riskFree(t) != m0) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

@@ -10,6 +10,7 @@ import java.util.Locale;
 import java.util.TimeZone;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.DateAxis;
+import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.PlotOrientation;
@@ -25,8 +26,8 @@ import org.jfree.data.xy.XYSeriesCollection;
 public final class LineCharts {
     /** Side of the square marker in pixels; squares need far less SVG markup than circles. */
     private static final double MARKER = 4.5;
-    /** Lines longer than this are thinned by {@link Decimation} before drawing. */
-    static final int MAX_POINTS = 1200;
+    /** Lines longer than this are thinned by {@link Decimation} before drawing: under two points a pixel of a 480 px chart. */
+    static final int MAX_POINTS = 800;
 
     private LineCharts() {
     }
@@ -59,6 +60,56 @@ public final class LineCharts {
     }
 
     /**
+     * A chart with dates on the x axis and a logarithmic y axis in base 2, so that equal
+     * proportional moves look equal and each grid line up is a doubling (for growth of wealth,
+     * where a linear axis lets the largest path squash the rest).
+     *
+     * @param lines y values must be > 0 where finite
+     */
+    public static JFreeChart overTimeLog(String title, String yLabel, List<ChartLine> lines) {
+        DateAxis x = new DateAxis("Date", TimeZone.getTimeZone("UTC"), Locale.ROOT);
+        x.setLowerMargin(0.01);
+        x.setUpperMargin(0.01);
+        LogAxis y = new LogAxis(yLabel);
+        y.setBase(2);
+        y.setNumberFormatOverride(plainAxis());
+        y.setSmallestValue(1e-6);
+        y.setMinorTickCount(0);
+        if (spread(lines) >= 3) {
+            // Whole exponents: grid lines at 1, 2, 4, 8, ..., each a doubling.
+            y.setStandardTickUnits(NumberAxis.createIntegerTickUnits(Locale.ROOT));
+        }
+        return build(title, x, y, lines, LineOptions.PLAIN);
+    }
+
+    /** Largest over smallest positive finite y of the lines; 1 when there are none. */
+    private static double spread(List<ChartLine> lines) {
+        double low = Double.POSITIVE_INFINITY;
+        double high = 0;
+        for (ChartLine l : lines) {
+            for (int k = 0; k < l.size(); k++) {
+                double y = l.yAt(k);
+                if (Double.isFinite(y) && y > 0) {
+                    low = Math.min(low, y);
+                    high = Math.max(high, y);
+                }
+            }
+        }
+        return high > 0 ? high / low : 1;
+    }
+
+    /**
+     * Fixes the y axis of a chart to [low, high], so that panels of one set share a scale and
+     * can be compared by eye.
+     */
+    public static void fixRange(JFreeChart chart, double low, double high) {
+        if (!(low < high)) {
+            throw new IllegalArgumentException("axis range [" + low + ", " + high + "] needs low < high");
+        }
+        chart.getXYPlot().getRangeAxis().setRange(low, high);
+    }
+
+    /**
      * A chart with an integer x axis (for example the estimation window length): ticks fall on
      * whole numbers only.
      *
@@ -83,7 +134,7 @@ public final class LineCharts {
         return y;
     }
 
-    private static JFreeChart build(String title, ValueAxis x, NumberAxis y, List<ChartLine> lines,
+    private static JFreeChart build(String title, ValueAxis x, ValueAxis y, List<ChartLine> lines,
                                     LineOptions options) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, options.markers());

@@ -20,6 +20,7 @@ import dev.sigmawalk.reports.sweep.SweepCheck;
 import dev.sigmawalk.reports.sweep.SweepReader;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -57,8 +58,14 @@ public final class CheckCommand implements Callable<Integer> {
         printData(out, study, data);
         printTimeline(out, study, data);
         printStrategies(out, study);
+        RunPreview preview = RunPreview.of(study, data);
+        if (!preview.feasibility().isEmpty()) {
+            printList(out, "Bounds on the eligible assets at every rebalance", preview.feasibility());
+        }
         printList(out, "Defaults (applied where the study is silent)", StudyDefaults.describe());
-        printList(out, "Warnings", data.warnings().isEmpty() ? List.of("none") : data.warnings());
+        List<String> warnings = new ArrayList<>(data.warnings());
+        warnings.addAll(preview.warnings());
+        printList(out, "Warnings", warnings.isEmpty() ? List.of("none") : warnings);
         out.println("Study is valid: " + study.file().getFileName());
         out.flush();
         return 0;

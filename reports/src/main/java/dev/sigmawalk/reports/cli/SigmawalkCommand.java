@@ -32,6 +32,8 @@ public final class SigmawalkCommand implements Runnable {
     /** Builds the configured command line (used by {@link #main} and by tests). */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new SigmawalkCommand());
+        cl.addSubcommand("help", new CommandLine.HelpCommand());
+        CommandHelp.addToEverySubcommand(cl);
         cl.setExitCodeExceptionMapper(SigmawalkCommand::exitCodeFor);
         cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> {
             PrintWriter err = cmd.getErr();

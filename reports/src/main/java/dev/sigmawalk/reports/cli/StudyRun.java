@@ -3,6 +3,7 @@ package dev.sigmawalk.reports.cli;
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
@@ -86,6 +87,7 @@ public final class StudyRun {
     public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
                                     Instant started, long begin) {
         List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
                 study.walkForward().windows(), study.walkForward().costBps(),
@@ -94,7 +96,7 @@ public final class StudyRun {
         List<Summary> summaries = summaries(run);
         List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
                 study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
-        List<String> warnings = warnings(data, run);
+        List<String> warnings = warnings(data, preview, run);
         ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
         ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
         ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
@@ -125,9 +127,15 @@ public final class StudyRun {
         return out;
     }
 
-    /** Data warnings, then one line per path whose allocation failed at some rebalance. */
-    private static List<String> warnings(StudyData data, RunResult<?> run) {
+    /**
+     * Data warnings, what the preview found (the same lines {@code check} prints), what the
+     * residual diagnostics left out, then one line per path whose allocation failed at some
+     * rebalance.
+     */
+    private static List<String> warnings(StudyData data, RunPreview preview, RunResult<WindowEvidence> run) {
         List<String> out = new ArrayList<>(data.warnings());
+        out.addAll(preview.warnings());
+        out.addAll(EvidenceNotes.warnings(run.probes()));
         for (PathResult p : run.paths()) {
             List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
             if (!failed.isEmpty()) {

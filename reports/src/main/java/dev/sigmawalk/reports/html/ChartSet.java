@@ -20,9 +20,10 @@ import java.util.function.ToDoubleFunction;
 import org.jfree.chart.JFreeChart;
 
 /**
- * The charts of the report. Time-series charts show the strategies of one window (the focus
- * window, chosen by the caller) beside the market; the growth chart is also drawn once per other
- * window; the shrinkage and window-length charts cover every window.
+ * The charts of the report. Time-series charts show the strategies of one window beside the
+ * market, split into one panel per model family when more than four lines would overlap; the
+ * shrinkage and window-length charts cover every window. PNG copies are named by chart, window
+ * and strategy or family, for example {@code forecast-w60-index-model.png}.
  */
 final class ChartSet {
     /** Up to this many points a rebalance series is drawn with a dot at each rebalance. */
@@ -33,9 +34,11 @@ final class ChartSet {
     private final FigureMaker maker;
     private final int p;
     private final int span;
+    private final FileNames names;
 
     ChartSet(ReportData data, StyleBook styles, FigureMaker maker) {
         this.data = data;
+        this.names = FileNames.of(strategies());
         this.styles = styles;
         this.maker = maker;
         this.p = data.run().periodsPerYear();
@@ -46,63 +49,66 @@ final class ChartSet {
         return span;
     }
 
-    Figure growth(int window) {
+    /** Growth of 1 on a log scale, split by family when more than four lines would overlap. */
+    List<Figure> growth(int window) {
         List<ChartLine> lines = new ArrayList<>();
         for (PathResult path : data.paths(window)) {
             lines.add(line(path.strategy(), rowX(), Growth.ofOne(path.net())));
         }
-        lines.add(line(Families.MARKET, rowX(), Growth.ofOne(data.run().market())));
-        JFreeChart c = LineCharts.overTime("Growth of 1 invested, net of costs (" + window + "-period window)",
-                "Value of 1 invested", LineCharts.plainAxis(), lines, LineOptions.PLAIN);
-        return maker.make("growth-w" + window, c, "Each line starts at 1 just before the first out-of-sample period "
-                + "and compounds net returns; the grey dash-dot line is the market.", FigureMaker.WIDE);
+        ChartLine market = line(Families.MARKET, rowX(), Growth.ofOne(data.run().market()));
+        return panels("growth-w" + window, "Growth of 1 invested, net of costs (" + window + "-period window)",
+                lines, Optional.of(market), false, true, (title, panel) -> LineCharts.overTimeLog(title,
+                        "Value of 1 invested (log scale)", panel),
+                "Each line starts at 1 just before the first out-of-sample period and compounds net returns; "
+                        + "the scale is logarithmic, so each grid line up is a doubling and equal slopes are equal "
+                        + "rates of growth. The grey dash-dot line is the market.");
     }
 
-    Figure drawdown(int window) {
+    List<Figure> drawdown(int window) {
         List<ChartLine> lines = new ArrayList<>();
         for (PathResult path : data.paths(window)) {
             lines.add(line(path.strategy(), rowX(), negated(SeriesStats.drawdowns(path.net()))));
         }
-        lines.add(line(Families.MARKET, rowX(), negated(SeriesStats.drawdowns(data.run().market()))));
-        JFreeChart c = LineCharts.overTime("Drawdown (" + window + "-period window)",
-                "Below the previous peak (%)", LineCharts.percentAxis(), lines, new LineOptions(false, true));
-        return maker.make("drawdown-w" + window, c, "How far wealth stood below its previous high at each date; "
-                + "0 % means at a new high.", FigureMaker.WIDE);
+        ChartLine market = line(Families.MARKET, rowX(), negated(SeriesStats.drawdowns(data.run().market())));
+        return panels("drawdown-w" + window, "Drawdown (" + window + "-period window)", lines, Optional.of(market),
+                true, false, (title, panel) -> LineCharts.overTime(title, "Below the previous peak (%)",
+                        LineCharts.percentAxis(), panel, new LineOptions(false, true)),
+                "How far wealth stood below its previous high at each date; 0 % means at a new high.");
     }
 
-    Figure rollingVolatility(int window) {
+    List<Figure> rollingVolatility(int window) {
         List<ChartLine> lines = new ArrayList<>();
         for (PathResult path : data.paths(window)) {
             lines.add(line(path.strategy(), rowX(), RollingVolatility.annualised(path.net(), span, p)));
         }
-        lines.add(line(Families.MARKET, rowX(), RollingVolatility.annualised(data.run().market(), span, p)));
-        JFreeChart c = LineCharts.overTime("Realised volatility over the last " + span + " periods ("
-                + window + "-period window)", "Annualised volatility (% a year)", LineCharts.percentAxis(), lines,
-                new LineOptions(false, true));
-        return maker.make("rolling-volatility-w" + window, c, "Standard deviation of net returns over a trailing "
-                + span + "-period span, annualised; the line starts once a full span is available.", FigureMaker.WIDE);
+        ChartLine market = line(Families.MARKET, rowX(), RollingVolatility.annualised(data.run().market(), span, p));
+        return panels("rolling-volatility-w" + window, "Volatility over the last " + span + " periods ("
+                + window + "-period window)", lines, Optional.of(market), true, false,
+                (title, panel) -> LineCharts.overTime(title, "Annualised volatility (% a year)",
+                        LineCharts.percentAxis(), panel, new LineOptions(false, true)),
+                "Standard deviation of net returns over a trailing " + span + "-period span, annualised; the line "
+                        + "starts once a full span is available.");
     }
 
-    Figure turnover(int window) {
+    List<Figure> turnover(int window) {
         List<ChartLine> lines = new ArrayList<>();
         for (PathResult path : data.paths(window)) {
             List<RebalanceRecord> later = path.rebalances().subList(Math.min(1, path.rebalances().size()),
                     path.rebalances().size());
             lines.add(line(path.strategy(), dateX(later), values(later, RebalanceRecord::turnover)));
         }
-        JFreeChart c = LineCharts.overTime("Turnover at each rebalance (" + window + "-period window)",
-                "Bought plus sold (% of portfolio)", LineCharts.percentAxis(), lines,
-                new LineOptions(markers(window), true));
-        return maker.make("turnover-w" + window, c, "Share of the portfolio traded at each rebalance; the first "
-                + "purchase from cash is left out.", FigureMaker.WIDE);
+        boolean markers = markers(window);
+        return panels("turnover-w" + window, "Turnover at each rebalance (" + window + "-period window)", lines,
+                Optional.empty(), true, false, (title, panel) -> LineCharts.overTime(title,
+                        "Bought plus sold (% of portfolio)", LineCharts.percentAxis(), panel,
+                        new LineOptions(markers, true)),
+                "Share of the portfolio traded at each rebalance; the first purchase from cash is left out.");
     }
 
     /** Forecast against realised volatility, one small chart per strategy of the window. */
     List<Figure> forecasts(int window) {
         List<Figure> out = new ArrayList<>();
-        List<PathResult> paths = data.paths(window);
-        for (int k = 0; k < paths.size(); k++) {
-            PathResult path = paths.get(k);
+        for (PathResult path : data.paths(window)) {
             double[] forecast = path.forecastVolatility();
             double[] annual = new double[forecast.length];
             for (int t = 0; t < forecast.length; t++) {
@@ -114,14 +120,41 @@ final class ChartSet {
                     new ChartLine(path.strategy() + ": forecast", styles.companion(path.strategy()), rowX(), annual));
             JFreeChart c = LineCharts.overTime(path.strategy() + " (" + window + "-period window)",
                     "Volatility (% a year)", LineCharts.percentAxis(), lines, new LineOptions(false, true));
-            out.add(maker.make("forecast-w" + window + "-s" + (k + 1), c, "Solid: realised volatility of gross returns "
-                    + "over the last " + span + " periods. Dashed: the volatility forecast when the portfolio "
-                    + "held on that date was formed. Both annualised.", FigureMaker.SMALL));
+            out.add(maker.make("forecast-w" + window + "-" + names.of(path.strategy()), c, "Thick line, in the "
+                    + "strategy's own colour and pattern: realised volatility of gross returns over the last " + span
+                    + " periods. Thin short dashes: the volatility forecast when the portfolio held on that date was "
+                    + "formed. Both annualised.", FigureMaker.SMALL));
         }
         return out;
     }
 
-    Figure effectiveHoldings(int window) {
+    /** Builds one chart of a panel: its title and its lines. */
+    private interface PanelChart {
+        JFreeChart draw(String title, List<ChartLine> lines);
+    }
+
+    /**
+     * One figure, or one per model family when more than four lines would overlap; the panels of
+     * a set share their y axis.
+     */
+    private List<Figure> panels(String id, String title, List<ChartLine> lines, Optional<ChartLine> reference,
+                                boolean includeZero, boolean log, PanelChart draw, String caption) {
+        List<FamilyPanels.Panel> panels = FamilyPanels.of(lines, reference, styles);
+        Optional<FamilyPanels.Range> range = panels.size() > 1 ? FamilyPanels.range(panels, includeZero, log)
+                : Optional.empty();
+        List<Figure> out = new ArrayList<>();
+        for (FamilyPanels.Panel panel : panels) {
+            JFreeChart c = draw.draw(title + panel.titleSuffix(), panel.lines());
+            range.ifPresent(r -> LineCharts.fixRange(c, r.low(), r.high()));
+            String note = panels.size() > 1 ? " One panel per model family, all on the same scale"
+                    + (reference.isPresent() ? ", each with the market for reference." : ".") : "";
+            out.add(maker.make(id + panel.idSuffix(), c, caption + note,
+                    panels.size() > 1 ? FigureMaker.SMALL : FigureMaker.WIDE));
+        }
+        return out;
+    }
+
+    List<Figure> effectiveHoldings(int window) {
         return concentration(window, "effective-holdings-w", "Effective number of holdings (" + window
                         + "-period window)", "1 / sum of squared weights", LineCharts.plainAxis(),
                 r -> hasHoldings(r) ? Concentration.effectiveHoldings(r.weights()) : Double.NaN,
@@ -129,7 +162,7 @@ final class ChartSet {
                         + "higher means more spread out.");
     }
 
-    Figure largestWeight(int window) {
+    List<Figure> largestWeight(int window) {
         return concentration(window, "largest-weight-w", "Largest single weight (" + window + "-period window)",
                 "Largest weight (% of portfolio)", LineCharts.percentAxis(),
                 r -> hasHoldings(r) ? Concentration.largestWeight(r.weights()) : Double.NaN,
@@ -158,7 +191,13 @@ final class ChartSet {
                 + "it by the target. One line per window, told apart by dash pattern.", FigureMaker.WIDE));
     }
 
-    Figure byWindow(String id, String title, String yLabel, boolean percent, ToDoubleFunction<Summary> measure) {
+    /**
+     * One point per window length and strategy.
+     *
+     * @param withMarket draw the market flat across the windows (for measures the market has)
+     */
+    Figure byWindow(String id, String title, String yLabel, boolean percent, ToDoubleFunction<Summary> measure,
+                    boolean withMarket) {
         List<Integer> windows = data.windows();
         double[] x = new double[windows.size()];
         for (int k = 0; k < x.length; k++) {
@@ -172,25 +211,28 @@ final class ChartSet {
             }
             lines.add(line(strategy, x, y));
         }
-        double market = measure.applyAsDouble(data.market());
-        double[] flat = new double[x.length];
-        java.util.Arrays.fill(flat, market);
-        lines.add(line(Families.MARKET, x, flat));
+        if (withMarket) {
+            double[] flat = new double[x.length];
+            java.util.Arrays.fill(flat, measure.applyAsDouble(data.market()));
+            lines.add(line(Families.MARKET, x, flat));
+        }
         JFreeChart c = LineCharts.overNumber(title, "Estimation window (periods)", LineCharts.plainAxis(), yLabel,
                 percent ? LineCharts.percentAxis() : LineCharts.plainAxis(), lines, new LineOptions(true, false));
-        return maker.make(id, c, "One point per window length and strategy, over the same out-of-sample period; "
-                + "the market does not depend on the window and is drawn flat.", FigureMaker.WIDE);
+        return maker.make(id, c, "One point per window length and strategy, over the same out-of-sample period"
+                + (withMarket ? "; the market does not depend on the window and is drawn flat." : "."),
+                FigureMaker.WIDE);
     }
 
-    private Figure concentration(int window, String idStem, String title, String yLabel,
-                                 java.text.NumberFormat format, ToDoubleFunction<RebalanceRecord> measure,
-                                 String caption) {
+    private List<Figure> concentration(int window, String idStem, String title, String yLabel,
+                                       java.text.NumberFormat format, ToDoubleFunction<RebalanceRecord> measure,
+                                       String caption) {
         List<ChartLine> lines = new ArrayList<>();
         for (PathResult path : data.paths(window)) {
             lines.add(line(path.strategy(), dateX(path.rebalances()), values(path.rebalances(), measure)));
         }
-        JFreeChart c = LineCharts.overTime(title, yLabel, format, lines, new LineOptions(markers(window), true));
-        return maker.make(idStem + window, c, caption, FigureMaker.WIDE);
+        boolean markers = markers(window);
+        return panels(idStem + window, title, lines, Optional.empty(), true, false,
+                (t, panel) -> LineCharts.overTime(t, yLabel, format, panel, new LineOptions(markers, true)), caption);
     }
 
     /** Strategy names in run order, each once. */

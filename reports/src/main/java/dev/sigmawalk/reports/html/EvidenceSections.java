@@ -120,7 +120,7 @@ final class EvidenceSections {
     Optional<ReportView.EvidenceBlock> differences() {
         List<Comparison> comparisons = data.evidence().comparisons();
         if (comparisons.isEmpty()) {
-            return Optional.empty();
+            return Optional.of(Untested.block(data));
         }
         double rootP = Math.sqrt(data.run().periodsPerYear());
         List<ReportView.TextRow> rows = new ArrayList<>();

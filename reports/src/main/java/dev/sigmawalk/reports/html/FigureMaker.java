@@ -14,10 +14,13 @@ import org.jfree.chart.JFreeChart;
  * files it wrote so the report can list them.
  */
 final class FigureMaker {
-    /** Size of full-width charts, pixels. */
-    static final ChartRenderer WIDE = new ChartRenderer(900, 440);
-    /** Size of small-multiple charts, pixels. */
-    static final ChartRenderer SMALL = new ChartRenderer(600, 360);
+    /**
+     * Size of a chart, pixels. Charts sit side by side in a grid on a wide screen and one under
+     * another on a phone, so one size of about half a desktop column keeps text legible on both.
+     */
+    static final ChartRenderer WIDE = new ChartRenderer(480, 340);
+    /** Size of a small multiple (one panel of a set), pixels. */
+    static final ChartRenderer SMALL = new ChartRenderer(480, 300);
 
     private final Path chartsDir;
     private final String chartsFolderName;

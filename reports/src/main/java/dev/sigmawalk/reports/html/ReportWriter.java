@@ -68,9 +68,13 @@ public final class ReportWriter {
         ChartSet charts = new ChartSet(data, styles, maker);
         int focus = findings.lowestVolatility().window();
 
-        ReportView.Headline headline = new ReportView.Headline(findings.headline(),
-                List.of(charts.growth(focus), charts.drawdown(focus), charts.rollingVolatility(focus)));
-        ReportView.Cost cost = new ReportView.Cost(findings.cost(), rows.cost(), List.of(charts.turnover(focus)));
+        ReportView.Headline headline = new ReportView.Headline(findings.headline(), new AnswerMatrix(data, styles).both(),
+                Untested.of(data), charts.growth(focus));
+        List<Figure> costFigures = new ArrayList<>();
+        costFigures.add(charts.byWindow("window-turnover", "Turnover by window length", "Turnover (% per rebalance)",
+                true, s -> s.meanTurnover().orElse(Double.NaN), false));
+        costFigures.addAll(charts.turnover(focus));
+        ReportView.Cost cost = new ReportView.Cost(findings.cost(), rows.cost(), costFigures);
         List<ReportView.TextRow> years = rows.years(focus);
         List<ReportView.YearTable> yearTable = years.isEmpty() ? List.of()
                 : List.of(new ReportView.YearTable("Year by year, " + focus + "-period window: realised volatility "
@@ -78,32 +82,58 @@ public final class ReportWriter {
                         rows.yearHeaders(focus), years));
         ReportView.Honesty honesty = new ReportView.Honesty(findings.honesty(), rows.honesty(), yearTable,
                 charts.forecasts(focus));
+        List<Figure> concentrationFigures = new ArrayList<>(charts.effectiveHoldings(focus));
+        concentrationFigures.addAll(charts.largestWeight(focus));
         ReportView.Concentration concentration = new ReportView.Concentration(findings.concentration(),
-                rows.concentration(), List.of(charts.effectiveHoldings(focus), charts.largestWeight(focus)));
+                rows.concentration(), concentrationFigures);
         List<ReportView.Shrinkage> shrinkage = new ArrayList<>();
         findings.shrinkage().ifPresent(answer -> shrinkage.add(new ReportView.Shrinkage(answer, rows.shrinkage(),
                 charts.shrinkage().stream().toList())));
         List<Figure> windowFigures = new ArrayList<>();
         windowFigures.add(charts.byWindow("window-volatility", "Realised volatility by window length",
-                "Annualised volatility (% a year)", true, Summary::volatility));
+                "Annualised volatility (% a year)", true, Summary::volatility, true));
         windowFigures.add(charts.byWindow("window-sharpe", "Sharpe ratio by window length", "Sharpe ratio (annualised)",
-                false, Summary::sharpe));
-        for (int w : data.windows()) {
-            if (w != focus) {
-                windowFigures.add(charts.growth(w));
-            }
-        }
+                false, Summary::sharpe, true));
         ReportView.Windows windows = new ReportView.Windows(findings.windows(), windowFigures);
         return new ReportView(data.study().title(), subtitle(data, focus, charts.rollingSpan()), palette(),
-                legend(data, styles),
-                headline, HeadlineTable.of(data, styles), cost, honesty, concentration, shrinkage, windows,
+                legend(data, styles), headline, StudySetup.of(data), HeadlineTable.of(data, styles), cost, honesty,
+                concentration, shrinkage, windows, overTime(data, charts, focus),
                 new EvidenceSections(data, maker).all(), RunFacts.of(data));
     }
 
+    /**
+     * Every window's charts over time, each in a folded section. The headline window's section is
+     * open and holds what the topical sections do not already show (drawdown, trailing volatility);
+     * every other window gets all of its charts.
+     */
+    private static List<ReportView.WindowCharts> overTime(ReportData data, ChartSet charts, int focus) {
+        List<ReportView.WindowCharts> out = new ArrayList<>();
+        for (int w : data.windows()) {
+            List<Figure> figures = new ArrayList<>();
+            if (w != focus) {
+                figures.addAll(charts.growth(w));
+            }
+            figures.addAll(charts.drawdown(w));
+            figures.addAll(charts.rollingVolatility(w));
+            if (w != focus) {
+                figures.addAll(charts.turnover(w));
+                figures.addAll(charts.forecasts(w));
+                figures.addAll(charts.effectiveHoldings(w));
+                figures.addAll(charts.largestWeight(w));
+            }
+            String heading = Words.periods(w) + " window" + (w == focus
+                    ? ": drawdown and trailing volatility (growth, turnover, forecasts and concentration of this "
+                    + "window are in their sections)"
+                    : ": growth, drawdown, volatility, turnover, forecasts and concentration");
+            out.add(new ReportView.WindowCharts(w, heading, w == focus, figures));
+        }
+        return out;
+    }
+
     private static String subtitle(ReportData data, int focus, int span) {
-        return "Out-of-sample period " + RunFacts.period(data.run()) + ". Charts over time show the " + focus
-                + "-period window, where the lowest realised volatility was found; trailing volatility uses "
-                + span + " periods.";
+        return "Out-of-sample period " + RunFacts.period(data.run()) + ". The sections' charts over time show the "
+                + focus + "-period window, where the lowest realised volatility was found; every window's charts are "
+                + "under \"Over time, window by window\". Trailing volatility uses " + span + " periods.";
     }
 
     private static List<ReportView.Swatch> palette() {

@@ -54,12 +54,12 @@ class ChartRendererTest {
     }
 
     @Test
-    void png_hasRequestedSize_andIsNotBlank(@TempDir Path dir) throws Exception {
+    void png_isTwiceTheRequestedSize_andIsNotBlank(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("chart.png");
         new ChartRenderer(640, 320).png(chart(), file);
         BufferedImage img = ImageIO.read(file.toFile());
-        assertEquals(640, img.getWidth());
-        assertEquals(320, img.getHeight());
+        assertEquals(1280, img.getWidth());
+        assertEquals(640, img.getHeight());
         Set<Integer> colours = new HashSet<>();
         for (int y = 0; y < img.getHeight(); y += 3) {
             for (int x = 0; x < img.getWidth(); x += 3) {

@@ -84,11 +84,14 @@ class EvidenceSectionsTest {
     }
 
     @Test
-    void noEvidence_leavesTheSectionsOut(@TempDir Path dir) throws Exception {
+    void noEvidence_leavesTheDiagnosticSectionsOut_butSaysTheTestsWereNotRun(@TempDir Path dir) throws Exception {
         Document doc = render(ReportFixture.data(), dir);
         assertNull(doc.getElementById("single-index-check"));
-        assertNull(doc.getElementById("differences"));
         assertNull(doc.getElementById("input-list"));
+        Element differences = doc.getElementById("differences");
+        assertNotNull(differences, "the significance section never disappears silently");
+        assertEquals("The significance tests were not run for this report.", differences.selectFirst("p.answer").text());
+        assertFalse(doc.select("nav a[href=#differences]").isEmpty(), "and it keeps its contents entry");
     }
 
     @Test

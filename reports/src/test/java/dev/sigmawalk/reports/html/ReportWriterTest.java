@@ -73,9 +73,10 @@ class ReportWriterTest {
     void chartsShown_areTheChartsWrittenAsPng() {
         Elements figures = doc.select("figure");
         assertEquals(pngs.size(), figures.size());
-        // growth, drawdown, rolling volatility, turnover, 3 forecasts, 2 concentration, shrinkage,
-        // 2 window charts and the growth chart of the other window
-        assertEquals(13, figures.size());
+        // Headline growth; turnover by window and over time; 3 forecasts; 2 concentration; shrinkage;
+        // 2 window charts; the headline window's drawdown and trailing volatility; and the other
+        // window's 9 charts over time (growth, drawdown, volatility, turnover, 3 forecasts, 2 concentration).
+        assertEquals(22, figures.size());
         for (Path p : pngs) {
             assertTrue(Files.isRegularFile(p), p.toString());
         }
@@ -225,8 +226,8 @@ class ReportWriterTest {
     @Test
     void pngCharts_haveTheirPixelSize_andAreNotBlank() throws Exception {
         BufferedImage img = ImageIO.read(pngs.get(0).toFile());
-        assertEquals(900, img.getWidth());
-        assertEquals(440, img.getHeight());
+        assertEquals(2 * 480, img.getWidth(), "PNG copies are drawn at twice the chart's size");
+        assertEquals(2 * 340, img.getHeight());
         Set<Integer> colours = new HashSet<>();
         for (int y = 0; y < img.getHeight(); y += 4) {
             for (int x = 0; x < img.getWidth(); x += 4) {
