@@ -13,17 +13,15 @@ import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
  * Writes {@code sweep.html}: one self-contained page (inline CSS, no script, no web address) in
- * the report's look, whose stylesheet it takes from the report's template so the two never
- * drift apart. Output depends only on its inputs.
+ * the report's look, whose stylesheet it takes from the report's own stylesheet template so the
+ * two never drift apart. Output depends only on its inputs.
  */
 final class SweepPage {
-    private static final String REPORT_TEMPLATE = "/dev/sigmawalk/reports/html/report.mustache";
-    private static final Pattern STYLE = Pattern.compile("<style>(.*?)</style>", Pattern.DOTALL);
+    private static final String REPORT_STYLE = "/dev/sigmawalk/reports/html/report-style.mustache";
     /** Template sections (the report's per-strategy colours) and tags have no meaning outside the report. */
     private static final Pattern SECTION = Pattern.compile("\\{\\{#(\\w+)}}.*?\\{\\{/\\1}}\\n?", Pattern.DOTALL);
     private static final Pattern TAG = Pattern.compile("\\{\\{[^}]*}}");
@@ -129,19 +127,16 @@ final class SweepPage {
         return new SweepView.Cell(text, colour.toString(), t > DARK_INK_LIMIT ? "#ffffff" : "#1f2328", v == best);
     }
 
-    /** The report's stylesheet without its template tags. */
+    /** The report's stylesheet (its template partial) without its template tags. */
     static String style() {
-        try (InputStream in = SweepPage.class.getResourceAsStream(REPORT_TEMPLATE)) {
+        try (InputStream in = SweepPage.class.getResourceAsStream(REPORT_STYLE)) {
             if (in == null) {
-                throw new IllegalStateException("the report template " + REPORT_TEMPLATE + " is missing");
+                throw new IllegalStateException("the report's stylesheet " + REPORT_STYLE + " is missing");
             }
-            Matcher m = STYLE.matcher(new String(in.readAllBytes(), StandardCharsets.UTF_8));
-            if (!m.find()) {
-                throw new IllegalStateException("the report template has no <style> block to share");
-            }
-            return TAG.matcher(SECTION.matcher(m.group(1)).replaceAll("")).replaceAll("").strip();
+            String css = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            return TAG.matcher(SECTION.matcher(css).replaceAll("")).replaceAll("").strip();
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read the report template", e);
+            throw new UncheckedIOException("cannot read the report's stylesheet", e);
         }
     }
 }

@@ -89,6 +89,7 @@ class SweepCommandTest {
         }
         assertFalse(html.contains("http://") || html.contains("https://") || html.contains("<script"), "offline page");
         assertFalse(html.contains("{{"), "no template tag left");
+        assertTrue(html.contains("border-collapse") && html.contains("td.best"), "the report's stylesheet is inlined");
         assertTrue(html.contains("corrected for all"), "family-corrected p-value stated");
         assertTrue(Files.isRegularFile(out.resolve("manifest.json")));
     }
