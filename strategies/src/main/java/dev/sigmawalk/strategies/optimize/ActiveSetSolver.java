@@ -28,7 +28,8 @@ import java.util.Objects;
  * <p>The final partition is polished (the free weights re-solved from a fresh factor) and the
  * KKT conditions are verified by {@link KktCheck} to {@link SolverSettings#kktTolerance()};
  * anything else is reported as Failed, never returned as weights. Bounds whose sum cannot reach 1
- * give {@link SolveOutcome.Infeasible}. Stateless and thread-safe.
+ * give {@link SolveOutcome.Infeasible}. Given a warm start, {@link PrimalDualActiveSet} is tried
+ * first and this loop is its fallback. Stateless and thread-safe.
  */
 public final class ActiveSetSolver {
     /** Absolute slack on Σ lower ≤ 1 ≤ Σ upper, as in the study's bounds check. */
@@ -46,7 +47,9 @@ public final class ActiveSetSolver {
     }
 
     /**
-     * Solves, starting from a previous partition when one is given.
+     * Solves, starting from a previous partition when one is given: the primal-dual active-set
+     * method ({@link PrimalDualActiveSet}) from that partition first, changing many bounds per
+     * step; when it cannot certify an optimum, the primal loop from the same guess.
      *
      * @param warm a previous solve's {@link SolveOutcome.Optimal#sides()} for the same weights, or
      *             {@code null}; a guess that does not fit is ignored, so the answer never depends
@@ -54,6 +57,25 @@ public final class ActiveSetSolver {
      */
     public SolveOutcome solve(QuadraticProblem problem, BoundSide[] warm) {
         Objects.requireNonNull(problem, "problem");
+        SolveOutcome infeasible = checkBudgetReachable(problem);
+        if (infeasible != null) {
+            return infeasible;
+        }
+        if (warm != null) {
+            SolveOutcome.Optimal fast = new PrimalDualActiveSet(new WorkingSet(problem), settings).run(warm);
+            if (fast != null) {
+                return fast;
+            }
+        }
+        return solvePrimal(problem, warm);
+    }
+
+    /**
+     * The one-change-at-a-time primal loop alone, from the guess when one is given: the fallback
+     * of {@link #solve(QuadraticProblem, BoundSide[])}, and the reference its faster path is
+     * tested against.
+     */
+    SolveOutcome solvePrimal(QuadraticProblem problem, BoundSide[] warm) {
         SolveOutcome infeasible = checkBudgetReachable(problem);
         if (infeasible != null) {
             return infeasible;

@@ -10,15 +10,36 @@ package dev.sigmawalk.strategies.optimize;
  * Factoring a k×k block by k appends is the ordinary row-oriented Cholesky, k³/3 flops.
  */
 final class CholeskyFactor {
-    private final int capacity;
-    private final double[] l;
-    private final double[] scratch;
+    /** Room for this many rows at first; most free blocks are far smaller than n. */
+    private static final int INITIAL_CAPACITY = 64;
+
+    private final int limit;
+    private int capacity;
+    private double[] l;
+    private double[] scratch;
     private int size;
 
-    CholeskyFactor(int capacity) {
-        this.capacity = capacity;
+    /**
+     * @param limit the largest block this factor will hold; storage grows toward it as rows are
+     *              appended (k² for k rows, not limit²)
+     */
+    CholeskyFactor(int limit) {
+        this.limit = limit;
+        this.capacity = Math.min(limit, INITIAL_CAPACITY);
         this.l = new double[capacity * capacity];
         this.scratch = new double[capacity];
+    }
+
+    /** Doubles the row stride (up to the limit), keeping the rows held so far. */
+    private void grow() {
+        int wider = Math.min(limit, Math.max(1, 2 * capacity));
+        double[] moved = new double[wider * wider];
+        for (int r = 0; r < size; r++) {
+            System.arraycopy(l, r * capacity, moved, r * wider, r + 1);
+        }
+        l = moved;
+        scratch = new double[wider];
+        capacity = wider;
     }
 
     int size() {
@@ -41,6 +62,9 @@ final class CholeskyFactor {
      */
     boolean append(double[] column, double diagonal, double singularPivot) {
         int k = size;
+        if (k == capacity) {
+            grow();
+        }
         int row = k * capacity;
         double sum = 0;
         for (int i = 0; i < k; i++) {

@@ -21,6 +21,8 @@ import java.util.Arrays;
 public record QuadraticProblem(int size, double[] quadratic, double[] linear, double[] lower, double[] upper) {
     /** Relative tolerance for asymmetry of Q, against the largest |Q_ij|. */
     private static final double SYMMETRY_TOLERANCE = 1e-12;
+    /** Side of the square tiles the symmetry check walks. */
+    private static final int SYMMETRY_TILE = 64;
 
     public QuadraticProblem {
         if (!(size >= 1)) {
@@ -83,13 +85,20 @@ public record QuadraticProblem(int size, double[] quadratic, double[] linear, do
             largest = Math.max(largest, Math.abs(v));
         }
         double allowed = SYMMETRY_TOLERANCE * largest;
-        for (int i = 0; i < n; i++) {
-            for (int j = i + 1; j < n; j++) {
-                double a = q[i * n + j];
-                double b = q[j * n + i];
-                if (!(Math.abs(a - b) <= allowed)) {
-                    throw new IllegalArgumentException("quadratic is not symmetric at (" + i + ", " + j + "): "
-                            + a + " vs " + b);
+        // Square tiles, so the column walk of the lower triangle stays in the cache.
+        for (int i0 = 0; i0 < n; i0 += SYMMETRY_TILE) {
+            int i1 = Math.min(n, i0 + SYMMETRY_TILE);
+            for (int j0 = i0; j0 < n; j0 += SYMMETRY_TILE) {
+                int j1 = Math.min(n, j0 + SYMMETRY_TILE);
+                for (int i = i0; i < i1; i++) {
+                    for (int j = Math.max(j0, i + 1); j < j1; j++) {
+                        double a = q[i * n + j];
+                        double b = q[j * n + i];
+                        if (!(Math.abs(a - b) <= allowed)) {
+                            throw new IllegalArgumentException("quadratic is not symmetric at (" + i + ", " + j
+                                    + "): " + a + " vs " + b);
+                        }
+                    }
                 }
             }
         }

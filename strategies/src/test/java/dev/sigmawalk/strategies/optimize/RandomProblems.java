@@ -12,6 +12,11 @@ public final class RandomProblems {
      * volatilities, positive definite for T &gt; n.
      */
     public static double[] covariance(Random random, int n, int periods) {
+        return sampleCovariance(returns(random, n, periods), periods, n);
+    }
+
+    /** T×n row-major returns with one common factor and a spread of volatilities. */
+    public static double[] returns(Random random, int n, int periods) {
         double[] x = new double[periods * n];
         double[] loading = new double[n];
         double[] vol = new double[n];
@@ -25,7 +30,7 @@ public final class RandomProblems {
                 x[t * n + i] = loading[i] * f + vol[i] * random.nextGaussian();
             }
         }
-        return sampleCovariance(x, periods, n);
+        return x;
     }
 
     /** 1/(T−1) Σ (x_t − x̄)(x_t − x̄)'. */
