@@ -19,10 +19,14 @@ import java.util.Optional;
  * @param holmSharpe Holm-adjusted bootstrap p-value of the Sharpe test across windows
  * @param holmVariance Holm-adjusted bootstrap p-value of the variance test across windows
  * @param skipped why a test could not be run (for example a series that does not vary)
+ * @param familySharpe the Sharpe test's p-value adjusted over the whole family of comparisons the
+ *        report chooses among (Romano-Wolf stepdown, Method §9); NaN where the test did not run
+ * @param familyVariance the same for the variance test
  */
 public record Comparison(String strategy, String baseline, int window, Optional<DifferenceTest> sharpe,
                          Optional<DifferenceTest> variance, Optional<JobsonKorkieTest> jobsonKorkie,
-                         double holmSharpe, double holmVariance, Optional<String> skipped) {
+                         double holmSharpe, double holmVariance, Optional<String> skipped, double familySharpe,
+                         double familyVariance) {
     public Comparison {
         Objects.requireNonNull(strategy, "strategy");
         Objects.requireNonNull(baseline, "baseline");
@@ -32,8 +36,21 @@ public record Comparison(String strategy, String baseline, int window, Optional<
         Objects.requireNonNull(skipped, "skipped");
     }
 
+    /** A comparison before the family correction (both family p-values NaN). */
+    public Comparison(String strategy, String baseline, int window, Optional<DifferenceTest> sharpe,
+                      Optional<DifferenceTest> variance, Optional<JobsonKorkieTest> jobsonKorkie, double holmSharpe,
+                      double holmVariance, Optional<String> skipped) {
+        this(strategy, baseline, window, sharpe, variance, jobsonKorkie, holmSharpe, holmVariance, skipped, Double.NaN,
+                Double.NaN);
+    }
+
     Comparison withHolm(double sharpeAdjusted, double varianceAdjusted) {
         return new Comparison(strategy, baseline, window, sharpe, variance, jobsonKorkie, sharpeAdjusted,
-                varianceAdjusted, skipped);
+                varianceAdjusted, skipped, familySharpe, familyVariance);
+    }
+
+    Comparison withFamily(double sharpeAdjusted, double varianceAdjusted) {
+        return new Comparison(strategy, baseline, window, sharpe, variance, jobsonKorkie, holmSharpe, holmVariance,
+                skipped, sharpeAdjusted, varianceAdjusted);
     }
 }

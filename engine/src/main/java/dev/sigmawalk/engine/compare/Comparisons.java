@@ -1,10 +1,13 @@
 package dev.sigmawalk.engine.compare;
 
+import dev.sigmawalk.engine.evidence.DifferenceMeasure;
 import dev.sigmawalk.engine.evidence.DifferenceTest;
 import dev.sigmawalk.engine.evidence.DifferenceTests;
+import dev.sigmawalk.engine.evidence.FamilyContrast;
 import dev.sigmawalk.engine.evidence.HolmAdjustment;
 import dev.sigmawalk.engine.evidence.JobsonKorkieMemmel;
 import dev.sigmawalk.engine.evidence.JobsonKorkieTest;
+import dev.sigmawalk.engine.evidence.RomanoWolfStepdown;
 import dev.sigmawalk.engine.measures.SeriesStats;
 import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.RunResult;
@@ -30,6 +33,15 @@ public final class Comparisons {
      */
     public static List<Comparison> of(RunResult<?> run, Map<String, String> baselines, List<Integer> windows,
                                       DifferenceTests tests) {
+        return of(run, baselines, windows, tests, List.of());
+    }
+
+    /**
+     * @param scanned pairs the report picks from the data, each compared at its one window and
+     *        added to the family unless a baseline comparison already covers it (in either order)
+     */
+    public static List<Comparison> of(RunResult<?> run, Map<String, String> baselines, List<Integer> windows,
+                                      DifferenceTests tests, List<ScannedPair> scanned) {
         List<Comparison> out = new ArrayList<>();
         for (Map.Entry<String, String> e : baselines.entrySet()) {
             List<Comparison> pair = new ArrayList<>();
@@ -37,6 +49,33 @@ public final class Comparisons {
                 pair.add(compare(run, e.getKey(), e.getValue(), w, tests));
             }
             out.addAll(withHolm(pair));
+        }
+        for (ScannedPair s : scanned) {
+            boolean covered = out.stream().anyMatch(c -> s.sameAs(c.strategy(), c.baseline(), c.window()));
+            if (!covered) {
+                out.addAll(withHolm(List.of(compare(run, s.strategy(), s.other(), s.window(), tests))));
+            }
+        }
+        return withFamily(run, out, tests);
+    }
+
+    /** The Romano-Wolf p-values of every Sharpe and variance test that ran, over them all at once. */
+    private static List<Comparison> withFamily(RunResult<?> run, List<Comparison> all, DifferenceTests tests) {
+        List<FamilyContrast> family = new ArrayList<>();
+        for (Comparison c : all) {
+            double[] netA = run.path(c.strategy(), c.window()).net();
+            double[] netB = run.path(c.baseline(), c.window()).net();
+            c.sharpe().ifPresent(t -> family.add(new FamilyContrast(DifferenceMeasure.SHARPE_RATIO,
+                    SeriesStats.minus(netA, run.riskFree()), SeriesStats.minus(netB, run.riskFree()), t)));
+            c.variance().ifPresent(t -> family.add(new FamilyContrast(DifferenceMeasure.VARIANCE, netA, netB, t)));
+        }
+        double[] adjusted = RomanoWolfStepdown.adjust(family, tests.evidence().resamples(), tests.evidence().seed());
+        List<Comparison> out = new ArrayList<>(all.size());
+        int k = 0;
+        for (Comparison c : all) {
+            double sharpe = c.sharpe().isPresent() ? adjusted[k++] : Double.NaN;
+            double variance = c.variance().isPresent() ? adjusted[k++] : Double.NaN;
+            out.add(c.withFamily(sharpe, variance));
         }
         return out;
     }

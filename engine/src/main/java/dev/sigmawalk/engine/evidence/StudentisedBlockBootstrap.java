@@ -69,16 +69,21 @@ final class StudentisedBlockBootstrap {
                     rb[j * blockLength + k] = b[source];
                 }
             }
-            if (studentised(ra, rb, blocks, difference) >= observed) {
+            if (studentised(measure, ra, rb, blockLength, difference) >= observed) {
                 atLeast++;
             }
         }
         return (atLeast + 1.0) / (resamples + 1.0);
     }
 
-    /** d* of one resample; +∞ where the resample is degenerate. */
-    private double studentised(double[] ra, double[] rb, int blocks, double difference) {
+    /**
+     * d* = |Δ* - Δ̂| / s* of one resample of ⌊T/b⌋ whole blocks of length b (the resample's length
+     * is a multiple of b); +∞ where the resample is degenerate.
+     */
+    static double studentised(DifferenceMeasure measure, double[] ra, double[] rb, int blockLength,
+                              double difference) {
         int drawn = ra.length;
+        int blocks = drawn / blockLength;
         PairMoments v = PairMoments.of(ra, rb, drawn);
         if (v.degenerate()) {
             return Double.POSITIVE_INFINITY;

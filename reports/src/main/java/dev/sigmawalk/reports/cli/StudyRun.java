@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.Comparisons;
 import dev.sigmawalk.engine.compare.EvidenceNotes;
+import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
@@ -95,14 +96,15 @@ public final class StudyRun {
         long walked = System.nanoTime();
         List<Summary> summaries = summaries(run);
         List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
-                study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()));
+                study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()),
+                ScannedPair.lowestVolatility(run));
         List<String> warnings = warnings(data, preview, run);
         ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
         ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
         ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
         ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
         EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
-        EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons);
+        EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
         long tested = System.nanoTime();
         ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
         long reported = System.nanoTime();

@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.files;
 
+import dev.sigmawalk.engine.compare.BaselineChoice;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.evidence.DifferenceTest;
@@ -42,37 +43,59 @@ public final class EvidenceFiles {
     /**
      * {@code tests.csv}: one row per compared pair, window and measure: strategy, baseline, window,
      * measure, the two estimates (per period), the difference, its standard error, the statistic,
-     * the HAC and bootstrap p-values, the Holm-adjusted p-value across windows, and the method.
+     * the HAC and bootstrap p-values, the Holm-adjusted p-value across windows, the method, then
+     * (added columns) the Jobson-Korkie/Memmel p-value (its own rows only) and the family p-value
+     * (Romano-Wolf over every comparison the report chooses among, Method §9). Each p-value column
+     * holds only what its name says; a cell that does not apply is empty. A strategy compared with
+     * nothing gets one {@code not_compared} row whose method cell says why.
      */
-    public static void writeTests(Path file, List<Comparison> comparisons) {
+    public static void writeTests(Path file, List<Comparison> comparisons, List<BaselineChoice> choices) {
         try (CsvWriter csv = new CsvWriter(file, "strategy", "baseline", "window", "measure", "estimate",
                 "baseline_estimate", "difference", "standard_error", "statistic", "hac_pvalue", "bootstrap_pvalue",
-                "holm_pvalue", "method")) {
+                "holm_pvalue", "method", "jk_pvalue", "family_pvalue")) {
             for (Comparison c : comparisons) {
-                c.sharpe().ifPresent(t -> row(csv, c, "sharpe_ratio", t, c.holmSharpe()));
-                c.variance().ifPresent(t -> row(csv, c, "variance", t, c.holmVariance()));
+                c.sharpe().ifPresent(t -> row(csv, c, "sharpe_ratio", t, c.holmSharpe(), c.familySharpe()));
+                c.variance().ifPresent(t -> row(csv, c, "variance", t, c.holmVariance(), c.familyVariance()));
                 c.jobsonKorkie().ifPresent(t -> jobsonKorkie(csv, c, t));
                 if (c.skipped().isPresent()) {
                     csv.text(c.strategy()).text(c.baseline()).integer(c.window()).text("not_run");
-                    for (int i = 0; i < 8; i++) {
-                        csv.empty();
-                    }
-                    csv.text(c.skipped().get()).end();
+                    blanks(csv, 8);
+                    csv.text(c.skipped().get()).empty().empty().end();
+                }
+            }
+            for (BaselineChoice b : choices) {
+                if (!b.compared()) {
+                    csv.text(b.strategy()).empty().empty().text("not_compared");
+                    blanks(csv, 8);
+                    csv.text("no baseline: " + b.reason()).empty().empty().end();
                 }
             }
         }
     }
 
-    private static void row(CsvWriter csv, Comparison c, String measure, DifferenceTest t, double holm) {
+    /** {@code tests.csv} when every strategy has a baseline (nothing to list as not compared). */
+    public static void writeTests(Path file, List<Comparison> comparisons) {
+        writeTests(file, comparisons, List.of());
+    }
+
+    private static void blanks(CsvWriter csv, int count) {
+        for (int i = 0; i < count; i++) {
+            csv.empty();
+        }
+    }
+
+    private static void row(CsvWriter csv, Comparison c, String measure, DifferenceTest t, double holm, double family) {
         csv.text(c.strategy()).text(c.baseline()).integer(c.window()).text(measure).number(t.first())
                 .number(t.second()).number(t.difference()).number(t.standardError()).number(t.statistic())
-                .number(t.hacPValue()).number(t.bootstrapPValue()).number(holm).text(t.method()).end();
+                .number(t.hacPValue()).number(t.bootstrapPValue()).number(holm).text(t.method()).empty()
+                .number(family).end();
     }
 
     private static void jobsonKorkie(CsvWriter csv, Comparison c, JobsonKorkieTest t) {
         csv.text(c.strategy()).text(c.baseline()).integer(c.window()).text("sharpe_ratio_iid").number(t.sharpeA())
                 .number(t.sharpeB()).number(t.sharpeA() - t.sharpeB()).empty().number(t.statistic())
-                .number(t.pValue()).empty().empty()
-                .text("Jobson-Korkie (1981) with Memmel (2003) correction, iid normal returns").end();
+                .empty().empty().empty()
+                .text("Jobson-Korkie (1981) with Memmel (2003) correction, iid normal returns")
+                .number(t.pValue()).empty().end();
     }
 }

@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.evidence.BiasStatistic;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.run.PathResult;
 import java.util.ArrayList;
@@ -15,10 +16,12 @@ import java.util.Optional;
 final class Findings {
     private final ReportData data;
     private final Map<PathResult, PathFacts> facts;
+    private final FamilyEdge edge;
 
     Findings(ReportData data, Map<PathResult, PathFacts> facts) {
         this.data = data;
         this.facts = facts;
+        this.edge = new FamilyEdge(data.evidence().comparisons());
     }
 
     /** The path with the lowest realised (net) volatility. */
@@ -34,11 +37,14 @@ final class Findings {
                 + " had the lowest realised volatility: " + Formats.percent(b.volatility()) + " a year";
         Optional<PathResult> next = data.rankedPaths(best.window()).stream().filter(p -> p != best)
                 .min(Comparator.comparingDouble(p -> data.summary(p).volatility()));
+        // Every "lowest" says in the same sentence whether its edge survives the family correction.
         String sentence = next.isPresent()
                 ? lead + ", against " + Formats.percent(data.summary(next.get()).volatility()) + " for "
                         + next.get().strategy() + " with the same window and " + Formats.percent(data.market().volatility())
-                        + " for the market."
-                : lead + ", against " + Formats.percent(data.market().volatility()) + " for the market.";
+                        + " for the market; " + edge.volatilityGap(best.strategy(), next.get().strategy(), best.window())
+                        + "."
+                : lead + ", against " + Formats.percent(data.market().volatility()) + " for the market (no other"
+                        + " strategy with that window to compare it with).";
         return sentence + leftOut();
     }
 
@@ -85,16 +91,20 @@ final class Findings {
             return "No path had enough periods with a risk forecast to judge the forecasts.";
         }
         int inside = 0;
+        int insideNormal = 0;
         for (PathResult p : checked) {
-            if (Band.of(facts.get(p).forecastRows()).contains(data.summary(p).bias().getAsDouble())) {
-                inside++;
-            }
+            Optional<BiasStatistic> b = BiasStatistic.overForecastRows(p.gross(), data.run().riskFree(),
+                    p.forecastVolatility());
+            inside += b.map(BiasStatistic::withinRobustBand).orElse(false) ? 1 : 0;
+            insideNormal += b.map(BiasStatistic::withinBand).orElse(false) ? 1 : 0;
         }
         Comparator<PathResult> byDistance = Comparator.comparingDouble(p -> Math.abs(data.summary(p).bias().getAsDouble() - 1));
         PathResult closest = checked.stream().min(byDistance).orElseThrow();
         PathResult farthest = checked.stream().max(byDistance).orElseThrow();
         String sentence = inside + " of " + checked.size() + " strategy-window combinations had a bias statistic inside "
-                + "the band 1 ± √(2/N) expected of honest forecasts; the closest to 1 was " + name(closest) + " ("
+                + "the band expected of honest forecasts once fat tails are allowed for, 1 ± √((κ − 1)/N) with κ the "
+                + "kurtosis of the standardised returns (" + insideNormal + " inside the normal-theory band 1 ± √(2/N), "
+                + "which is too narrow for fat-tailed returns); the closest to 1 was " + name(closest) + " ("
                 + Formats.ratio(data.summary(closest).bias()) + ")";
         if (closest == farthest) {
             return sentence + ".";
@@ -151,9 +161,13 @@ final class Findings {
                 continue;
             }
             PathResult best = ranked.get();
-            parts.add(Words.periods(w) + ", " + best.strategy() + " at " + Formats.percent(data.summary(best).volatility()));
+            Optional<PathResult> next = data.rankedPaths(w).stream().filter(p -> p != best)
+                    .min(Comparator.comparingDouble(p -> data.summary(p).volatility()));
+            parts.add(Words.periods(w) + ", " + best.strategy() + " at " + Formats.percent(data.summary(best).volatility())
+                    + next.map(n -> " (" + n.strategy() + " " + Formats.percent(data.summary(n).volatility()) + "; "
+                            + edge.volatilityGap(best.strategy(), n.strategy(), w) + ")").orElse(""));
         }
-        return "Lowest realised volatility for each window: " + String.join("; ", parts) + " (all a year).";
+        return "Lowest realised volatility for each window, all a year: " + String.join("; ", parts) + ".";
     }
 
     /** A sentence on whether δ fell as the window grew, for every shrinkage strategy alike. */

@@ -10,6 +10,7 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 import java.util.Map;
 import java.util.SortedMap;
 import java.util.TreeMap;
@@ -44,14 +45,18 @@ final class SectionRows {
             int n = facts.get(p).forecastRows();
             String band = Formats.NOT_APPLICABLE;
             String verdict = "not enough forecasts";
-            if (s.bias().isPresent() && n >= 1) {
-                Band b = Band.of(n);
-                band = Formats.ratio(b.low()) + " to " + Formats.ratio(b.high());
+            Optional<BiasStatistic> stat = BiasStatistic.overForecastRows(p.gross(), data.run().riskFree(),
+                    p.forecastVolatility());
+            if (s.bias().isPresent() && stat.isPresent()) {
+                // Both bands are shown; the verdict uses the kurtosis-adjusted one (Method §7).
+                BiasStatistic b = stat.get();
+                band = Formats.ratio(b.bandLow()) + " to " + Formats.ratio(b.bandHigh()) + " (normal); "
+                        + Formats.ratio(b.robustLow()) + " to " + Formats.ratio(b.robustHigh()) + " (fat-tail adjusted)";
                 double v = s.bias().getAsDouble();
-                verdict = b.contains(v) ? "inside the band" : v > b.high() ? "risk understated" : "risk overstated";
+                verdict = b.withinRobustBand() ? "inside the adjusted band"
+                        : v > b.robustHigh() ? "risk understated" : "risk overstated";
             }
-            String beyond = BiasStatistic.overForecastRows(p.gross(), data.run().riskFree(), p.forecastVolatility())
-                    .map(b -> Formats.percent(b.shareBeyondTwo())).orElse(Formats.NOT_APPLICABLE);
+            String beyond = stat.map(b -> Formats.percent(b.shareBeyondTwo())).orElse(Formats.NOT_APPLICABLE);
             rows.add(new ReportView.HonestyRow(p.strategy(), css(p), Words.periods(p.window()),
                     Formats.percent(s.forecastVolatility()), Formats.percent(s.volatility()), Formats.ratio(s.bias()),
                     band, beyond, Integer.toString(n), verdict));

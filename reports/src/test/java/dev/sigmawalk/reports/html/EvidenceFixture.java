@@ -1,15 +1,12 @@
 package dev.sigmawalk.reports.html;
 
 import dev.sigmawalk.engine.compare.Comparison;
-import dev.sigmawalk.engine.evidence.DifferenceTest;
+import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.evidence.DifferenceTests;
 import dev.sigmawalk.engine.evidence.HacKernel;
-import dev.sigmawalk.engine.evidence.HolmAdjustment;
 import dev.sigmawalk.engine.evidence.InputListSize;
-import dev.sigmawalk.engine.evidence.JobsonKorkieMemmel;
 import dev.sigmawalk.engine.evidence.ResidualCorrelations;
-import dev.sigmawalk.engine.measures.SeriesStats;
-import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.run.WalkForward;
@@ -25,7 +22,7 @@ import java.util.Optional;
 /**
  * Evidence for the fixture run, computed with the engine's own evidence classes: residual
  * diagnostics of every window at every rebalance, and the Sharpe and variance tests of the
- * "pulled" strategy against "diag" per window, Holm-adjusted across the windows.
+ * "pulled" strategy against "diag" per window and of the ranked pairs, with family p-values.
  */
 final class EvidenceFixture {
     /** Assets of the input-list example (README of the check values: 1 325 and 152 for n = 50). */
@@ -57,29 +54,13 @@ final class EvidenceFixture {
         return new ReportEvidence(diagnostics, comparisons(run), Optional.of(new InputListSize(INPUT_LIST_ASSETS)));
     }
 
+    /**
+     * "pulled" against "diag" at every window plus the lowest-volatility pairs the report ranks,
+     * through the engine's own comparison step (Holm across windows, Romano-Wolf over the family).
+     */
     private static List<Comparison> comparisons(RunResult<?> run) {
         DifferenceTests tests = new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(200, 7L, 0));
-        List<DifferenceTest> sharpe = new ArrayList<>();
-        List<DifferenceTest> variance = new ArrayList<>();
-        List<PathResult[]> pairs = new ArrayList<>();
-        for (int w : ReportFixture.WINDOWS) {
-            PathResult a = run.path("pulled", w);
-            PathResult b = run.path("diag", w);
-            sharpe.add(tests.sharpeRatio(SeriesStats.minus(a.net(), run.riskFree()), SeriesStats.minus(b.net(), run.riskFree())));
-            variance.add(tests.variance(a.net(), b.net()));
-            pairs.add(new PathResult[] {a, b});
-        }
-        double[] holmSharpe = HolmAdjustment.adjust(sharpe.stream().mapToDouble(DifferenceTest::bootstrapPValue).toArray());
-        double[] holmVariance = HolmAdjustment.adjust(variance.stream().mapToDouble(DifferenceTest::bootstrapPValue).toArray());
-        List<Comparison> out = new ArrayList<>();
-        for (int k = 0; k < pairs.size(); k++) {
-            PathResult a = pairs.get(k)[0];
-            PathResult b = pairs.get(k)[1];
-            out.add(new Comparison("pulled", "diag", a.window(), Optional.of(sharpe.get(k)), Optional.of(variance.get(k)),
-                    Optional.of(JobsonKorkieMemmel.test(SeriesStats.minus(a.net(), run.riskFree()),
-                            SeriesStats.minus(b.net(), run.riskFree()))),
-                    holmSharpe[k], holmVariance[k], Optional.empty()));
-        }
-        return out;
+        return Comparisons.of(run, Map.of("pulled", "diag"), ReportFixture.WINDOWS, tests,
+                ScannedPair.lowestVolatility(run));
     }
 }

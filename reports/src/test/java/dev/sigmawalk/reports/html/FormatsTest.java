@@ -28,14 +28,4 @@ class FormatsTest {
         assertEquals("7.5 bp", Formats.basisPoints(7.5));
         assertEquals("0 bp", Formats.basisPoints(0));
     }
-
-    /** Menchero, Wang & Orr (2011), eq. 5: N = 50 gives 1 ± √(2/50) = 1 ± 0.2. */
-    @Test
-    void biasBand_isOnePlusMinusRootTwoOverN() {
-        Band b = Band.of(50);
-        assertEquals(0.8, b.low(), 1e-15);
-        assertEquals(1.2, b.high(), 1e-15);
-        assertEquals(true, b.contains(1.19));
-        assertEquals(false, b.contains(1.21));
-    }
 }
