@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.study.Bounds;
 import dev.sigmawalk.engine.study.DataLayout;
 import dev.sigmawalk.engine.study.DataSpec;
 import dev.sigmawalk.engine.study.EvidenceSpec;
+import dev.sigmawalk.engine.study.FactorSource;
 import dev.sigmawalk.engine.study.SeriesSource;
 import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
@@ -89,7 +90,8 @@ final class StudyDataLoader {
         requireFeasibleBounds(panel.assetCount());
 
         warnFewResamples();
-        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(panel), fingerprints, warnings,
+        Map<Path, FactorTable> factors = factorFiles(table, offset, panel, firstNeeded, schedule.firstRebalance());
+        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(panel), factors, fingerprints, warnings,
                 AssetCoverage.of(panel));
     }
 
@@ -247,6 +249,19 @@ final class StudyDataLoader {
             warnings.add(file.getFileName() + " gives no sector for " + without + " of " + panel.assetCount() + " assets");
         }
         return sectors;
+    }
+
+    /** Method §11: every factor file a multi-index strategy names, once each, in study order. */
+    private Map<Path, FactorTable> factorFiles(WideTable table, int offset, ReturnPanel panel, int firstNeeded,
+                                               int firstRebalance) {
+        Map<Path, FactorTable> out = new LinkedHashMap<>();
+        for (StrategySpec s : study.strategies()) {
+            if (s.riskSettings().factors().orElse(null) instanceof FactorSource.File f && !out.containsKey(f.path())) {
+                out.put(f.path(), FactorFileReader.read(f.path(), table, offset, panel, firstNeeded, firstRebalance));
+                fingerprints.add(FileFingerprint.of(f.path()));
+            }
+        }
+        return out;
     }
 
     private Map<Path, AlphaTable> alphas(ReturnPanel panel) {

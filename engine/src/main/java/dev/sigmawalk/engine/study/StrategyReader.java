@@ -18,13 +18,18 @@ import java.util.Set;
  */
 final class StrategyReader {
     private static final Set<String> KEYS = Set.of("name", "risk", "shrinkage_target", "objective", "bounds",
-            "risk_aversion", "expected_returns", "alphas", "market_premium", "baseline");
+            "risk_aversion", "expected_returns", "alphas", "market_premium", "baseline", "factors", "components",
+            "half_life");
     private static final String RESERVED = "market";
 
     private StrategyReader() {
     }
 
-    static List<StrategySpec> readAll(Section root) {
+    /**
+     * @param sectorsGiven whether the study has {@code data.sectors}, which {@code factors: sectors}
+     *                     needs
+     */
+    static List<StrategySpec> readAll(Section root, boolean sectorsGiven) {
         List<YamlNode> items = root.list("strategies");
         if (items.isEmpty()) {
             throw root.bad("strategies", "is empty; expected at least one strategy");
@@ -34,7 +39,7 @@ final class StrategyReader {
         List<Section> sections = new ArrayList<>();
         for (int i = 0; i < items.size(); i++) {
             Section s = Section.of(root.file(), "strategies[" + i + "]", items.get(i), KEYS);
-            StrategySpec spec = read(s);
+            StrategySpec spec = read(s, sectorsGiven);
             Integer earlier = names.putIfAbsent(spec.name(), i);
             if (earlier != null) {
                 throw s.bad("name", "is already the name of strategies[" + earlier + "]; expected a unique name");
@@ -62,7 +67,7 @@ final class StrategyReader {
         return names;
     }
 
-    private static StrategySpec read(Section s) {
+    private static StrategySpec read(Section s, boolean sectorsGiven) {
         String name = s.text("name");
         if (RESERVED.equals(name)) {
             throw s.bad("name", "is reserved for the benchmark; expected another name");
@@ -83,7 +88,9 @@ final class StrategyReader {
         OptionalDouble premium = onlyWith(s, "market_premium", singleIndexInputs)
                 ? OptionalDouble.of(s.number("market_premium")) : OptionalDouble.empty();
         Optional<String> baseline = s.has("baseline") ? Optional.of(s.text("baseline")) : Optional.empty();
-        return new StrategySpec(name, risk, target, objective, bounds, riskAversion, expected, alphas, premium, baseline);
+        RiskSettings settings = RiskSettingsReader.read(s, risk, sectorsGiven);
+        return new StrategySpec(name, risk, target, objective, bounds, riskAversion, expected, alphas, premium, baseline,
+                settings);
     }
 
     private static ShrinkageTarget shrinkageTarget(Section s, RiskKind risk) {

@@ -20,6 +20,8 @@ public final class StudyDefaults {
     public static final RiskKind EQUAL_WEIGHT_RISK = RiskKind.SAMPLE;
     /** {@code shrinkage_target:} of a shrinkage strategy when absent. */
     public static final ShrinkageTarget SHRINKAGE_TARGET = ShrinkageTarget.SINGLE_INDEX;
+    /** {@code factors:} of a multi-index strategy when absent: market plus one factor per sector. */
+    public static final FactorSource FACTORS = new FactorSource.Sectors();
     /** {@code expected_returns:} of mean-variance and max-sharpe when absent. */
     public static final ExpectedReturnKind EXPECTED_RETURNS = ExpectedReturnKind.SINGLE_INDEX;
     /**
@@ -48,6 +50,9 @@ public final class StudyDefaults {
                 "strategies[].risk: " + EQUAL_WEIGHT_RISK.spelling() + " for equal-weight; required otherwise",
                 "strategies[].shrinkage_target: " + SHRINKAGE_TARGET.spelling(),
                 "strategies[].bounds: none (short sales allowed)",
+                "strategies[].factors: " + FACTORS.spelling() + " for multi-index (needs data.sectors)",
+                "strategies[].components: required for principal-components; no default",
+                "strategies[].half_life: required for ewma; no default",
                 "strategies[].risk_aversion: required for mean-variance; no default",
                 "strategies[].expected_returns: " + EXPECTED_RETURNS.spelling() + " for mean-variance and max-sharpe",
                 "strategies[].alphas: none (every alpha 0)",

@@ -53,7 +53,7 @@ public final class StudyReader {
         String title = root.has("title") ? root.text("title") : defaultTitle(file);
         DataSpec data = data(Section.of(file, "data", root.node("data"), DATA));
         WalkForwardSpec walk = walkForward(Section.of(file, "walkforward", root.node("walkforward"), WALK));
-        List<StrategySpec> strategies = StrategyReader.readAll(root);
+        List<StrategySpec> strategies = StrategyReader.readAll(root, data.sectors().isPresent());
         EvidenceSpec evidence = root.has("evidence")
                 ? evidence(Section.of(file, "evidence", root.node("evidence"), EVIDENCE))
                 : EvidenceSpec.defaults();

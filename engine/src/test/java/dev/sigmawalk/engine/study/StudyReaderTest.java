@@ -122,7 +122,8 @@ class StudyReaderTest {
     void unknownChoice_listsTheChoices() {
         InputException e = fails(BASE.replace("risk: single-index", "risk: single_index"));
         assertEquals("demo.yaml line 12, column 11: strategies[0].risk: 'single_index' is not one of the choices;"
-                + " expected sample | single-index | shrinkage", e.getMessage());
+                + " expected sample | single-index | shrinkage | multi-index | principal-components | ewma"
+                + " | nonlinear-shrinkage", e.getMessage());
     }
 
     @Test

@@ -87,7 +87,7 @@ public final class StudyRun {
      */
     public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
                                     Instant started, long begin) {
-        List<StrategyDefinition> strategies = StrategyCatalog.build(study.strategies(), data::alphasFor);
+        List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
         RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
