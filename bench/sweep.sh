@@ -13,6 +13,7 @@
 #   --repeats N    timed runs per engine (default 3)
 #   --heap SIZE    maximum Java heap, as for -Xmx (default 2g)
 #   --work DIR     folder for data, study, sweep and outputs (default: a new temporary folder)
+#   --jar FILE     the runnable jar to time (default reports/target/sigmawalk.jar, built if missing)
 #
 # The grid: cost 5, 10, 20 bps x rebalance every 42 or 63 rows x window 250 or 500 x upper
 # bound 2 % or 5 % on the single-index strategy (3 x 2 x 2 x 2 = 24 points), two long-only
@@ -25,6 +26,7 @@ days=2000
 repeats=3
 heap=2g
 work=
+jar=
 while [ "$#" -gt 0 ]; do
   case "$1" in
     --assets) assets=$2; shift 2 ;;
@@ -32,14 +34,17 @@ while [ "$#" -gt 0 ]; do
     --repeats) repeats=$2; shift 2 ;;
     --heap) heap=$2; shift 2 ;;
     --work) work=$2; shift 2 ;;
-    -h|--help) sed -n '2,21p' "$0"; exit 0 ;;
+    --jar) jar=$2; shift 2 ;;
+    -h|--help) sed -n '2,22p' "$0"; exit 0 ;;
     *) echo "unknown option '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
 
 root=$(cd "$(dirname "$0")/.." && pwd)
-jar="$root/reports/target/sigmawalk.jar"
 generator_classes="$root/sample-universe/target/classes"
+if [ -z "$jar" ]; then
+  jar="$root/reports/target/sigmawalk.jar"
+fi
 if [ ! -f "$jar" ]; then
   (cd "$root" && mvn -o -q package -DskipTests)
 fi
