@@ -65,7 +65,7 @@ public final class StudyRun {
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
         Path target = options.out().orElse(study.output());
-        try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
+        try (OutputFolder folder = OutputFolder.prepare(target, options.force(), inputs(study, data))) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
             Written written = writeInto(folder.staging(), study, data, options.threads(), progress, started, begin);
             folder.commit();
@@ -117,6 +117,14 @@ public final class StudyRun {
                 data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
                 Instant.now(), threads, seconds));
         return new Written(summaries, run);
+    }
+
+    /** Every file the run reads: the study file and each data file. */
+    public static List<Path> inputs(Study study, StudyData data) {
+        List<Path> out = new ArrayList<>();
+        out.add(study.file());
+        data.fingerprints().forEach(f -> out.add(f.path()));
+        return out;
     }
 
     private static List<Summary> summaries(RunResult<?> run) {

@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.sweep;
 
+import dev.sigmawalk.engine.data.FileFingerprint;
 import dev.sigmawalk.engine.data.InputException;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.run.ProgressListener;
@@ -13,6 +14,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
+import java.util.List;
 
 /**
  * Runs one grid point on whichever worker the engine chose: the study is read as if from its
@@ -35,20 +37,29 @@ public final class PointRunner {
         Instant started = Instant.now();
         long begin = System.nanoTime();
         Path target = Path.of(task.folder());
-        try (OutputFolder folder = OutputFolder.prepare(target, force)) {
-            Files.writeString(folder.staging().resolve(STUDY_FILE), task.yaml(), StandardCharsets.UTF_8);
+        try {
             Study study = StudyReader.read(target.resolve(STUDY_FILE), task.yaml());
             StudyData data = StudyData.load(study);
-            StudyRun.writeInto(folder.staging(), study, data, threads, ProgressListener.NONE, started, begin);
-            folder.commit();
-            return new PointOutcome(task.number(), PointOutcome.Status.RAN, "", (System.nanoTime() - begin) / 1e9);
+            return publish(task, target, study, data, threads, force, started, begin);
         } catch (InputException e) {
             return failed(task, e.getMessage(), begin);
-        } catch (IOException e) {
-            return failed(task, new UncheckedIOException(e).getMessage(), begin);
         } catch (RuntimeException e) {
             // Any other failure of one point (a solver error, a full disk) is that point's alone.
             return failed(task, e.toString(), begin);
+        }
+    }
+
+    /** Stages and publishes the point's folder; the inputs kept out of it are its data files. */
+    private static PointOutcome publish(PointTask task, Path target, Study study, StudyData data, int threads,
+                                        boolean force, Instant started, long begin) {
+        List<Path> inputs = data.fingerprints().stream().map(FileFingerprint::path).toList();
+        try (OutputFolder folder = OutputFolder.prepare(target, force, inputs)) {
+            Files.writeString(folder.staging().resolve(STUDY_FILE), task.yaml(), StandardCharsets.UTF_8);
+            StudyRun.writeInto(folder.staging(), study, data, threads, ProgressListener.NONE, started, begin);
+            folder.commit();
+            return new PointOutcome(task.number(), PointOutcome.Status.RAN, "", (System.nanoTime() - begin) / 1e9);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + STUDY_FILE + " for point " + task.number(), e);
         }
     }
 

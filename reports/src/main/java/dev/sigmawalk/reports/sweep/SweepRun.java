@@ -43,7 +43,8 @@ public final class SweepRun {
         Instant started = Instant.now();
         SweepFile sweep = SweepReader.read(sweepFile);
         SweepPlan plan = SweepPlanner.plan(sweep, options.out().orElse(sweep.output()));
-        claim(plan.out(), options.force());
+        List<Path> inputs = List.of(sweep.file(), plan.base().file());
+        claim(plan.out(), options.force(), inputs);
         PointReuse reuse = new PointReuse(VersionProvider.version());
         List<PointOutcome> outcomes = new ArrayList<>();
         List<PointTask> tasks = new ArrayList<>();
@@ -57,12 +58,12 @@ public final class SweepRun {
         Consumer<PointOutcome> progress = options.quiet() ? o -> { } : progress(err, plan, tasks.size());
         outcomes.addAll(engine.run(tasks, options.force(), progress));
         outcomes.sort(Comparator.comparingInt(PointOutcome::number));
-        return publish(plan, outcomes, engine.describe(), started, options.force());
+        return publish(plan, outcomes, engine.describe(), started, options.force(), inputs);
     }
 
     /** Publishes the (possibly empty) folder at once, so that an interrupted sweep's folder is still sigmawalk's. */
-    private static void claim(Path out, boolean force) {
-        try (OutputFolder folder = OutputFolder.prepare(out, force)) {
+    private static void claim(Path out, boolean force, List<Path> inputs) {
+        try (OutputFolder folder = OutputFolder.prepare(out, force, inputs)) {
             folder.commit();
         }
     }
@@ -78,7 +79,7 @@ public final class SweepRun {
     }
 
     private static Outcome publish(SweepPlan plan, List<PointOutcome> outcomes, String engine, Instant started,
-                                   boolean force) {
+                                   boolean force, List<Path> inputs) {
         List<PointRow> rows = new ArrayList<>();
         List<PointComparison> tests = new ArrayList<>();
         List<SweepFiles.Line> lines = new ArrayList<>();
@@ -99,7 +100,7 @@ public final class SweepRun {
         }
         GridEvidence evidence = GridEvidence.of(rows, tests);
         List<HeatMap> maps = HeatMap.of(plan.sweep(), rows);
-        try (OutputFolder folder = OutputFolder.prepare(plan.out(), force)) {
+        try (OutputFolder folder = OutputFolder.prepare(plan.out(), force, inputs)) {
             Path dir = folder.staging();
             SweepFiles.writeSweep(dir.resolve("sweep.csv"), plan.keys(), lines);
             Instant finished = Instant.now();
