@@ -2,24 +2,18 @@ package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
-import dev.sigmawalk.engine.compare.Comparisons;
 import dev.sigmawalk.engine.compare.EvidenceNotes;
-import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
-import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
-import dev.sigmawalk.engine.evidence.DifferenceTests;
-import dev.sigmawalk.engine.evidence.HacKernel;
-import dev.sigmawalk.engine.measures.PerformanceMeasures;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
 import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.run.RebalanceRecord;
 import dev.sigmawalk.engine.run.RunResult;
-import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.reports.api.Runs;
 import dev.sigmawalk.reports.files.EvidenceFiles;
 import dev.sigmawalk.reports.files.Manifest;
 import dev.sigmawalk.reports.files.OutputFolder;
@@ -40,9 +34,6 @@ import java.util.Optional;
  * staging folder and move it into place only when all of it succeeded.
  */
 public final class StudyRun {
-    /** Residual pairs kept per window for the report. */
-    private static final int LARGEST_PAIRS = 10;
-
     private StudyRun() {
     }
 
@@ -90,14 +81,10 @@ public final class StudyRun {
         List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
         RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
-        RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
-                study.walkForward().windows(), study.walkForward().costBps(),
-                new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS)).run(threads, progress);
+        RunResult<WindowEvidence> run = Runs.walk(study, data, strategies, threads, progress);
         long walked = System.nanoTime();
-        List<Summary> summaries = summaries(run);
-        List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
-                study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()),
-                ScannedPair.lowestVolatility(run));
+        List<Summary> summaries = Runs.summaries(run);
+        List<Comparison> comparisons = Runs.comparisons(study, run);
         List<String> warnings = warnings(data, preview, run);
         ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
         ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
@@ -120,20 +107,10 @@ public final class StudyRun {
     }
 
     /** Every file the run reads: the study file and each data file. */
-    public static List<Path> inputs(Study study, StudyData data) {
+    private static List<Path> inputs(Study study, StudyData data) {
         List<Path> out = new ArrayList<>();
         out.add(study.file());
         data.fingerprints().forEach(f -> out.add(f.path()));
-        return out;
-    }
-
-    private static List<Summary> summaries(RunResult<?> run) {
-        PerformanceMeasures measures = new PerformanceMeasures(run.riskFree(), run.market(), run.periodsPerYear());
-        List<Summary> out = new ArrayList<>();
-        for (PathResult p : run.paths()) {
-            out.add(measures.of(p));
-        }
-        out.add(measures.market());
         return out;
     }
 
