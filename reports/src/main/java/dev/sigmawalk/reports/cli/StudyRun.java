@@ -27,6 +27,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Consumer;
 
 /**
  * Wires one run: read and validate the study and its data, prepare the output folder (refusing
@@ -50,7 +51,18 @@ public final class StudyRun {
     record Outcome(Path folder, List<Summary> summaries, RunResult<WindowEvidence> run) {
     }
 
+    /** {@link #execute(Path, Options, PrintStream, Consumer)} with the warnings kept to the outputs. */
     static Outcome execute(Path studyFile, Options options, PrintStream err) {
+        return execute(studyFile, options, err, w -> { });
+    }
+
+    /**
+     * @param err where the progress line goes
+     * @param warn receives every warning as soon as it is known: those of the data and of the
+     *             preview before the walk, those of the results after it (all also go to the
+     *             manifest and the report)
+     */
+    static Outcome execute(Path studyFile, Options options, PrintStream err, Consumer<String> warn) {
         Instant started = Instant.now();
         long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
@@ -58,7 +70,7 @@ public final class StudyRun {
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force(), inputs(study, data))) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
-            Written written = writeInto(folder.staging(), study, data, options.threads(), progress, started, begin);
+            Written written = writeInto(folder.staging(), study, data, options.threads(), progress, warn, started, begin);
             folder.commit();
             return new Outcome(folder.target(), written.summaries(), written.run());
         }
@@ -73,24 +85,30 @@ public final class StudyRun {
      * {@code dir} (a staging folder the caller publishes). The files depend only on the study and
      * its data, never on {@code threads}, except the manifest's clock readings and thread count.
      *
+     * @param warn receives every warning as soon as it is known (all also go to the manifest and the report)
      * @param started when the run began (for the manifest and the report)
      * @param begin {@link System#nanoTime} when reading the study began (for the manifest's timings)
      */
     public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
-                                    Instant started, long begin) {
+                                    Consumer<String> warn, Instant started, long begin) {
         List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
-        RunPreview preview = RunPreview.of(study, data);
+        List<String> warnings = new ArrayList<>(data.warnings());
+        warnings.addAll(RunPreview.of(study, data).warnings());
+        warnings.forEach(warn);
         long loaded = System.nanoTime();
         RunResult<WindowEvidence> run = Runs.walk(study, data, strategies, threads, progress);
         long walked = System.nanoTime();
         List<Summary> summaries = Runs.summaries(run);
         List<Comparison> comparisons = Runs.comparisons(study, run);
-        List<String> warnings = warnings(data, preview, run);
+        List<String> found = warnings(run);
+        found.forEach(warn);
+        warnings.addAll(found);
         ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
         ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
         ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
         ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
         EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+        EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
         EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
         long tested = System.nanoTime();
         ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
@@ -115,14 +133,12 @@ public final class StudyRun {
     }
 
     /**
-     * Data warnings, what the preview found (the same lines {@code check} prints), what the
-     * residual diagnostics left out, then one line per path whose allocation failed at some
-     * rebalance.
+     * The warnings of the results: what the residual diagnostics left out, then one line per path
+     * whose allocation failed at some rebalance. (Those of the data and of the preview, the same
+     * lines {@code check} prints, come before the walk.)
      */
-    private static List<String> warnings(StudyData data, RunPreview preview, RunResult<WindowEvidence> run) {
-        List<String> out = new ArrayList<>(data.warnings());
-        out.addAll(preview.warnings());
-        out.addAll(EvidenceNotes.warnings(run.probes()));
+    private static List<String> warnings(RunResult<WindowEvidence> run) {
+        List<String> out = new ArrayList<>(EvidenceNotes.warnings(run.probes()));
         for (PathResult p : run.paths()) {
             List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
             if (!failed.isEmpty()) {

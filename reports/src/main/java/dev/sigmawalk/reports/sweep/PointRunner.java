@@ -55,7 +55,8 @@ public final class PointRunner {
         List<Path> inputs = data.fingerprints().stream().map(FileFingerprint::path).toList();
         try (OutputFolder folder = OutputFolder.prepare(target, force, inputs)) {
             Files.writeString(folder.staging().resolve(STUDY_FILE), task.yaml(), StandardCharsets.UTF_8);
-            StudyRun.writeInto(folder.staging(), study, data, threads, ProgressListener.NONE, started, begin);
+            // Warnings go to the point's manifest and report; the sweep's progress lines stay one per point.
+            StudyRun.writeInto(folder.staging(), study, data, threads, ProgressListener.NONE, w -> { }, started, begin);
             folder.commit();
             return new PointOutcome(task.number(), PointOutcome.Status.RAN, "", (System.nanoTime() - begin) / 1e9);
         } catch (IOException e) {
