@@ -21,10 +21,13 @@ import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.reports.files.EvidenceFiles;
+import dev.sigmawalk.reports.files.FactorDiagnosticsFile;
 import dev.sigmawalk.reports.files.Manifest;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.ResultFiles;
+import dev.sigmawalk.strategies.FactorDiagnosticsProbe;
 import dev.sigmawalk.strategies.StrategyCatalog;
+import dev.sigmawalk.strategies.risk.FactorDiagnostics;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -70,9 +73,12 @@ final class StudyRun {
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
-            RunResult<WindowEvidence> run = new WalkForward<>(data.panel(), data.schedule(), strategies,
+            RunResult<WindowFindings> found = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
-                    new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS)).run(options.threads(), progress);
+                    WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS),
+                            FactorDiagnosticsProbe.of(study, data))).run(options.threads(), progress);
+            RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(found);
+            Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(found);
             long walked = System.nanoTime();
             List<Summary> summaries = summaries(run);
             List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
@@ -85,9 +91,11 @@ final class StudyRun {
             ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
             EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+            FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
+                    study.walkForward().windows());
             EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
             long tested = System.nanoTime();
-            ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
+            ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics);
             long reported = System.nanoTime();
             Map<String, Double> seconds = new LinkedHashMap<>();
             seconds.put("read_and_check", (loaded - begin) / 1e9);
