@@ -71,7 +71,7 @@ final class StudyRun {
         RunPreview preview = RunPreview.of(study, data);
         long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
-        try (OutputFolder folder = OutputFolder.prepare(target, options.force())) {
+        try (OutputFolder folder = OutputFolder.prepare(target, options.force(), inputs(study, data))) {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
             RunResult<WindowFindings> found = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
@@ -108,6 +108,14 @@ final class StudyRun {
             folder.commit();
             return new Outcome(folder.target(), summaries, run);
         }
+    }
+
+    /** Every file the run reads: the study file and each data file. */
+    private static List<Path> inputs(Study study, StudyData data) {
+        List<Path> out = new ArrayList<>();
+        out.add(study.file());
+        data.fingerprints().forEach(f -> out.add(f.path()));
+        return out;
     }
 
     private static List<Summary> summaries(RunResult<?> run) {

@@ -4,22 +4,29 @@ import dev.sigmawalk.engine.data.InputException;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.FileVisitResult;
+import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
-import java.nio.file.SimpleFileVisitor;
-import java.nio.file.StandardCopyOption;
-import java.nio.file.attribute.BasicFileAttributes;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 
 /**
- * Where a run's outputs go. Everything is written into a fresh staging folder beside the target
- * and moved into place only when the whole run succeeded, so a failed run leaves nothing
- * half-written. A non-empty target that sigmawalk did not write (it carries no
- * {@value #MARKER} file) is refused unless forced; even then only files of the same names are
- * replaced, and nothing else in the folder is touched.
+ * Where a run's outputs go, and the rules that keep a user's files safe.
+ *
+ * <p>Before any computation, {@link #prepare} refuses (as an {@link InputException}, exit 2) an
+ * output folder that overlaps an input with a name the run writes ({@link InputOverlap}, with or
+ * without {@code --force}), a path that is a file or lies under one, a dangling symbolic link, a
+ * folder that cannot be written, and a non-empty folder that sigmawalk did not write (no
+ * {@value #MARKER} file) unless forced. It removes work folders that killed runs left beside the
+ * target, and creates this run's staging folder there.
+ *
+ * <p>Everything is written into the staging folder; {@link #commit} publishes it whole: one
+ * atomic rename when the target does not exist, else a journalled {@link Publication} that
+ * restores the old folder if any rename fails. Files an earlier sigmawalk run wrote and this run
+ * did not are removed; files sigmawalk did not write are never touched. A shutdown hook removes
+ * the staging folder when the process is stopped (SIGTERM, Ctrl-C) before the outputs are
+ * published; it waits for a publication under way to finish first.
  */
 public final class OutputFolder implements AutoCloseable {
     /** Marks a folder as written by sigmawalk; lists the files it wrote. */
@@ -27,57 +34,130 @@ public final class OutputFolder implements AutoCloseable {
 
     private final Path target;
     private final Path staging;
+    private final Path backup;
+    private final List<Path> inputs;
+    private final FileOps ops;
+    private final Object lock = new Object();
+    private final Thread hook;
     private boolean committed;
 
-    private OutputFolder(Path target, Path staging) {
+    private OutputFolder(Path target, String suffix, List<Path> inputs, FileOps ops) {
         this.target = target;
-        this.staging = staging;
+        this.staging = WorkFolders.staging(target, suffix);
+        this.backup = WorkFolders.backup(target, suffix);
+        this.inputs = List.copyOf(inputs);
+        this.ops = ops;
+        this.hook = new Thread(this::discard, "sigmawalk-staging-cleanup");
+    }
+
+    /** {@link #prepare(Path, boolean, List, FileOps)} on the real file system. */
+    public static OutputFolder prepare(Path target, boolean force, List<Path> inputs) {
+        return prepare(target, force, inputs, FileOps.SYSTEM);
     }
 
     /**
      * Checks the target and creates the staging folder.
      *
-     * @throws InputException when the target is a file, or a non-empty folder sigmawalk did not
-     *                        write and {@code force} is false
+     * @param target the output folder
+     * @param force write into a non-empty folder sigmawalk did not write (only same-name files are replaced)
+     * @param inputs every file the run reads (study file, data files); none may be overwritten
+     * @param ops the file-system operations used to publish
+     * @throws InputException when the target is refused; the message names the path and the rule
      */
-    public static OutputFolder prepare(Path target, boolean force) {
+    public static OutputFolder prepare(Path target, boolean force, List<Path> inputs, FileOps ops) {
         Path abs = target.toAbsolutePath().normalize();
-        if (Files.exists(abs) && !Files.isDirectory(abs)) {
+        if (Files.isSymbolicLink(abs) && !Files.exists(abs)) {
+            throw new InputException("output folder " + abs + " is a symbolic link to " + linkTarget(abs)
+                    + ", which does not exist; create that folder or choose another --out");
+        }
+        Path resolved = Files.exists(abs) ? real(abs) : abs;
+        InputOverlap.check(resolved, inputs);
+        if (Files.exists(resolved) && !Files.isDirectory(resolved)) {
             throw new InputException("output " + abs + " is a file, not a folder; choose another --out");
         }
-        if (!force && Files.isDirectory(abs) && !isEmpty(abs) && !Files.exists(abs.resolve(MARKER))) {
-            throw new InputException("output folder " + abs + " is not empty and was not written by sigmawalk;"
+        if (Files.isDirectory(resolved)) {
+            requireUsable(resolved, force);
+        } else {
+            createParents(abs);
+        }
+        WorkFolders.removeAbandoned(resolved);
+        OutputFolder folder = new OutputFolder(resolved, WorkFolders.newSuffix(), inputs, ops);
+        folder.createStaging();
+        return folder;
+    }
+
+    private static void requireUsable(Path dir, boolean force) {
+        if (!force && !isEmpty(dir) && !Files.exists(dir.resolve(MARKER))) {
+            throw new InputException("output folder " + dir + " is not empty and was not written by sigmawalk;"
                     + " choose another --out, or add --force to write into it (files of the same names are replaced,"
                     + " nothing else is touched)");
         }
-        try {
-            Path parent = abs.getParent();
-            Files.createDirectories(parent);
-            return new OutputFolder(abs, createStaging(parent, "." + abs.getFileName() + ".partial-"));
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot create a staging folder beside " + abs, e);
+        if (!Files.isWritable(dir)) {
+            throw new InputException("output folder " + dir + " is not writable; choose another --out or change"
+                    + " its permissions");
         }
     }
 
-    /** A fresh sibling folder with the default permissions (not the owner-only ones of a temp folder). */
-    private static Path createStaging(Path parent, String prefix) throws IOException {
-        long salt = ProcessHandle.current().pid() * 1_000_003L + System.nanoTime();
-        for (int attempt = 0; attempt < 100; attempt++) {
-            Path candidate = parent.resolve(prefix + Long.toHexString(salt + attempt));
-            try {
-                return Files.createDirectory(candidate);
-            } catch (java.nio.file.FileAlreadyExistsException e) {
-                // another run picked the same name; try the next one
-            }
+    /** Creates the missing folders above the target, naming a file or a read-only folder in the way. */
+    private static void createParents(Path abs) {
+        Path parent = abs.getParent();
+        Path existing = parent;
+        while (existing != null && !Files.exists(existing)) {
+            existing = existing.getParent();
         }
-        throw new IOException("no free staging folder name under " + parent);
+        if (existing != null && !Files.isDirectory(existing)) {
+            throw new InputException("output folder " + abs + " cannot be created: " + existing
+                    + " is a file, not a folder; choose another --out");
+        }
+        if (existing != null && !Files.isWritable(existing)) {
+            throw new InputException("output folder " + abs + " cannot be created: folder " + existing
+                    + " is not writable; choose another --out");
+        }
+        try {
+            Files.createDirectories(parent);
+        } catch (IOException e) {
+            throw new InputException("output folder " + abs + " cannot be created: " + e);
+        }
+    }
+
+    private void createStaging() {
+        try {
+            Files.createDirectory(staging);
+        } catch (AccessDeniedException e) {
+            throw new InputException("output folder " + target + ": cannot write in " + staging.getParent()
+                    + " (permission denied); choose another --out");
+        } catch (IOException e) {
+            throw new InputException("output folder " + target + ": cannot create the staging folder " + staging
+                    + ": " + e);
+        }
+        try {
+            Runtime.getRuntime().addShutdownHook(hook);
+        } catch (IllegalStateException e) {
+            // Already shutting down: close() removes the staging folder.
+        }
+    }
+
+    private static Path real(Path p) {
+        try {
+            return p.toRealPath();
+        } catch (IOException e) {
+            throw new InputException("output folder " + p + " cannot be resolved: " + e);
+        }
+    }
+
+    private static String linkTarget(Path link) {
+        try {
+            return String.valueOf(Files.readSymbolicLink(link));
+        } catch (IOException e) {
+            return "an unreadable target";
+        }
     }
 
     private static boolean isEmpty(Path dir) {
         try (Stream<Path> s = Files.list(dir)) {
             return s.findAny().isEmpty();
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot list " + dir, e);
+            throw new InputException("output folder " + dir + " cannot be listed: " + e);
         }
     }
 
@@ -91,68 +171,45 @@ public final class OutputFolder implements AutoCloseable {
         return target;
     }
 
-    /** Moves every staged file into the target, replacing files of the same names. */
+    /** Publishes the staged outputs: the old folder is replaced whole, or left as it was. */
     public void commit() {
-        try {
-            List<String> written = new ArrayList<>();
-            try (Stream<Path> s = Files.walk(staging)) {
-                for (Path p : (Iterable<Path>) s.sorted()::iterator) {
-                    if (Files.isRegularFile(p)) {
-                        written.add(staging.relativize(p).toString().replace('\\', '/'));
-                    }
-                }
-            }
-            Files.write(staging.resolve(MARKER), written, StandardCharsets.UTF_8);
-            if (!Files.exists(target)) {
-                Files.move(staging, target, StandardCopyOption.ATOMIC_MOVE);
-            } else {
-                moveInto(staging, target);
-                deleteTree(staging);
-            }
-            committed = true;
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot move outputs into " + target, e);
-        }
-    }
-
-    private static void moveInto(Path from, Path to) throws IOException {
-        try (Stream<Path> s = Files.walk(from)) {
-            for (Path p : (Iterable<Path>) s.sorted()::iterator) {
-                Path dest = to.resolve(from.relativize(p).toString());
-                if (Files.isDirectory(p)) {
-                    Files.createDirectories(dest);
+        synchronized (lock) {
+            try {
+                List<String> written = Publication.files(staging);
+                Files.write(staging.resolve(MARKER), written, StandardCharsets.UTF_8);
+                if (!Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
+                    ops.rename(staging, target);
                 } else {
-                    Files.move(p, dest, StandardCopyOption.REPLACE_EXISTING);
+                    new Publication(ops, staging, target, backup, inputs).run();
+                }
+                committed = true;
+            } catch (IOException e) {
+                throw new UncheckedIOException("cannot move the outputs into " + target + ": " + e.getMessage()
+                        + "; nothing was changed there", e);
+            }
+        }
+    }
+
+    /** Removes the staging folder unless the outputs were published (also on SIGTERM, through the hook). */
+    private void discard() {
+        synchronized (lock) {
+            if (!committed) {
+                try {
+                    WorkFolders.deleteTree(staging);
+                } catch (IOException e) {
+                    // The next run into this folder removes it (its process is gone by then).
                 }
             }
         }
     }
 
-    /** Removes the staging folder unless the outputs were committed. */
     @Override
     public void close() {
-        if (!committed && Files.exists(staging)) {
-            try {
-                deleteTree(staging);
-            } catch (IOException e) {
-                throw new UncheckedIOException("cannot remove staging folder " + staging, e);
-            }
+        discard();
+        try {
+            Runtime.getRuntime().removeShutdownHook(hook);
+        } catch (IllegalStateException e) {
+            // The process is shutting down; the hook runs discard() itself.
         }
-    }
-
-    private static void deleteTree(Path root) throws IOException {
-        Files.walkFileTree(root, new SimpleFileVisitor<>() {
-            @Override
-            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
-                Files.delete(file);
-                return FileVisitResult.CONTINUE;
-            }
-
-            @Override
-            public FileVisitResult postVisitDirectory(Path dir, IOException exc) throws IOException {
-                Files.delete(dir);
-                return FileVisitResult.CONTINUE;
-            }
-        });
     }
 }
