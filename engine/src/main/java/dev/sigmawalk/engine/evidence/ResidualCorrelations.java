@@ -80,14 +80,18 @@ public final class ResidualCorrelations {
             }
             residualSd[i] = Math.sqrt(d);
         }
-        double[] rho = new double[n * n];
+        // The strict upper triangle, row by row: half the memory of the full matrix, written and
+        // read in order.
+        double[] rho = new double[n * (n - 1) / 2];
+        double[] s = moments.covariance();
+        int at = 0;
         for (int i = 0; i < n; i++) {
-            rho[i * n + i] = 1.0;
+            int row = i * n;
+            double si = sim[i];
+            double sdi = residualSd[i];
             for (int j = i + 1; j < n; j++) {
-                double cov = moments.covariance(i, j) - sim[i] * sim[j] / smm;
-                double r = Math.max(-1.0, Math.min(1.0, cov / (residualSd[i] * residualSd[j])));
-                rho[i * n + j] = r;
-                rho[j * n + i] = r;
+                double cov = s[row + j] - si * sim[j] / smm;
+                rho[at++] = Math.max(-1.0, Math.min(1.0, cov / (sdi * residualSd[j])));
             }
         }
         return new ResidualCorrelations(List.copyOf(assets), moments.length(), rho);
@@ -110,7 +114,20 @@ public final class ResidualCorrelations {
 
     /** ρ_ij (1 on the diagonal). */
     public double correlation(int i, int j) {
-        return correlation[i * assets.size() + j];
+        int n = assets.size();
+        Objects.checkIndex(i, n);
+        Objects.checkIndex(j, n);
+        if (i == j) {
+            return 1.0;
+        }
+        int a = Math.min(i, j);
+        int b = Math.max(i, j);
+        return correlation[rowStart(a, n) + (b - a - 1)];
+    }
+
+    /** Where row i's pairs (i, i+1..n-1) start in the packed upper triangle. */
+    private static int rowStart(int i, int n) {
+        return (int) ((long) i * (2L * n - i - 1) / 2);
     }
 
     /** The adequacy statistics of Method §8 (mean |ρ|, Breusch-Pagan LM, Pesaran CD). */
@@ -133,15 +150,22 @@ public final class ResidualCorrelations {
         Comparator<int[]> better = Comparator.<int[]>comparingDouble(p -> correlation(p[0], p[1]))
                 .thenComparing((p, q) -> p[0] != q[0] ? Integer.compare(q[0], p[0]) : Integer.compare(q[1], p[1]));
         PriorityQueue<int[]> kept = new PriorityQueue<>(Math.max(1, k), better);
+        double worstKept = Double.NEGATIVE_INFINITY;
+        int at = 0;
         for (int i = 0; i < n && k > 0; i++) {
             for (int j = i + 1; j < n; j++) {
+                double r = correlation[at++];
                 if (kept.size() < k) {
                     kept.add(new int[] {i, j});
-                } else if (correlation(i, j) > correlation(kept.peek()[0], kept.peek()[1])) {
+                    if (kept.size() == k) {
+                        worstKept = correlation(kept.peek()[0], kept.peek()[1]);
+                    }
+                } else if (r > worstKept) {
                     // Pairs come in ascending (i, j) order, so a later pair that only ties the
                     // worst kept one never beats it: comparing the correlations alone is exact.
                     kept.poll();
                     kept.add(new int[] {i, j});
+                    worstKept = correlation(kept.peek()[0], kept.peek()[1]);
                 }
             }
         }

@@ -32,6 +32,8 @@ public final class RunningMoments {
     public static final int DEFAULT_REFRESH_EVERY = 20;
     /** Rebuild when s_i²/L exceeds this fraction of D_ii (see the class comment). */
     private static final double CANCELLATION_LIMIT = 0.5;
+    /** Side of the square tiles in which the snapshot mirrors its upper triangle. */
+    private static final int MIRROR_TILE = 64;
 
     private final ShiftedRows rows;
     private final int length;
@@ -151,6 +153,22 @@ public final class RunningMoments {
         return false;
     }
 
+    /** Copies the upper triangle onto the lower one in square tiles, so the column writes stay in the cache. */
+    static void mirrorUpper(double[] s, int n) {
+        for (int i0 = 0; i0 < n; i0 += MIRROR_TILE) {
+            int i1 = Math.min(n, i0 + MIRROR_TILE);
+            for (int j0 = i0; j0 < n; j0 += MIRROR_TILE) {
+                int j1 = Math.min(n, j0 + MIRROR_TILE);
+                for (int i = i0; i < i1; i++) {
+                    int row = i * n;
+                    for (int j = Math.max(j0, i + 1); j < j1; j++) {
+                        s[j * n + i] = s[row + j];
+                    }
+                }
+            }
+        }
+    }
+
     /**
      * The moments of the current window over the given panel columns (ascending), in their
      * order: x̄_i = c_i + s_i/L, S_ij = (D_ij − s_i s_j / L)/(L − 1), and the same for the market
@@ -184,12 +202,11 @@ public final class RunningMoments {
             int rowBase = ci * width;
             for (int b = a; b < n; b++) {
                 int cj = columns[b];
-                double v = (cross[rowBase + cj] - si * sum[cj] / len) / div;
-                s[a * n + b] = v;
-                s[b * n + a] = v;
+                s[a * n + b] = (cross[rowBase + cj] - si * sum[cj] / len) / div;
             }
             s[a * n + a] = Math.max(0.0, s[a * n + a]);
         }
+        mirrorUpper(s, n);
         double smm = Math.max(0.0, (cross[mk * width + mk] - sm * sm / len) / div);
         return new WindowMoments(n, length, mean, shift[mk] + sm / len, smm, sim, s);
     }

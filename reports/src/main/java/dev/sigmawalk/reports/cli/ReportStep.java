@@ -14,6 +14,7 @@ import dev.sigmawalk.reports.html.InputFile;
 import dev.sigmawalk.reports.html.ReportData;
 import dev.sigmawalk.reports.html.ReportEvidence;
 import dev.sigmawalk.reports.html.ReportWriter;
+import dev.sigmawalk.reports.pdf.ReportPdf;
 import dev.sigmawalk.reports.html.RunRecord;
 import dev.sigmawalk.reports.html.WindowDiagnostics;
 import dev.sigmawalk.strategies.risk.FactorDiagnostics;
@@ -27,7 +28,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
-/** Assembles the report's input from a finished run and writes report.html and charts/. */
+/** Assembles the report's input from a finished run and writes report.html, charts/ and report.pdf. */
 final class ReportStep {
     private ReportStep() {
     }
@@ -47,6 +48,7 @@ final class ReportStep {
         try {
             new ReportWriter().write(new ReportData(study, run, summaries, record, evidence), dir.resolve("report.html"),
                     dir.resolve("charts"));
+            ReportPdf.write(dir.resolve("report.html"), dir.resolve("report.pdf"));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report", e);
         }

@@ -55,33 +55,20 @@ final class PrimalDualActiveSet {
             return null;
         }
         for (int i = 0; i < s.n; i++) {
-            s.side[i] = admissible(i, guess[i]);
+            s.side[i] = PartitionUpdate.admissible(lo[i], hi[i], guess[i]);
         }
         Set<Long> seen = new HashSet<>();
         for (int step = 1; step <= MAX_STEPS; step++) {
-            if (!seen.add(fingerprint()) || !solveSubproblem()) {
+            if (!seen.add(PartitionUpdate.fingerprint(s.side)) || !solveSubproblem()) {
                 return null;
             }
             double scale = gradientAndScale();
-            if (!repartition(scale)) {
+            if (!PartitionUpdate.repartition(s.side, s.w, s.g, lo, hi, s.free, s.freeCount,
+                    -settings.dropTolerance() * scale)) {
                 return verified(step);
             }
         }
         return null;
-    }
-
-    /** The side a guess may take for weight i: a bound only when it is finite; fixed weights sit at lower. */
-    private BoundSide admissible(int i, BoundSide guessed) {
-        if (lo[i] == hi[i]) {
-            return BoundSide.LOWER;
-        }
-        if (guessed == BoundSide.LOWER && Double.isFinite(lo[i])) {
-            return BoundSide.LOWER;
-        }
-        if (guessed == BoundSide.UPPER && Double.isFinite(hi[i])) {
-            return BoundSide.UPPER;
-        }
-        return BoundSide.FREE;
     }
 
     /** Pins the bound weights, factors the free block and solves for the free weights. */
@@ -140,41 +127,6 @@ final class PrimalDualActiveSet {
         return largest > 0 && Double.isFinite(largest) ? largest : 1;
     }
 
-    /**
-     * Releases every pinned weight whose multiplier is below −dropTolerance·scale and pins every
-     * free weight beyond a bound; returns whether anything changed.
-     */
-    private boolean repartition(double scale) {
-        double nu = 0;
-        for (int r = 0; r < s.freeCount; r++) {
-            nu += s.g[s.free[r]];
-        }
-        nu /= s.freeCount;
-        double floor = -settings.dropTolerance() * scale;
-        boolean changed = false;
-        for (int i = 0; i < s.n; i++) {
-            BoundSide now = s.side[i];
-            BoundSide next = now;
-            if (now == BoundSide.FREE) {
-                if (s.w[i] < lo[i]) {
-                    next = BoundSide.LOWER;
-                } else if (s.w[i] > hi[i]) {
-                    next = BoundSide.UPPER;
-                }
-            } else if (lo[i] < hi[i]) {
-                double multiplier = now == BoundSide.LOWER ? s.g[i] - nu : nu - s.g[i];
-                if (multiplier < floor) {
-                    next = BoundSide.FREE;
-                }
-            }
-            if (next != now) {
-                s.side[i] = next;
-                changed = true;
-            }
-        }
-        return changed;
-    }
-
     /** The converged point through the same independent KKT verification as the primal loop. */
     private SolveOutcome.Optimal verified(int steps) {
         KktReport report = KktCheck.check(s.problem, s.w);
@@ -183,15 +135,5 @@ final class PrimalDualActiveSet {
         }
         return new SolveOutcome.Optimal(s.w.clone(), s.side.clone(), steps, report.budgetMultiplier(),
                 report.worst());
-    }
-
-    /** A 64-bit hash of the partition, to notice a step that returns to an earlier partition. */
-    private long fingerprint() {
-        long h = 0x9E3779B97F4A7C15L;
-        for (int i = 0; i < s.n; i++) {
-            h = (h ^ s.side[i].ordinal()) * 0x100000001B3L;
-            h ^= h >>> 29;
-        }
-        return h;
     }
 }

@@ -32,10 +32,41 @@ public record QuadraticProblem(int size, double[] quadratic, double[] linear, do
         requireLength("linear", linear, size);
         requireLength("lower", lower, size);
         requireLength("upper", upper, size);
-        checkFinite("quadratic", quadratic);
+        boolean quadraticFine = quadraticPasses(size, quadratic);
+        if (!quadraticFine) {
+            checkFinite("quadratic", quadratic);
+        }
         checkFinite("linear", linear);
         checkBounds(lower, upper);
-        checkSymmetric(size, quadratic);
+        if (!quadraticFine) {
+            checkSymmetric(size, quadratic);
+        }
+    }
+
+    /**
+     * One tiled pass over the pairs (Q_ij, Q_ji): true when every entry is finite and every pair
+     * agrees within the symmetry tolerance, which is all the two checks below can say of a good
+     * matrix; only a bad one is walked again, by them, to name the offending entry.
+     */
+    private static boolean quadraticPasses(int n, double[] q) {
+        double largest = 0;
+        double widest = 0;
+        for (int i0 = 0; i0 < n; i0 += SYMMETRY_TILE) {
+            int i1 = Math.min(n, i0 + SYMMETRY_TILE);
+            for (int j0 = i0; j0 < n; j0 += SYMMETRY_TILE) {
+                int j1 = Math.min(n, j0 + SYMMETRY_TILE);
+                for (int i = i0; i < i1; i++) {
+                    int row = i * n;
+                    for (int j = Math.max(j0, i); j < j1; j++) {
+                        double a = q[row + j];
+                        double b = q[j * n + i];
+                        largest = Math.max(largest, Math.max(Math.abs(a), Math.abs(b)));
+                        widest = Math.max(widest, Math.abs(a - b));
+                    }
+                }
+            }
+        }
+        return Double.isFinite(largest) && widest <= SYMMETRY_TOLERANCE * largest;
     }
 
     /** A problem with the same bound on every weight. */

@@ -1,6 +1,7 @@
 package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
+import dev.sigmawalk.strategies.optimize.FactorForm;
 
 import java.util.Objects;
 
@@ -21,7 +22,7 @@ import java.util.Objects;
  * they no longer touch) and the accessors return them read-only. Entries are symmetric bit for
  * bit: Σ_ij is always computed from the smaller index's row.
  */
-public final class FactorCovariance implements CovarianceEstimate {
+public final class FactorCovariance implements CovarianceEstimate, FactorForm {
     private final int n;
     private final int k;
     private final double[] loadings;
@@ -86,21 +87,25 @@ public final class FactorCovariance implements CovarianceEstimate {
     }
 
     /** K, the number of factors. */
+    @Override
     public int factorCount() {
         return k;
     }
 
     /** B, n×K row-major (read-only). */
+    @Override
     public double[] loadings() {
         return loadings;
     }
 
     /** Σ_F, K×K row-major, symmetric (read-only). */
+    @Override
     public double[] factorCovariance() {
         return factorCovariance;
     }
 
     /** d, the specific variances, length n, each ≥ 0 (read-only). */
+    @Override
     public double[] specificVariances() {
         return specific;
     }

@@ -1,6 +1,9 @@
 package dev.sigmawalk.strategies.rules;
 
 import dev.sigmawalk.strategies.optimize.ActiveSetSolver;
+import dev.sigmawalk.strategies.optimize.BoundSide;
+import dev.sigmawalk.strategies.optimize.FactorForm;
+import dev.sigmawalk.strategies.optimize.FactorMinVariance;
 import dev.sigmawalk.strategies.optimize.QuadraticProblem;
 import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import dev.sigmawalk.strategies.optimize.SingleFactorMinVariance;
@@ -19,6 +22,9 @@ import java.util.Optional;
  *       as NotFormed naming the singular matrix.</li>
  *   <li>Bounds and a single-factor Σ: the O(n log n) clamp-and-threshold rule, falling back to
  *       the exact active-set solver when it cannot certify its answer.</li>
+ *   <li>Bounds and a factor-form Σ = BΣ_FB' + diag(d): the primal-dual active-set method on
+ *       the factors ({@link FactorMinVariance}), without the n×n matrix, warm-started from the
+ *       previous rebalance; the dense solver when it cannot certify its answer.</li>
  *   <li>Bounds otherwise: the exact active-set solver, warm-started from the previous rebalance.</li>
  * </ul>
  *
@@ -62,8 +68,16 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
                 return fast.get();
             }
         }
+        BoundSide[] guess = warm.guessFor(input.assets());
+        if (input.covariance() instanceof FactorForm) {
+            Optional<SolveOutcome.Optimal> small = new FactorMinVariance(settings)
+                    .solve((FactorForm) input.covariance(), lo, hi, guess);
+            if (small.isPresent()) {
+                return small.get();
+            }
+        }
         QuadraticProblem problem = new QuadraticProblem(n, input.covariance().dense(), new double[n], lo, hi);
-        return new ActiveSetSolver(settings).solve(problem, warm.guessFor(input.assets()));
+        return new ActiveSetSolver(settings).solve(problem, guess);
     }
 
     @Override

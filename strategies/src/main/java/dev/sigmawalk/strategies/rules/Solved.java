@@ -1,6 +1,8 @@
 package dev.sigmawalk.strategies.rules;
 
 import dev.sigmawalk.engine.study.Bounds;
+import dev.sigmawalk.strategies.optimize.FactorForm;
+import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import dev.sigmawalk.strategies.optimize.SolveOutcome;
 import java.util.Arrays;
 import java.util.List;
@@ -82,12 +84,38 @@ final class Solved {
 
     /**
      * NotFormed when there are no eligible assets or the covariance has a non-finite entry (the
-     * solvers accept only finite matrices); null otherwise. O(n²).
+     * solvers accept only finite matrices); null otherwise. O(n²) for a dense Σ; for a factor
+     * form the factors are checked in O(nK) and the dense matrix is built only to name the
+     * entry when one is not finite.
      */
     static RuleOutcome unusable(String rule, RuleInput input) {
         if (input.size() == 0) {
             return new RuleOutcome.NotFormed(rule + ": no eligible assets");
         }
+        if (input.covariance() instanceof FactorForm) {
+            FactorForm form = (FactorForm) input.covariance();
+            return finite(form.loadings()) && finite(form.factorCovariance()) && finite(form.specificVariances())
+                    ? null : unusableEntry(rule, input);
+        }
+        if (input.covariance() instanceof SingleFactorForm) {
+            SingleFactorForm form = (SingleFactorForm) input.covariance();
+            return Double.isFinite(form.factorVariance()) && finite(form.loadings())
+                    && finite(form.specificVariances()) ? null : unusableEntry(rule, input);
+        }
+        return unusableEntry(rule, input);
+    }
+
+    private static boolean finite(double[] values) {
+        for (double v : values) {
+            if (!Double.isFinite(v)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** NotFormed naming the first non-finite entry of the dense Σ; null when there is none. */
+    private static RuleOutcome unusableEntry(String rule, RuleInput input) {
         int n = input.size();
         double[] sigma = input.covariance().dense();
         for (int k = 0; k < sigma.length; k++) {

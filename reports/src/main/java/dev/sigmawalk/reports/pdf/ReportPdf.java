@@ -1,0 +1,99 @@
+package dev.sigmawalk.reports.pdf;
+
+import com.openhtmltopdf.outputdevice.helper.BaseRendererBuilder;
+import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
+import com.openhtmltopdf.svgsupport.BatikSVGDrawer;
+import com.openhtmltopdf.util.XRLog;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.jsoup.Jsoup;
+import org.jsoup.helper.W3CDom;
+import org.jsoup.nodes.Document;
+import org.jsoup.nodes.Element;
+
+/**
+ * Writes {@code report.pdf} from {@code report.html}: the same content, laid out for A4 paper by
+ * the report's own print style sheet, with the charts drawn as vector graphics, every folded
+ * section unfolded and every page numbered. The fonts (DejaVu Sans, under the Bitstream Vera
+ * licence shipped beside them) are packed in the jar, so the PDF looks the same on every machine
+ * and shows the Greek letters and marks the report uses.
+ */
+public final class ReportPdf {
+    private static final String FONT_FAMILY = "DejaVu Sans";
+    private static final String REGULAR = "DejaVuSans.ttf";
+    private static final String BOLD = "DejaVuSans-Bold.ttf";
+    /** Width of a chart on the page: two charts side by side fill the A4 text width of the style sheet. */
+    private static final double CHART_MM = 88;
+    private static final Pattern VIEW_BOX = Pattern.compile("\\s*[-0-9.]+\\s+[-0-9.]+\\s+([0-9.]+)\\s+([0-9.]+)\\s*");
+
+    /**
+     * Layout rules the PDF renderer needs beyond the print style sheet: it lays out neither grids
+     * nor folded sections, so charts sit two to a row and every section is open.
+     */
+    private static final String PDF_STYLE = "body { font-family: '" + FONT_FAMILY + "', sans-serif; }\n"
+            + "details, summary { display: block; }\n"
+            + ".matrices, .figures { display: block; }\n"
+            + ".figures figure { display: inline-block; width: 49%; vertical-align: top; margin: 0 0 3mm; }\n"
+            + "@page { size: A4 portrait; }\n";
+
+    private ReportPdf() {
+    }
+
+    /**
+     * @param html the report written by the HTML writer
+     * @param pdf the PDF to create or replace
+     */
+    public static void write(Path html, Path pdf) throws IOException {
+        // The renderer logs every font it loads and every style it skips on standard error; a
+        // run's standard error is kept for the tool's own progress and warnings.
+        XRLog.setLoggingEnabled(false);
+        Document doc = Jsoup.parse(html.toFile(), StandardCharsets.UTF_8.name());
+        prepare(doc);
+        try (OutputStream out = Files.newOutputStream(pdf)) {
+            PdfRendererBuilder builder = new PdfRendererBuilder();
+            builder.useFastMode();
+            builder.useSVGDrawer(new BatikSVGDrawer());
+            builder.useFont(() -> font(REGULAR), FONT_FAMILY, 400, BaseRendererBuilder.FontStyle.NORMAL, true);
+            builder.useFont(() -> font(BOLD), FONT_FAMILY, 700, BaseRendererBuilder.FontStyle.NORMAL, true);
+            builder.withW3cDocument(new W3CDom().fromJsoup(doc), html.toAbsolutePath().getParent().toUri().toString());
+            builder.withProducer("sigmawalk");
+            builder.toStream(out);
+            builder.run();
+        }
+    }
+
+    /** Unfolds every section, adds the PDF layout rules and gives every chart its size on paper. */
+    static void prepare(Document doc) {
+        for (Element d : doc.select("details")) {
+            d.attr("open", "");
+        }
+        doc.head().appendElement("style").appendText(PDF_STYLE);
+        for (Element svg : doc.select("figure svg")) {
+            Matcher m = VIEW_BOX.matcher(svg.attr("viewBox"));
+            if (m.matches()) {
+                double w = Double.parseDouble(m.group(1));
+                double h = Double.parseDouble(m.group(2));
+                // The renderer reads only whole numbers in a viewBox; the charts are drawn on whole pixels.
+                svg.attr("viewBox", String.format(Locale.ROOT, "0 0 %d %d", Math.round(w), Math.round(h)));
+                svg.attr("style", String.format(Locale.ROOT, "width: %.1fmm; height: %.1fmm;", CHART_MM,
+                        CHART_MM * h / w));
+            }
+        }
+    }
+
+    private static InputStream font(String name) {
+        InputStream in = ReportPdf.class.getResourceAsStream(name);
+        if (in == null) {
+            throw new UncheckedIOException(new IOException("font " + name + " is missing from the jar"));
+        }
+        return in;
+    }
+}
