@@ -36,24 +36,19 @@ public record AssetCoverage(String asset, LocalDate first, LocalDate last, int p
 
     /** Coverage of every asset column of {@code panel}; assets with no return at all are skipped. */
     public static List<AssetCoverage> of(ReturnPanel panel) {
-        List<AssetCoverage> out = new ArrayList<>(panel.assetCount());
-        for (int j = 0; j < panel.assetCount(); j++) {
-            int first = -1;
-            int last = -1;
-            int present = 0;
-            for (int t = 0; t < panel.rows(); t++) {
-                if (!Double.isNaN(panel.value(t, j))) {
-                    if (first < 0) {
-                        first = t;
-                    }
-                    last = t;
-                    present++;
-                }
-            }
+        return of(panel, PanelStats.of(panel, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY));
+    }
+
+    /** Coverage from counts already gathered over {@code panel}. */
+    static List<AssetCoverage> of(ReturnPanel panel, PanelStats stats) {
+        int n = panel.assetCount();
+        List<AssetCoverage> out = new ArrayList<>(n);
+        for (int j = 0; j < n; j++) {
+            int present = stats.present[j];
             if (present > 0) {
-                int gaps = (last - first + 1) - present;
-                out.add(new AssetCoverage(panel.assets().get(j), panel.date(first), panel.date(last), present,
-                        panel.rows() - present, gaps));
+                int gaps = (stats.last[j] - stats.first[j] + 1) - present;
+                out.add(new AssetCoverage(panel.assets().get(j), panel.date(stats.first[j]), panel.date(stats.last[j]),
+                        present, panel.rows() - present, gaps));
             }
         }
         return List.copyOf(out);

@@ -22,7 +22,7 @@ final class FactorFileReader {
      */
     static FactorTable read(Path file, WideTable assets, int offset, ReturnPanel panel, int firstNeeded,
                             int firstRebalance) {
-        WideTable f = WideCsvReader.read(file, ValueKind.RETURNS, null);
+        WideTable f = WideCsvReader.read(file, ValueKind.RETURNS, null).table();
         int k = f.columnCount();
         double[] values = new double[panel.rows() * k];
         Arrays.fill(values, Double.NaN);

@@ -31,6 +31,11 @@ public record FileFingerprint(Path path, long bytes, String sha256) {
         }
     }
 
+    /** The fingerprint from a SHA-256 digest taken while {@code file} was read for parsing. */
+    static FileFingerprint of(Path file, long bytes, byte[] sha256) {
+        return new FileFingerprint(file.toAbsolutePath(), bytes, HexFormat.of().formatHex(sha256));
+    }
+
     /** Reads {@code file} once and digests it. */
     public static FileFingerprint of(Path file) {
         try (InputStream in = Files.newInputStream(file)) {

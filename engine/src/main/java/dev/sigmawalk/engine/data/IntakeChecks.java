@@ -24,6 +24,7 @@ final class IntakeChecks {
     private final ValueKind kind;
     private final int offset;
     private final List<String> warnings;
+    private final PanelStats stats;
 
     /**
      * @param panel the panel, already cut at the end date
@@ -36,6 +37,12 @@ final class IntakeChecks {
         this.kind = kind;
         this.offset = offset;
         this.warnings = warnings;
+        this.stats = PanelStats.of(panel, IMPLAUSIBLE_RETURN, PERCENT_MEDIAN);
+    }
+
+    /** The counts the checks used, for the coverage report. */
+    PanelStats stats() {
+        return stats;
     }
 
     /**
@@ -71,36 +78,15 @@ final class IntakeChecks {
      * percent. Counting against 0.5 finds the median's side without sorting.
      */
     void requireDecimalScale(WideTable table, List<Integer> assetCols, List<Integer> kept) {
-        if (kind != ValueKind.RETURNS) {
+        if (kind != ValueKind.RETURNS || !(stats.largeCount * 2 > stats.presentCount)) {
             return;
         }
-        long present = 0;
-        long large = 0;
-        int firstRow = -1;
-        int firstCol = -1;
-        for (int t = 0; t < panel.rows(); t++) {
-            for (int k = 0; k < kept.size(); k++) {
-                double r = panel.value(t, k);
-                if (!Double.isNaN(r)) {
-                    present++;
-                    if (Math.abs(r) > PERCENT_MEDIAN) {
-                        large++;
-                        if (firstRow < 0) {
-                            firstRow = t;
-                            firstCol = k;
-                        }
-                    }
-                }
-            }
-        }
-        if (present > 0 && large * 2 > present) {
-            int col = assetCols.get(kept.get(firstCol));
-            throw new InputException(new InputException.Location(table.file(), 0, null), String.format(Locale.ROOT,
-                    "%.0f %% of the returns are larger than %.1f in size (line %d, column '%s' holds %s), so the file"
-                            + " looks like percent; expected decimal returns (0.012 for 1.2 %%): divide every value by 100",
-                    100.0 * large / present, PERCENT_MEDIAN, table.line(firstRow + offset, col), table.columns().get(col),
-                    panel.value(firstRow, firstCol)));
-        }
+        int col = assetCols.get(kept.get(stats.firstLargeAsset));
+        throw new InputException(new InputException.Location(table.file(), 0, null), String.format(Locale.ROOT,
+                "%.0f %% of the returns are larger than %.1f in size (line %d, column '%s' holds %s), so the file"
+                        + " looks like percent; expected decimal returns (0.012 for 1.2 %%): divide every value by 100",
+                100.0 * stats.largeCount / stats.presentCount, PERCENT_MEDIAN, table.line(stats.firstLargeRow + offset, col),
+                table.columns().get(col), panel.value(stats.firstLargeRow, stats.firstLargeAsset)));
     }
 
     /**
@@ -109,18 +95,10 @@ final class IntakeChecks {
      */
     void warnManyReturnsBeyondOne(WideTable table, List<Integer> assetCols, List<Integer> kept) {
         for (int k = 0; k < kept.size(); k++) {
-            int present = 0;
-            int beyond = 0;
-            for (int t = 0; t < panel.rows(); t++) {
-                double r = panel.value(t, k);
-                if (!Double.isNaN(r)) {
-                    present++;
-                    beyond += Math.abs(r) > 1 ? 1 : 0;
-                }
-            }
-            if (beyond >= MANY_BEYOND_ONE && beyond * 10 > present) {
+            int beyond = stats.beyondOne[k];
+            if (beyond >= MANY_BEYOND_ONE && beyond * 10 > stats.present[k]) {
                 warnings.add(table.file().getFileName() + " column '" + table.columns().get(assetCols.get(kept.get(k)))
-                        + "': " + beyond + " of " + present + " returns exceed 100 % in size in one period;"
+                        + "': " + beyond + " of " + stats.present[k] + " returns exceed 100 % in size in one period;"
                         + (kind == ValueKind.PRICES ? " check the prices" : " check that they are decimals, not percent"));
             }
         }
@@ -129,19 +107,12 @@ final class IntakeChecks {
     /** Warns once per column about period returns above +500 %, naming the first one. */
     void warnImplausibleReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
         for (int k = 0; k < kept.size(); k++) {
-            int count = 0;
-            int first = -1;
-            for (int t = 0; t < panel.rows(); t++) {
-                if (panel.value(t, k) > IMPLAUSIBLE_RETURN) {
-                    count++;
-                    first = first < 0 ? t : first;
-                }
-            }
+            int count = stats.aboveImplausible[k];
             if (count > 0) {
-                String name = table.columns().get(assetCols.get(kept.get(k)));
-                warnings.add(table.file().getFileName() + " line " + table.line(first + offset, assetCols.get(kept.get(k)))
-                        + ", column '" + name
-                        + "': a return of " + panel.value(first, k) + " is above +500 % in one period"
+                int first = stats.firstImplausible[k];
+                int col = assetCols.get(kept.get(k));
+                warnings.add(table.file().getFileName() + " line " + table.line(first + offset, col) + ", column '"
+                        + table.columns().get(col) + "': a return of " + panel.value(first, k) + " is above +500 % in one period"
                         + (count > 1 ? " (" + count + " such rows in this column)" : "")
                         + (kind == ValueKind.PRICES ? "; check the prices" : "; check that returns are decimals, not percent"));
             }

@@ -38,6 +38,21 @@ public final class ReturnPanel {
      */
     public ReturnPanel(LocalDate[] dates, List<String> assets, double[] returns, double[] market,
                        double[] riskFree, String marketName, int periodsPerYear) {
+        this(dates, assets, returns, market, riskFree, marketName, periodsPerYear, true);
+    }
+
+    /**
+     * A panel that takes ownership of {@code returns} instead of copying it: intake hands over
+     * the array it has just filled, so a large file's values exist once rather than twice.
+     * The caller must not keep or write the array.
+     */
+    static ReturnPanel owning(LocalDate[] dates, List<String> assets, double[] returns, double[] market,
+                              double[] riskFree, String marketName, int periodsPerYear) {
+        return new ReturnPanel(dates, assets, returns, market, riskFree, marketName, periodsPerYear, false);
+    }
+
+    private ReturnPanel(LocalDate[] dates, List<String> assets, double[] returns, double[] market,
+                        double[] riskFree, String marketName, int periodsPerYear, boolean copy) {
         Objects.requireNonNull(dates, "dates");
         Objects.requireNonNull(assets, "assets");
         int rows = dates.length;
@@ -67,7 +82,7 @@ public final class ReturnPanel {
         this.dates = dates.clone();
         this.assets = Collections.unmodifiableList(new ArrayList<>(assets));
         this.assetIndex = Collections.unmodifiableMap(index);
-        this.returns = returns.clone();
+        this.returns = copy ? returns.clone() : returns;
         this.market = market.clone();
         this.riskFree = riskFree.clone();
         this.marketName = Objects.requireNonNull(marketName, "marketName");

@@ -73,7 +73,7 @@ final class StudyDataLoader {
                 .map(rf -> Arrays.copyOfRange(rf.values(), offset, rf.values().length))
                 .orElseGet(() -> annualToPeriod(((SeriesSource.AnnualRate) spec.riskFree()).rate(), periods, panelRows));
         LocalDate[] dates = Arrays.copyOfRange(table.dates(), offset, table.rows());
-        ReturnPanel panel = cutAtEnd(new ReturnPanel(dates, assets, panelReturns, marketReturns, riskFree,
+        ReturnPanel panel = cutAtEnd(ReturnPanel.owning(dates, assets, panelReturns, marketReturns, riskFree,
                 market.column(), periods));
         Schedule schedule = plan(panel);
 
@@ -92,7 +92,7 @@ final class StudyDataLoader {
         warnFewResamples();
         Map<Path, FactorTable> factors = factorFiles(table, offset, panel, firstNeeded, schedule.firstRebalance());
         return new StudyData(panel, schedule, inferred, sectors(panel), alphas(panel), factors, fingerprints, warnings,
-                AssetCoverage.of(panel));
+                AssetCoverage.of(panel, checks.stats()));
     }
 
     private WideTable readAssets(String ratesColumn) {
@@ -105,9 +105,9 @@ final class StudyDataLoader {
     }
 
     private WideTable readWide(Path file, ValueKind kind, String ratesColumn) {
-        WideTable t = WideCsvReader.read(file, kind, ratesColumn);
-        fingerprints.add(FileFingerprint.of(file));
-        return t;
+        WideCsvReader.Read read = WideCsvReader.read(file, kind, ratesColumn);
+        fingerprints.add(read.fingerprint());
+        return read.table();
     }
 
     private SeriesColumn series(String role, SeriesSource source, WideTable assets, ValueKind kind) {
@@ -147,7 +147,14 @@ final class StudyDataLoader {
         return cols;
     }
 
+    /**
+     * The assets' returns, row-major. When the file holds returns and every column is an asset,
+     * that is the table's own array, used as it is (no copy of a large file's values).
+     */
     private double[] assetReturns(WideTable table, List<Integer> assetCols, int panelRows) {
+        if (spec.values() == ValueKind.RETURNS && assetCols.size() == table.columnCount()) {
+            return table.values();
+        }
         double[] out = new double[panelRows * assetCols.size()];
         for (int k = 0; k < assetCols.size(); k++) {
             ValueConversion.convert(spec.values(), table.values(), table.columnCount(), assetCols.get(k), out,
@@ -156,16 +163,18 @@ final class StudyDataLoader {
         return out;
     }
 
-    /** Indexes (into assetCols) of assets with at least one return; warns about the rest. */
+    /** Indexes (into assetCols) of assets with at least one return; warns about the rest. Row by row, as stored. */
     private List<Integer> dropEmpty(WideTable table, List<Integer> assetCols, double[] returns, int panelRows) {
-        List<Integer> kept = new ArrayList<>();
         int cols = assetCols.size();
-        for (int k = 0; k < cols; k++) {
-            boolean any = false;
-            for (int t = 0; t < panelRows && !any; t++) {
-                any = !Double.isNaN(returns[t * cols + k]);
+        boolean[] any = new boolean[cols];
+        for (int t = 0; t < panelRows; t++) {
+            for (int k = 0; k < cols; k++) {
+                any[k] |= !Double.isNaN(returns[t * cols + k]);
             }
-            if (any) {
+        }
+        List<Integer> kept = new ArrayList<>();
+        for (int k = 0; k < cols; k++) {
+            if (any[k]) {
                 kept.add(k);
             } else {
                 String name = table.columns().get(assetCols.get(k));

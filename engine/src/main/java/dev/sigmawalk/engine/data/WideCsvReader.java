@@ -2,9 +2,9 @@ package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.ValueKind;
 import java.nio.file.Path;
+import java.time.DateTimeException;
 import java.time.LocalDate;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -13,13 +13,47 @@ import java.util.Set;
  * Reads a wide CSV (first column {@code date}, then one column per series) into a
  * {@link WideTable}, enforcing Method §1: ISO-8601 dates, strictly increasing with no
  * duplicates; distinct, non-empty column names; numeric cells (empty = missing); with prices,
- * every price strictly positive.
+ * every price strictly positive; no return below -1.
+ *
+ * <p>The file is read once, in large chunks, straight from bytes: a plain data line is cut at
+ * its commas and every number is parsed by {@link DecimalBytes} into one row-major
+ * {@code double[]}, with no string per cell, while {@link ByteChunks} takes the file's SHA-256
+ * on the way. Only the header line, a line holding a quoted cell and a faulty cell go through
+ * text. Accepted as spreadsheets export them: a UTF-8 byte-order mark, LF, CRLF or CR line ends,
+ * blanks around cells, quoted cells; blank lines are skipped but counted, so every line number
+ * is the one a text editor shows.
  */
 final class WideCsvReader {
     private static final String DATE = "date";
     private static final int INITIAL_ROWS = 256;
+    /** {@link #record} results besides a parsed or skipped line. */
+    private static final int MORE = -1;
+    private static final int END = -2;
 
-    private WideCsvReader() {
+    private final Path file;
+    private final ByteChunks in;
+    private final ValueKind kind;
+    private final String ratesColumn;
+    private final DecimalBytes number = new DecimalBytes();
+    private List<String> columns;
+    private boolean[] positive;
+    private RowStore rows;
+    private byte[] b;
+    private int pos;
+    private int limit;
+    private int line = 1;
+    /** Bytes dropped from the front of the buffer so far: file offset = dropped + buffer position. */
+    private long dropped;
+
+    /** A wide file's table and the fingerprint of the bytes it was read from. */
+    record Read(WideTable table, FileFingerprint fingerprint) {
+    }
+
+    private WideCsvReader(Path file, ByteChunks in, ValueKind kind, String ratesColumn) {
+        this.file = file;
+        this.in = in;
+        this.kind = kind;
+        this.ratesColumn = ratesColumn;
     }
 
     /**
@@ -28,41 +62,300 @@ final class WideCsvReader {
      * @param ratesColumn a column holding rates, exempt from the price rule; {@code null} for none
      * @throws InputException naming file, line, column and value of the first problem
      */
-    static WideTable read(Path file, ValueKind kind, String ratesColumn) {
-        try (CsvSource source = CsvSource.open(file)) {
-            List<String> columns = valueColumns(source);
-            int cols = columns.size();
-            Rows rows = new Rows(cols);
-            int ratesAt = columns.indexOf(ratesColumn);
-            String[] cells;
-            while ((cells = source.next()) != null) {
-                int line = source.line();
-                if (cells.length != cols + 1) {
-                    throw new InputException(new InputException.Location(file, line, null),
-                            "the row has " + cells.length + " cells but the header has " + (cols + 1));
-                }
-                LocalDate date = Cells.date(cells[0], file, line, DATE);
-                rows.checkOrder(date, file, line, cells[0]);
-                double[] target = rows.append(date, line);
-                int base = (rows.count - 1) * cols;
-                for (int j = 0; j < cols; j++) {
-                    double v = Cells.number(cells[j + 1], file, line, columns.get(j));
-                    Cells.requirePossible(v, kind == ValueKind.PRICES && j != ratesAt, cells[j + 1], file, line,
-                            columns.get(j));
-                    target[base + j] = v;
-                }
-            }
-            if (rows.count == 0) {
-                throw new InputException(new InputException.Location(file, 1, null),
-                        "the header has no rows below it; expected at least one dated row");
-            }
-            return rows.toTable(file, columns);
+    static Read read(Path file, ValueKind kind, String ratesColumn) {
+        try (ByteChunks in = new ByteChunks(file, "data file")) {
+            WideCsvReader reader = new WideCsvReader(file, in, kind, ratesColumn);
+            WideTable table = reader.readAll();
+            return new Read(table, in.fingerprint());
         }
     }
 
-    private static List<String> valueColumns(CsvSource source) {
-        List<String> header = source.header();
-        Path file = source.file();
+    private WideTable readAll() {
+        refill(0);
+        if (limit == 0) {
+            throw new InputException(new InputException.Location(file, 0, null), "the file is empty; expected a header row");
+        }
+        String problem = TextEncoding.sniff(b, limit);
+        if (problem != null) {
+            throw new InputException(new InputException.Location(file, 1, null), problem);
+        }
+        if (limit >= 3 && (b[0] & 0xFF) == 0xEF && (b[1] & 0xFF) == 0xBB && (b[2] & 0xFF) == 0xBF) {
+            pos = 3;
+        }
+        columns = valueColumns(header());
+        positive = new boolean[columns.size()];
+        for (int j = 0; j < positive.length; j++) {
+            positive[j] = kind == ValueKind.PRICES && !columns.get(j).equals(ratesColumn);
+        }
+        rows = new RowStore(columns.size(), in.size(), dropped + pos, INITIAL_ROWS);
+        while (true) {
+            int r = record();
+            if (r == END) {
+                break;
+            }
+            if (r == MORE) {
+                refill(pos);
+            }
+        }
+        if (rows.count == 0) {
+            throw new InputException(new InputException.Location(file, 1, null),
+                    "the header has no rows below it; expected at least one dated row");
+        }
+        return rows.toTable(file, columns);
+    }
+
+    private void refill(int keepFrom) {
+        int shift = in.refill(keepFrom);
+        dropped += shift;
+        pos -= shift;
+        b = in.bytes();
+        limit = in.limit();
+    }
+
+    /** The first non-blank line's cells. */
+    private List<String> header() {
+        while (true) {
+            int end = lineEnd(pos);
+            if (end < 0) {
+                if (in.atEnd()) {
+                    end = limit;
+                } else {
+                    refill(pos);
+                    continue;
+                }
+            }
+            List<String> cells = CsvLine.split(b, pos, end, file, line);
+            int next = consumeLineEnd(end);
+            if (next == MORE) {
+                refill(pos);
+                continue;
+            }
+            pos = next;
+            if (cells.size() > 1 || !cells.get(0).isEmpty()) {
+                return cells;
+            }
+            if (pos >= limit && in.atEnd()) {
+                throw new InputException(new InputException.Location(file, 0, null), "the file is empty; expected a header row");
+            }
+        }
+    }
+
+    /** The first line break at or after {@code p}, or -1 when the buffer ends first. */
+    private int lineEnd(int p) {
+        while (p < limit && b[p] != '\n' && b[p] != '\r') {
+            p++;
+        }
+        return p < limit ? p : -1;
+    }
+
+    /**
+     * Steps over the line break at {@code p} (LF, CRLF or CR; or the end of the file) and counts
+     * the line; {@link #MORE} when a CR ends the buffer and an LF may follow.
+     */
+    private int consumeLineEnd(int p) {
+        if (p >= limit) {
+            if (!in.atEnd()) {
+                return MORE;
+            }
+            line++;
+            return p;
+        }
+        if (b[p] == '\r') {
+            if (p + 1 >= limit && !in.atEnd()) {
+                return MORE;
+            }
+            line++;
+            return p + 1 < limit && b[p + 1] == '\n' ? p + 2 : p + 1;
+        }
+        line++;
+        return p + 1;
+    }
+
+    /**
+     * Parses the line at {@link #pos}: stores its row, or skips it when blank.
+     *
+     * @return 0, or {@link #MORE} when the buffer ends inside the line, or {@link #END}
+     */
+    private int record() {
+        final byte[] b = this.b;
+        final int limit = this.limit;
+        final boolean last = in.atEnd();
+        int p = pos;
+        if (p >= limit) {
+            return last ? END : MORE;
+        }
+        int s = p;
+        while (p < limit && b[p] != ',' && b[p] != '\n' && b[p] != '\r') {
+            p++;
+        }
+        if (p == limit && !last) {
+            return MORE;
+        }
+        int ds = trimStart(b, s, p);
+        int de = trimEnd(b, ds, p);
+        boolean lineEnds = p == limit || b[p] != ',';
+        if (lineEnds && ds == de) {
+            int next = consumeLineEnd(p);
+            if (next == MORE) {
+                return MORE;
+            }
+            pos = next;
+            return 0;
+        }
+        if (ds < de && b[ds] == '"') {
+            return quotedRecord();
+        }
+        LocalDate date = date(b, ds, de);
+        if (!rows.isAfterLast(date)) {
+            rows.requireAfterLast(date, file, line, CellText.decode(b, ds, de, file, line));
+        }
+        int cols = columns.size();
+        double[] target = rows.ensureRoom();
+        int base = rows.count * cols;
+        for (int j = 0; j < cols; j++) {
+            if (p == limit || b[p] != ',') {
+                return wrongWidth(j + 1);
+            }
+            p++;
+            while (p < limit && (b[p] == ' ' || b[p] == '\t')) {
+                p++;
+            }
+            if (p < limit && b[p] != ',' && b[p] != '\n' && b[p] != '\r' && b[p] != '"' && number.scan(b, p, limit)) {
+                int q = number.end;
+                while (q < limit && (b[q] == ' ' || b[q] == '\t')) {
+                    q++;
+                }
+                if (q == limit && !last) {
+                    return MORE;
+                }
+                if (q == limit || b[q] == ',' || b[q] == '\n' || b[q] == '\r') {
+                    double v = number.value;
+                    if (positive[j] ? !(v > 0) : v < -1) {
+                        Cells.requirePossible(v, positive[j], CellText.decode(b, p, number.end, file, line), file, line,
+                                columns.get(j));
+                    }
+                    target[base + j] = v;
+                    p = q;
+                    continue;
+                }
+            }
+            // Empty, quoted or unusual cells: find the cell's end and read it as text.
+            s = p;
+            while (p < limit && b[p] != ',' && b[p] != '\n' && b[p] != '\r') {
+                p++;
+            }
+            if (p == limit && !last) {
+                return MORE;
+            }
+            int ve = trimEnd(b, s, p);
+            if (s < ve && b[s] == '"') {
+                return quotedRecord();
+            }
+            double v = DecimalBytes.parse(b, s, ve, file, line, columns.get(j));
+            if (positive[j] ? !(v > 0) && v == v : v < -1) {
+                Cells.requirePossible(v, positive[j], CellText.decode(b, s, ve, file, line), file, line, columns.get(j));
+            }
+            target[base + j] = v;
+        }
+        if (p < limit && b[p] == ',') {
+            return wrongWidth(cols + 1);
+        }
+        int next = consumeLineEnd(p);
+        if (next == MORE) {
+            return MORE;
+        }
+        rows.commit(date, line - 1, dropped + next);
+        pos = next;
+        return 0;
+    }
+
+    private LocalDate date(byte[] b, int s, int e) {
+        if (e - s == 10 && b[s + 4] == '-' && b[s + 7] == '-') {
+            int y = digits(b, s, 4);
+            int m = digits(b, s + 5, 2);
+            int d = digits(b, s + 8, 2);
+            if (y >= 0 && m >= 0 && d >= 0) {
+                try {
+                    return LocalDate.of(y, m, d);
+                } catch (DateTimeException e2) {
+                    // Falls through to the text path, which words the message.
+                }
+            }
+        }
+        return Cells.date(CellText.decode(b, s, e, file, line), file, line, DATE);
+    }
+
+    /** The value of {@code n} ASCII digits at {@code s}, or -1 when one is not a digit. */
+    private static int digits(byte[] b, int s, int n) {
+        int v = 0;
+        for (int i = s; i < s + n; i++) {
+            int c = b[i] - '0';
+            if (c < 0 || c > 9) {
+                return -1;
+            }
+            v = v * 10 + c;
+        }
+        return v;
+    }
+
+    private static int trimStart(byte[] b, int s, int e) {
+        while (s < e && (b[s] == ' ' || b[s] == '\t')) {
+            s++;
+        }
+        return s;
+    }
+
+    private static int trimEnd(byte[] b, int s, int e) {
+        while (e > s && (b[e - 1] == ' ' || b[e - 1] == '\t')) {
+            e--;
+        }
+        return e;
+    }
+
+    /** The row's cells counted to its end, for the message about a row of the wrong width. */
+    private int wrongWidth(int seen) {
+        int p = pos;
+        int end = lineEnd(p);
+        if (end < 0 && !in.atEnd()) {
+            return MORE;
+        }
+        List<String> cells = CsvLine.split(b, p, end < 0 ? limit : end, file, line);
+        throw new InputException(new InputException.Location(file, line, null),
+                "the row has " + Math.max(seen, cells.size()) + " cells but the header has " + (columns.size() + 1));
+    }
+
+    /** A line with a quoted cell, read through text like the header. */
+    private int quotedRecord() {
+        int end = lineEnd(pos);
+        if (end < 0 && !in.atEnd()) {
+            return MORE;
+        }
+        int stop = end < 0 ? limit : end;
+        List<String> cells = CsvLine.split(b, pos, stop, file, line);
+        int cols = columns.size();
+        if (cells.size() != cols + 1) {
+            throw new InputException(new InputException.Location(file, line, null),
+                    "the row has " + cells.size() + " cells but the header has " + (cols + 1));
+        }
+        LocalDate date = Cells.date(cells.get(0), file, line, DATE);
+        rows.requireAfterLast(date, file, line, cells.get(0));
+        double[] target = rows.ensureRoom();
+        int base = rows.count * cols;
+        for (int j = 0; j < cols; j++) {
+            double v = Cells.number(cells.get(j + 1), file, line, columns.get(j));
+            Cells.requirePossible(v, positive[j], cells.get(j + 1), file, line, columns.get(j));
+            target[base + j] = v;
+        }
+        int next = consumeLineEnd(stop);
+        if (next == MORE) {
+            return MORE;
+        }
+        rows.commit(date, line - 1, dropped + next);
+        pos = next;
+        return 0;
+    }
+
+    private List<String> valueColumns(List<String> header) {
         if (!DATE.equals(header.get(0))) {
             throw new InputException(new InputException.Location(file, 1, header.get(0)),
                     "the first column is '" + header.get(0) + "'; expected 'date'");
@@ -72,7 +365,7 @@ final class WideCsvReader {
                     "the header names no column after 'date'");
         }
         Set<String> seen = new HashSet<>();
-        List<String> columns = new ArrayList<>(header.size() - 1);
+        List<String> names = new ArrayList<>(header.size() - 1);
         for (int j = 1; j < header.size(); j++) {
             String name = header.get(j);
             if (name.isEmpty()) {
@@ -84,60 +377,8 @@ final class WideCsvReader {
                 throw new InputException(new InputException.Location(file, 1, name),
                         "'" + name + "' names two columns; asset names must be distinct");
             }
-            columns.add(name);
+            names.add(name);
         }
-        return columns;
-    }
-
-    /** Growing row-major storage; doubles its capacity so appends cost O(1) amortised. */
-    private static final class Rows {
-        private final int cols;
-        private LocalDate[] dates = new LocalDate[INITIAL_ROWS];
-        private int[] lines = new int[INITIAL_ROWS];
-        private double[] values;
-        private int count;
-        private int lastLine;
-
-        Rows(int cols) {
-            this.cols = cols;
-            this.values = new double[INITIAL_ROWS * cols];
-        }
-
-        void checkOrder(LocalDate date, Path file, int line, String cell) {
-            if (count == 0) {
-                return;
-            }
-            LocalDate previous = dates[count - 1];
-            if (date.equals(previous)) {
-                throw new InputException(new InputException.Location(file, line, DATE),
-                        "'" + cell + "' repeats the date on line " + lastLine
-                                + "; dates must be strictly increasing with no duplicates");
-            }
-            if (date.isBefore(previous)) {
-                throw new InputException(new InputException.Location(file, line, DATE),
-                        "'" + cell + "' comes before " + previous + " on line " + lastLine
-                                + "; dates must be strictly increasing");
-            }
-        }
-
-        /** Records the row's date and line and returns the array to write its values into. */
-        double[] append(LocalDate date, int line) {
-            if (count == dates.length) {
-                int capacity = dates.length * 2;
-                dates = Arrays.copyOf(dates, capacity);
-                lines = Arrays.copyOf(lines, capacity);
-                values = Arrays.copyOf(values, capacity * cols);
-            }
-            dates[count] = date;
-            lines[count] = line;
-            lastLine = line;
-            count++;
-            return values;
-        }
-
-        WideTable toTable(Path file, List<String> columns) {
-            return new WideTable(file, columns, Arrays.copyOf(dates, count), Arrays.copyOf(lines, count),
-                    Arrays.copyOf(values, count * cols));
-        }
+        return names;
     }
 }

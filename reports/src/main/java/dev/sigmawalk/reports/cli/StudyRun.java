@@ -2,15 +2,10 @@ package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
-import dev.sigmawalk.engine.compare.Comparisons;
 import dev.sigmawalk.engine.compare.EvidenceNotes;
-import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
-import dev.sigmawalk.engine.evidence.DifferenceTests;
-import dev.sigmawalk.engine.evidence.HacKernel;
-import dev.sigmawalk.engine.measures.PerformanceMeasures;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
 import dev.sigmawalk.engine.run.PathResult;
@@ -20,6 +15,7 @@ import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.reports.api.Runs;
 import dev.sigmawalk.reports.files.EvidenceFiles;
 import dev.sigmawalk.reports.files.FactorDiagnosticsFile;
 import dev.sigmawalk.reports.files.Manifest;
@@ -43,9 +39,6 @@ import java.util.Optional;
  * staging folder and move it into place only when all of it succeeded.
  */
 final class StudyRun {
-    /** Residual pairs kept per window for the report. */
-    private static final int LARGEST_PAIRS = 10;
-
     private StudyRun() {
     }
 
@@ -75,15 +68,13 @@ final class StudyRun {
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
             RunResult<WindowFindings> found = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
-                    WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS),
+                    WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), Runs.LARGEST_PAIRS),
                             FactorDiagnosticsProbe.of(study, data))).run(options.threads(), progress);
             RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(found);
             Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(found);
             long walked = System.nanoTime();
-            List<Summary> summaries = summaries(run);
-            List<Comparison> comparisons = Comparisons.of(run, Baselines.of(study.strategies()),
-                    study.walkForward().windows(), new DifferenceTests(HacKernel.PARZEN, study.evidence()),
-                    ScannedPair.lowestVolatility(run));
+            List<Summary> summaries = Runs.summaries(run);
+            List<Comparison> comparisons = Runs.comparisons(study, run);
             List<String> warnings = warnings(data, preview, run);
             Path dir = folder.staging();
             ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
@@ -115,16 +106,6 @@ final class StudyRun {
         List<Path> out = new ArrayList<>();
         out.add(study.file());
         data.fingerprints().forEach(f -> out.add(f.path()));
-        return out;
-    }
-
-    private static List<Summary> summaries(RunResult<?> run) {
-        PerformanceMeasures measures = new PerformanceMeasures(run.riskFree(), run.market(), run.periodsPerYear());
-        List<Summary> out = new ArrayList<>();
-        for (PathResult p : run.paths()) {
-            out.add(measures.of(p));
-        }
-        out.add(measures.market());
         return out;
     }
 

@@ -41,9 +41,9 @@ final class AnswerMatrix {
     List<ReportView.Matrix> both() {
         return List.of(
                 matrix("matrix-volatility", "Realised volatility (% a year); darker is lower", Summary::volatility,
-                        Formats::percent, true, Comparison::variance, c -> c.holmVariance()),
+                        Formats::percent, true, Comparison::variance, Comparison::familyVariance),
                 matrix("matrix-sharpe", "Sharpe ratio (annualised); darker is higher", Summary::sharpe,
-                        Formats::ratio, false, Comparison::sharpe, c -> c.holmSharpe()));
+                        Formats::ratio, false, Comparison::sharpe, Comparison::familySharpe));
     }
 
     private ReportView.Matrix matrix(String id, String title, ToDoubleFunction<Summary> measure,

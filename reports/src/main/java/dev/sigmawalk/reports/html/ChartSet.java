@@ -56,7 +56,7 @@ final class ChartSet {
             lines.add(line(path.strategy(), rowX(), Growth.ofOne(path.net())));
         }
         ChartLine market = line(Families.MARKET, rowX(), Growth.ofOne(data.run().market()));
-        return panels("growth-w" + window, "Growth of 1 invested, net of costs (" + window + "-period window)",
+        return panels("growth-w" + window, "Growth of 1 invested, net, log scale (" + window + "-period window)",
                 lines, Optional.of(market), false, true, (title, panel) -> LineCharts.overTimeLog(title,
                         "Value of 1 invested (log scale)", panel),
                 "Each line starts at 1 just before the first out-of-sample period and compounds net returns; "

@@ -2,8 +2,10 @@ package dev.sigmawalk.reports.html;
 
 import dev.sigmawalk.engine.study.Bounds;
 import dev.sigmawalk.engine.study.ExpectedReturnKind;
+import dev.sigmawalk.engine.study.FactorSource;
 import dev.sigmawalk.engine.study.Objective;
 import dev.sigmawalk.engine.study.RiskKind;
+import dev.sigmawalk.engine.study.RiskSettings;
 import dev.sigmawalk.engine.study.ShrinkageTarget;
 import dev.sigmawalk.engine.study.StrategySpec;
 import java.util.List;
@@ -35,22 +37,36 @@ final class StrategySettings {
     }
 
     static String risk(StrategySpec s) {
-        String model = riskModel(s.risk());
+        String model = riskModel(s);
         return s.objective() == Objective.EQUAL_WEIGHT
                 ? model + " (forecasts the risk only; the weights do not depend on it)" : model;
     }
 
-    /** The covariance model in words; a model this table has no words for is shown as spelled in the study. */
-    static String riskModel(RiskKind risk) {
-        switch (risk.spelling()) {
-            case "sample":
+    /**
+     * The covariance model in words, with its own setting; a model this table has no words for
+     * is shown as the study spells it.
+     */
+    static String riskModel(StrategySpec s) {
+        RiskSettings settings = s.riskSettings();
+        switch (s.risk()) {
+            case SAMPLE:
                 return "Sample covariance of the window";
-            case "single-index":
+            case SINGLE_INDEX:
                 return "Single-index (market) model";
-            case "shrinkage":
+            case SHRINKAGE:
                 return "Ledoit-Wolf shrinkage of the sample covariance";
+            case MULTI_INDEX:
+                return "Multi-index model: the market plus " + settings.factors().map(f -> f instanceof FactorSource.Sectors
+                        ? "one index per sector" : "the factors of " + f.spelling()).orElse("its factors");
+            case PRINCIPAL_COMPONENTS:
+                return "Principal-components model with " + settings.components().orElse(0) + " components";
+            case EWMA:
+                return "Exponentially weighted covariance, half-life "
+                        + plain(settings.halfLife().orElse(Double.NaN)) + " periods";
+            case NONLINEAR_SHRINKAGE:
+                return "Nonlinear shrinkage of the sample eigenvalues (Ledoit & Wolf)";
             default:
-                return "Risk model " + risk.spelling();
+                return "Risk model " + settings.modelName(s.risk());
         }
     }
 

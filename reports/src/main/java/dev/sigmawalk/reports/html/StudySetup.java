@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.compare.BaselineChoice;
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.study.EvidenceSpec;
@@ -9,6 +10,7 @@ import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.WalkForwardSpec;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
@@ -23,21 +25,18 @@ final class StudySetup {
 
     static ReportView.Setup of(ReportData data) {
         Study study = data.study();
-        Map<String, String> baselines = Baselines.of(study.strategies());
+        Map<String, BaselineChoice> baselines = new HashMap<>();
+        Baselines.choices(study.strategies()).forEach(c -> baselines.put(c.strategy(), c));
         List<ReportView.TextRow> rows = new ArrayList<>();
         for (StrategySpec s : study.strategies()) {
-            rows.add(new ReportView.TextRow(StrategySettings.row(s, baseline(s, baselines))));
+            rows.add(new ReportView.TextRow(StrategySettings.row(s, baseline(baselines.get(s.name())))));
         }
         return new ReportView.Setup(StrategySettings.HEADERS, rows, walkForward(data));
     }
 
-    private static String baseline(StrategySpec s, Map<String, String> baselines) {
-        String base = baselines.get(s.name());
-        if (base != null) {
-            return base + (s.baseline().isPresent() ? " (named in the study)"
-                    : " (the first sample-covariance strategy with the same rule and bounds)");
-        }
-        return "None: no sample-covariance strategy with the same rule and bounds to compare with";
+    /** "plain-sample (how it was chosen)", or "None: why". */
+    static String baseline(BaselineChoice c) {
+        return c.baseline().map(b -> b + " (" + c.reason() + ")").orElse("None: " + c.reason());
     }
 
     static List<ReportView.Fact> walkForward(ReportData data) {

@@ -1,8 +1,8 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.compare.BaselineChoice;
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
-import dev.sigmawalk.engine.study.StrategySpec;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -44,12 +44,10 @@ final class Untested {
     static List<Missing> withoutBaseline(ReportData data) {
         Map<String, String> baselines = Baselines.of(data.study().strategies());
         List<Missing> out = new ArrayList<>();
-        for (StrategySpec s : data.study().strategies()) {
-            if (!baselines.containsKey(s.name()) && !isTested(data.evidence().comparisons(), s.name())) {
-                out.add(new Missing(s.name(), "not tested, because there is no sample-covariance strategy with the "
-                        + "same rule and bounds to compare it with" + (isBaseline(baselines, s.name())
-                        ? " (it is itself the baseline of " + Words.list(baselineOf(baselines, s.name())) + ")" : "")
-                        + "."));
+        for (BaselineChoice c : Baselines.choices(data.study().strategies())) {
+            if (!c.compared() && !isTested(data.evidence().comparisons(), c.strategy())) {
+                out.add(new Missing(c.strategy(), "not tested: " + c.reason() + (isBaseline(baselines, c.strategy())
+                        ? " (baseline of " + Words.list(baselineOf(baselines, c.strategy())) + ")" : "") + "."));
             }
         }
         return out;

@@ -55,6 +55,9 @@ public final class ReportPdf {
         // The renderer logs every font it loads and every style it skips on standard error; a
         // run's standard error is kept for the tool's own progress and warnings.
         XRLog.setLoggingEnabled(false);
+        // PDFBox logs through Commons Logging, which would hand over to an SLF4J without a
+        // backend and print a notice about it; the tool logs nothing of the PDF library's.
+        System.getProperties().putIfAbsent("org.apache.commons.logging.Log", "org.apache.commons.logging.impl.NoOpLog");
         Document doc = Jsoup.parse(html.toFile(), StandardCharsets.UTF_8.name());
         prepare(doc);
         try (OutputStream out = Files.newOutputStream(pdf)) {

@@ -1,0 +1,66 @@
+package dev.sigmawalk.reports.api;
+
+import dev.sigmawalk.engine.compare.Baselines;
+import dev.sigmawalk.engine.compare.Comparison;
+import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.ScannedPair;
+import dev.sigmawalk.engine.compare.WindowEvidence;
+import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
+import dev.sigmawalk.engine.data.StudyData;
+import dev.sigmawalk.engine.evidence.DifferenceTests;
+import dev.sigmawalk.engine.evidence.HacKernel;
+import dev.sigmawalk.engine.measures.PerformanceMeasures;
+import dev.sigmawalk.engine.measures.Summary;
+import dev.sigmawalk.engine.model.StrategyDefinition;
+import dev.sigmawalk.engine.run.PathResult;
+import dev.sigmawalk.engine.run.ProgressListener;
+import dev.sigmawalk.engine.run.RunResult;
+import dev.sigmawalk.engine.run.WalkForward;
+import dev.sigmawalk.strategies.StrategyCatalog;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The steps of one run that produce results, shared by the command line (which then writes the
+ * files) and the library API (which hands the results to the caller): walk forward, measure,
+ * compare every strategy with its baseline.
+ */
+public final class Runs {
+    /** Residual pairs kept per window for the report. */
+    public static final int LARGEST_PAIRS = 10;
+
+    private Runs() {
+    }
+
+    /** Walks forward every strategy of the study with every window (Method §2). */
+    public static RunResult<WindowEvidence> walk(dev.sigmawalk.engine.study.Study study, StudyData data, int threads,
+                                                 ProgressListener progress) {
+        return walk(study, data, StrategyCatalog.build(study, data), threads, progress);
+    }
+
+    /** The same, with the study's strategies already built (the command line builds them first to fail early). */
+    public static RunResult<WindowEvidence> walk(dev.sigmawalk.engine.study.Study study, StudyData data,
+                                                 List<StrategyDefinition> strategies, int threads,
+                                                 ProgressListener progress) {
+        return new WalkForward<>(data.panel(), data.schedule(), strategies, study.walkForward().windows(),
+                study.walkForward().costBps(), new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS))
+                .run(threads, progress);
+    }
+
+    /** One summary per path in run order, then the market's (Method §7). */
+    public static List<Summary> summaries(RunResult<?> run) {
+        PerformanceMeasures measures = new PerformanceMeasures(run.riskFree(), run.market(), run.periodsPerYear());
+        List<Summary> out = new ArrayList<>();
+        for (PathResult p : run.paths()) {
+            out.add(measures.of(p));
+        }
+        out.add(measures.market());
+        return out;
+    }
+
+    /** Every strategy against its baseline, for every window (Method §9). */
+    public static List<Comparison> comparisons(dev.sigmawalk.engine.study.Study study, RunResult<?> run) {
+        return Comparisons.of(run, Baselines.of(study.strategies()), study.walkForward().windows(),
+                new DifferenceTests(HacKernel.PARZEN, study.evidence()), ScannedPair.lowestVolatility(run));
+    }
+}
