@@ -3,6 +3,7 @@ package dev.sigmawalk.engine.compare;
 import dev.sigmawalk.engine.evidence.ResidualDiagnostics;
 import dev.sigmawalk.engine.evidence.ResidualPair;
 import dev.sigmawalk.engine.evidence.SectorCoMovement;
+import dev.sigmawalk.engine.evidence.SingleIndexEstimates;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Objects;
@@ -19,15 +20,25 @@ import java.util.Optional;
  * @param sectors residual correlation within and across sectors, when sectors are known
  * @param notes what the diagnostics left out of this window and why (a constant market, an asset
  *              that moves exactly with the market); empty for an ordinary window
+ * @param estimates every usable asset's α, β and residual variance (Method §12); empty where the
+ *        market did not vary
  */
 public record WindowEvidence(LocalDate date, int window, Optional<ResidualDiagnostics> diagnostics,
-                             List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors, List<String> notes) {
+                             List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors, List<String> notes,
+                             Optional<SingleIndexEstimates> estimates) {
     public WindowEvidence {
         Objects.requireNonNull(date, "date");
         Objects.requireNonNull(diagnostics, "diagnostics");
         largestPairs = List.copyOf(largestPairs);
         Objects.requireNonNull(sectors, "sectors");
         notes = List.copyOf(notes);
+        Objects.requireNonNull(estimates, "estimates");
+    }
+
+    /** Evidence without written estimates. */
+    public WindowEvidence(LocalDate date, int window, Optional<ResidualDiagnostics> diagnostics,
+                          List<ResidualPair> largestPairs, Optional<SectorCoMovement> sectors, List<String> notes) {
+        this(date, window, diagnostics, largestPairs, sectors, notes, Optional.empty());
     }
 
     /** Evidence of an ordinary window, with nothing left out. */

@@ -1,6 +1,7 @@
 package dev.sigmawalk.engine.compare;
 
 import dev.sigmawalk.engine.evidence.ResidualCorrelations;
+import dev.sigmawalk.engine.evidence.SingleIndexEstimates;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.run.WindowProbe;
 import java.util.ArrayList;
@@ -39,10 +40,11 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
      */
     @Override
     public WindowEvidence probe(EstimationWindow window) {
+        Optional<SingleIndexEstimates> estimates = estimates(window);
         ResidualGuard.Usable usable = ResidualGuard.of(window);
         if (usable.moments().isEmpty()) {
             return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty(),
-                    usable.notes());
+                    usable.notes(), estimates);
         }
         ResidualCorrelations rho;
         try {
@@ -51,11 +53,27 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
             List<String> notes = new ArrayList<>(usable.notes());
             notes.add("residual diagnostics not computed: " + e.getMessage());
             return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty(),
-                    notes);
+                    notes, estimates);
         }
         return new WindowEvidence(window.date(), window.length(), Optional.of(rho.diagnostics()),
                 rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectorsOf(window))),
-                usable.notes());
+                usable.notes(), estimates);
+    }
+
+    /**
+     * α, β and d of every eligible asset (an asset that moves exactly with the market has d = 0,
+     * still an estimate); empty when the window has no asset, fewer than two rows or a market
+     * that does not vary (β undefined).
+     */
+    private static Optional<SingleIndexEstimates> estimates(EstimationWindow window) {
+        if (window.assetCount() < 1 || window.length() < 2) {
+            return Optional.empty();
+        }
+        double smm = window.moments().marketVariance();
+        if (!(smm > 0) || !Double.isFinite(smm)) {
+            return Optional.empty();
+        }
+        return Optional.of(SingleIndexEstimates.of(window.moments(), window.assets()));
     }
 
     /** Every asset of the window with its sector; assets the sectors file does not list form their own group. */

@@ -50,30 +50,13 @@ class BiasStatisticTest {
         double[] sigma = new double[periods];
         java.util.Arrays.fill(sigma, 1.0);
         for (int k = 0; k < draws; k++) {
-            double[] r = new double[periods];
-            for (int t = 0; t < periods; t++) {
-                r[t] = studentFive(random) / Math.sqrt(5.0 / 3.0);
-            }
+            double[] r = NullModel.STUDENT_T5.series(random, periods);
             BiasStatistic b = BiasStatistic.of(r, new double[periods], sigma);
             normalInside += b.withinBand() ? 1 : 0;
             robustInside += b.withinRobustBand() ? 1 : 0;
         }
         assertTrue(normalInside < 0.84 * draws, "normal band holds " + normalInside + " of " + draws);
         assertTrue(robustInside > 0.87 * draws, "robust band holds " + robustInside + " of " + draws);
-    }
-
-    /** t₅ = Z / √(χ²₅ / 5), from Box-Muller normals. */
-    private static double studentFive(java.util.SplittableRandom random) {
-        double chi = 0;
-        for (int i = 0; i < 5; i++) {
-            double g = normal(random);
-            chi += g * g;
-        }
-        return normal(random) / Math.sqrt(chi / 5);
-    }
-
-    private static double normal(java.util.SplittableRandom random) {
-        return Math.sqrt(-2 * Math.log(1 - random.nextDouble())) * Math.cos(2 * Math.PI * random.nextDouble());
     }
 
     /**

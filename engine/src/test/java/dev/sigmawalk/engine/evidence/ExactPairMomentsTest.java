@@ -64,8 +64,8 @@ class ExactPairMomentsTest {
         double sum = 0;
         double squares = 0;
         for (int k = 0; k < draws; k++) {
-            double[] ei = qi.residual(gaussian(random));
-            double[] ej = qj.residual(gaussian(random));
+            double[] ei = qi.residual(NullModel.NORMAL.series(random, LENGTH));
+            double[] ej = qj.residual(NullModel.NORMAL.series(random, LENGTH));
             double z = m.standardise(correlation(ei, ej));
             sum += z;
             squares += z * z;
@@ -74,15 +74,6 @@ class ExactPairMomentsTest {
         double variance = squares / draws - mean * mean;
         assertEquals(0.0, mean, 0.03, "mean of the standardised indicator");
         assertEquals(1.0, variance, 0.12, "variance of the standardised indicator");
-    }
-
-    private static double[] gaussian(java.util.SplittableRandom random) {
-        double[] x = new double[LENGTH];
-        for (int t = 0; t < LENGTH; t++) {
-            // Box-Muller from two uniforms: SplittableRandom has no nextGaussian in Java 17.
-            x[t] = Math.sqrt(-2 * Math.log(1 - random.nextDouble())) * Math.cos(2 * Math.PI * random.nextDouble());
-        }
-        return x;
     }
 
     /** ρ̂ of two least-squares residual vectors (their correlation about zero, as in the paper). */

@@ -84,6 +84,7 @@ final class StudyRun {
             EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
             FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
                     study.walkForward().windows());
+            EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
             EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
             long tested = System.nanoTime();
             ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics);

@@ -6,11 +6,12 @@ import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.evidence.DifferenceTest;
 import dev.sigmawalk.engine.evidence.JobsonKorkieTest;
 import dev.sigmawalk.engine.evidence.ResidualDiagnostics;
+import dev.sigmawalk.engine.evidence.SingleIndexEstimates;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
-/** Writes {@code diagnostics.csv} and {@code tests.csv} (CONTRACT.md "Output folder"). */
+/** Writes {@code diagnostics.csv}, {@code estimates.csv} and {@code tests.csv} (the README's output files). */
 public final class EvidenceFiles {
     private EvidenceFiles() {
     }
@@ -35,6 +36,30 @@ public final class EvidenceFiles {
                         csv.empty().empty().empty().empty().empty().empty().empty().empty();
                     }
                     csv.end();
+                }
+            }
+        }
+    }
+
+    /**
+     * {@code estimates.csv}: date,window,asset,alpha,beta,residual_variance, every eligible asset of
+     * every rebalance and window (windows in study order, then dates, then the window's asset
+     * order); α and the residual variance per period (Method §12). A rebalance whose market did not
+     * vary has no rows.
+     */
+    public static void writeEstimates(Path file, Map<Integer, List<WindowEvidence>> byWindow, List<Integer> windows) {
+        try (CsvWriter csv = new CsvWriter(file, "date", "window", "asset", "alpha", "beta", "residual_variance")) {
+            for (int w : windows) {
+                for (WindowEvidence e : byWindow.getOrDefault(w, List.of())) {
+                    if (e.estimates().isEmpty()) {
+                        continue;
+                    }
+                    SingleIndexEstimates est = e.estimates().get();
+                    String date = e.date().toString();
+                    for (int i = 0; i < est.assets().size(); i++) {
+                        csv.text(date).integer(w).text(est.assets().get(i)).number(est.alpha()[i]).number(est.beta()[i])
+                                .number(est.residualVariance()[i]).end();
+                    }
                 }
             }
         }

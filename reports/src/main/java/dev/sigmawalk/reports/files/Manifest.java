@@ -96,6 +96,7 @@ public final class Manifest {
         n.put("title", s.title());
         ObjectNode data = n.putObject("data");
         data.put("assets", s.data().assets().toString());
+        data.put("layout", s.data().layout().spelling());
         data.put("values", s.data().values().spelling());
         data.put("market", describe(s.data().market()));
         data.put("riskfree", describe(s.data().riskFree()));

@@ -137,6 +137,53 @@ class IntakeCommandTest {
         for (String f : List.of("weights.csv", "returns.csv", "rebalances.csv", "summary.csv")) {
             assertArrayEquals(Files.readAllBytes(out.resolve("wide").resolve(f)), Files.readAllBytes(out.resolve("long").resolve(f)), f);
         }
+        assertTrue(Pattern.compile("\"layout\"\\s*:\\s*\"long\"").matcher(Files.readString(out.resolve("long")
+                .resolve("manifest.json"))).find(), "the manifest records the layout as read");
+    }
+
+    @Test
+    void percentReturns_areExit2WithTheHint() throws IOException {
+        StringBuilder percent = new StringBuilder();
+        for (String line : Files.readAllLines(data.resolve("assets-sorted.csv"))) {
+            if (percent.length() == 0) {
+                percent.append(line).append('\n');
+                continue;
+            }
+            String[] cells = line.split(",", -1);
+            percent.append(cells[0]);
+            for (int j = 1; j < cells.length; j++) {
+                percent.append(',').append(cells[j].isEmpty() ? "" : String.valueOf(Double.parseDouble(cells[j]) * 100));
+            }
+            percent.append('\n');
+        }
+        Files.writeString(data.resolve("assets-percent.csv"), percent);
+        Path study = studyWith("percent.yaml", "assets: assets-sorted.csv", "assets: assets-percent.csv");
+        Result r = sigmawalk("check", study.toString());
+        assertEquals(2, r.code(), r.err());
+        assertTrue(r.err().contains("assets-percent.csv line "), r.err());
+        assertTrue(r.err().contains("divide every value by 100"), r.err());
+    }
+
+    @Test
+    void folderGivenAsTheAssetsFile_isExit2NamingTheFolder() throws IOException {
+        Files.createDirectories(data.resolve("exports"));
+        Path study = studyWith("folder.yaml", "assets: assets-sorted.csv", "assets: exports/");
+        Result r = sigmawalk("check", study.toString());
+        assertEquals(2, r.code(), r.err());
+        assertTrue(r.err().contains("exports: is a folder"), r.err());
+    }
+
+    @Test
+    void alphaForAnUnknownAsset_isAWarningThatCheckPrints() throws IOException {
+        String first = Files.readAllLines(data.resolve("assets-sorted.csv")).get(0).split(",")[1];
+        Files.writeString(data.resolve("alphas-ghost.csv"), "date,asset,alpha\n2015-01-30," + first + ",0.001\n"
+                + "2015-01-30,NOBODY,0.002\n");
+        Path study = studyWith("ghost.yaml", "  - name: equal\n    objective: equal-weight",
+                "  - name: tilted\n    risk: single-index\n    objective: max-sharpe\n    alphas: alphas-ghost.csv");
+        Result r = sigmawalk("check", study.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue((r.out() + r.err()).contains("alphas-ghost.csv gives alphas for 1 asset not in the universe, which are"
+                + " ignored: NOBODY"), r.out() + r.err());
     }
 
     private static final Pattern NUMBER = Pattern.compile("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?");

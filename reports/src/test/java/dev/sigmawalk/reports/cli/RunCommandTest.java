@@ -105,7 +105,10 @@ class RunCommandTest {
                 "summary.csv", "strategy,window,periods,mean_return,volatility,sharpe,cagr,max_drawdown,mean_turnover,"
                         + "tracking_error,information_ratio,forecast_volatility,bias",
                 "diagnostics.csv", "date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,cd_pvalue,"
-                        + "lm_adj_stat,lm_adj_pvalue");
+                        + "lm_adj_stat,lm_adj_pvalue",
+                "estimates.csv", "date,window,asset,alpha,beta,residual_variance",
+                "tests.csv", "strategy,baseline,window,measure,estimate,baseline_estimate,difference,standard_error,"
+                        + "statistic,hac_pvalue,bootstrap_pvalue,holm_pvalue,method,jk_pvalue,family_pvalue");
         for (Map.Entry<String, String> h : headers.entrySet()) {
             assertEquals(h.getValue(), Files.readAllLines(res.resolve(h.getKey())).get(0), h.getKey());
         }
