@@ -67,4 +67,39 @@ class RomanoWolfStepdownTest {
             }
         }
     }
+
+    /**
+     * Units never move a family p-value (Method §9): the same family with every return times 100
+     * gives the same block lengths and exactly the same adjusted p-values (the same resamples, and
+     * studentised statistics that do not depend on units).
+     */
+    @Test
+    void returnsInPercent_leaveTheFamilyPValuesUnchanged() {
+        EvidenceSpec spec = new EvidenceSpec(300, 13L, 0);
+        DifferenceTests tests = new DifferenceTests(HacKernel.PARZEN, spec);
+        List<FamilyContrast> decimal = new ArrayList<>();
+        List<FamilyContrast> percent = new ArrayList<>();
+        for (int k = 0; k < 3; k++) {
+            SimulatedPair p = SimulatedPair.normal(60 + k, 140, 0.01 * k, 0.0, 0.04, 0.05, 0.6, 0.3);
+            double[] a = scaled(p.first());
+            double[] b = scaled(p.second());
+            for (DifferenceMeasure m : DifferenceMeasure.values()) {
+                DifferenceTest d = tests.compare(m, p.first(), p.second());
+                DifferenceTest c = tests.compare(m, a, b);
+                assertEquals(d.blockLength(), c.blockLength(), m.label() + " block");
+                decimal.add(new FamilyContrast(m, p.first(), p.second(), d));
+                percent.add(new FamilyContrast(m, a, b, c));
+            }
+        }
+        assertArrayEquals(RomanoWolfStepdown.adjust(decimal, spec.resamples(), spec.seed()),
+                RomanoWolfStepdown.adjust(percent, spec.resamples(), spec.seed()), 0.0);
+    }
+
+    private static double[] scaled(double[] x) {
+        double[] out = new double[x.length];
+        for (int t = 0; t < x.length; t++) {
+            out[t] = 100 * x[t];
+        }
+        return out;
+    }
 }

@@ -5,6 +5,7 @@ import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.data.AssetCoverage;
 import dev.sigmawalk.engine.data.ReturnPanel;
 import dev.sigmawalk.engine.data.StudyData;
+import dev.sigmawalk.engine.study.AppliedDefaults;
 import dev.sigmawalk.engine.study.Bounds;
 import dev.sigmawalk.engine.study.DataSpec;
 import dev.sigmawalk.engine.study.Objective;
@@ -13,7 +14,6 @@ import dev.sigmawalk.engine.study.RiskKind;
 import dev.sigmawalk.engine.study.SeriesSource;
 import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
-import dev.sigmawalk.engine.study.StudyDefaults;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.engine.timeline.Schedule;
 import java.io.PrintWriter;
@@ -56,7 +56,8 @@ public final class CheckCommand implements Callable<Integer> {
         if (!preview.feasibility().isEmpty()) {
             printList(out, "Bounds on the eligible assets at every rebalance", preview.feasibility());
         }
-        printList(out, "Defaults (applied where the study is silent)", StudyDefaults.describe());
+        List<String> applied = AppliedDefaults.of(study);
+        printList(out, "Defaults applied (keys this study leaves out)", applied.isEmpty() ? List.of("none") : applied);
         List<String> warnings = new ArrayList<>(data.warnings());
         warnings.addAll(preview.warnings());
         printList(out, "Warnings", warnings.isEmpty() ? List.of("none") : warnings);

@@ -26,7 +26,7 @@ public final class DemoCommand implements Callable<Integer> {
     @Option(names = "--force", description = "Write into a non-empty folder sigmawalk did not write.")
     boolean force;
 
-    @Option(names = "--quiet", description = "No progress line on standard error.")
+    @Option(names = "--quiet", description = "No progress line and no warnings on standard error (warnings stay in manifest.json and the report).")
     boolean quiet;
 
     @Option(names = "--daily", description = "Run the daily study instead of the monthly one.")
@@ -43,17 +43,26 @@ public final class DemoCommand implements Callable<Integer> {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create a temporary folder for the sample data", e);
         }
+        // A stopped demo (SIGTERM, Ctrl-C) skips the finally below; the hook removes the sample data then.
+        Thread cleanup = new Thread(() -> TempFiles.deleteQuietly(unpacked), "sigmawalk-sample-cleanup");
+        Runtime.getRuntime().addShutdownHook(cleanup);
         try {
             Path study = daily ? SampleUniverse.extractTo(unpacked, "demo-daily.yaml") : SampleUniverse.extractTo(unpacked);
             Path target = out != null ? out : Paths.get("sigmawalk-demo");
             StudyRun.Options options = new StudyRun.Options(Optional.of(target), force, quiet,
                     Runtime.getRuntime().availableProcessors());
-            StudyRun.Outcome outcome = StudyRun.execute(study, options, System.err);
+            StudyRun.Outcome outcome = StudyRun.execute(study, options, System.err,
+                    WarningLines.to(spec.commandLine().getErr(), quiet));
             spec.commandLine().getOut().println("sigmawalk: wrote " + outcome.folder().resolve("report.html"));
             spec.commandLine().getOut().flush();
             return 0;
         } finally {
             TempFiles.deleteQuietly(unpacked);
+            try {
+                Runtime.getRuntime().removeShutdownHook(cleanup);
+            } catch (IllegalStateException e) {
+                // Shutting down already: the hook removes the folder.
+            }
         }
     }
 }

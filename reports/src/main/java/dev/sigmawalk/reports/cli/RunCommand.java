@@ -22,7 +22,7 @@ public final class RunCommand implements Callable<Integer> {
             + " (files of the same names are replaced; nothing else is touched).")
     boolean force;
 
-    @Option(names = "--quiet", description = "No progress line on standard error.")
+    @Option(names = "--quiet", description = "No progress line and no warnings on standard error (warnings stay in manifest.json and the report).")
     boolean quiet;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
@@ -35,7 +35,8 @@ public final class RunCommand implements Callable<Integer> {
     public Integer call() {
         StudyRun.Options options = new StudyRun.Options(Optional.ofNullable(out), force, quiet,
                 threads == null ? Runtime.getRuntime().availableProcessors() : threads);
-        StudyRun.Outcome outcome = StudyRun.execute(studyFile, options, System.err);
+        StudyRun.Outcome outcome = StudyRun.execute(studyFile, options, System.err,
+                WarningLines.to(spec.commandLine().getErr(), quiet));
         spec.commandLine().getOut().println("sigmawalk: wrote " + outcome.folder().resolve("report.html"));
         spec.commandLine().getOut().flush();
         return 0;

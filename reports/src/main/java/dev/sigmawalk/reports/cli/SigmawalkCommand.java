@@ -1,13 +1,14 @@
 package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.data.InputException;
-import java.io.PrintWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
 /**
- * The {@code sigmawalk} command. Exit codes (CONTRACT): 0 success; 2 bad command line, study file
- * or input data; 1 any other failure.
+ * The {@code sigmawalk} command. Exit codes: 0 success; 2 bad command line, study file or input
+ * data, or an environment fault (an output folder that cannot be written, a failed read or
+ * write), each as one located line; 1 any other failure, as one line pointing at a log file
+ * with the trace ({@link CrashLog}).
  */
 @Command(name = "sigmawalk",
         mixinStandardHelpOptions = true,
@@ -29,23 +30,18 @@ public final class SigmawalkCommand implements Runnable {
         spec.commandLine().usage(spec.commandLine().getOut());
     }
 
-    /** Builds the configured command line (used by {@link #main} and by tests). */
+    /** Builds the configured command line (used by {@link #main} and by tests), logging failures in the standard place. */
     public static CommandLine commandLine() {
+        return commandLine(CrashLog.standard(System.getenv()));
+    }
+
+    /** Builds the command line with failure traces written to the given log. */
+    static CommandLine commandLine(CrashLog log) {
         CommandLine cl = new CommandLine(new SigmawalkCommand());
         cl.addSubcommand("help", new CommandLine.HelpCommand());
         CommandHelp.addToEverySubcommand(cl);
         cl.setExitCodeExceptionMapper(SigmawalkCommand::exitCodeFor);
-        cl.setExecutionExceptionHandler((ex, cmd, parseResult) -> {
-            PrintWriter err = cmd.getErr();
-            if (ex instanceof InputException) {
-                err.println("sigmawalk: " + ex.getMessage());
-            } else {
-                err.println("sigmawalk: failed: " + ex);
-                ex.printStackTrace(err);
-            }
-            err.flush();
-            return exitCodeFor(ex);
-        });
+        cl.setExecutionExceptionHandler(new FailureHandler(log));
         return cl;
     }
 
@@ -59,8 +55,17 @@ public final class SigmawalkCommand implements Runnable {
     public static void main(String[] args) {
         // Charts are drawn off-screen; set before any AWT class loads so no display is needed.
         System.setProperty("java.awt.headless", "true");
-        CommandLine cl = commandLine();
-        int code = cl.execute(args);
+        CrashLog log = CrashLog.standard(System.getenv());
+        int code;
+        try {
+            code = commandLine(log).execute(args);
+        } catch (Throwable t) {
+            // An Error (out of memory, a missing class) passes picocli's handler: still one line and a log file.
+            String where = log.write(t, java.util.List.of(args), java.time.Instant.now())
+                    .map(p -> "; the details are in " + p).orElse("");
+            System.err.println("sigmawalk: failed: " + t + where);
+            code = EXIT_FAILURE;
+        }
         System.exit(code);
     }
 }

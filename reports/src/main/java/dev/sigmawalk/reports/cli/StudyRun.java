@@ -32,6 +32,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Consumer;
 
 /**
  * Wires one run: read and validate the study and its data, prepare the output folder (refusing
@@ -55,16 +56,29 @@ final class StudyRun {
     record Outcome(Path folder, List<Summary> summaries, RunResult<WindowEvidence> run) {
     }
 
+    /** {@link #execute(Path, Options, PrintStream, Consumer)} with the warnings kept to the outputs. */
     static Outcome execute(Path studyFile, Options options, PrintStream err) {
+        return execute(studyFile, options, err, w -> { });
+    }
+
+    /**
+     * @param err where the progress line goes
+     * @param warn receives every warning as soon as it is known: those of the data and of the
+     *             preview before the walk, those of the results after it (all also go to the
+     *             manifest and the report)
+     */
+    static Outcome execute(Path studyFile, Options options, PrintStream err, Consumer<String> warn) {
         Instant started = Instant.now();
         long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
         List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
-        RunPreview preview = RunPreview.of(study, data);
-        long loaded = System.nanoTime();
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force(), inputs(study, data))) {
+            List<String> warnings = new ArrayList<>(data.warnings());
+            warnings.addAll(RunPreview.of(study, data).warnings());
+            warnings.forEach(warn);
+            long loaded = System.nanoTime();
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
             RunResult<WindowFindings> found = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
@@ -75,7 +89,9 @@ final class StudyRun {
             long walked = System.nanoTime();
             List<Summary> summaries = Runs.summaries(run);
             List<Comparison> comparisons = Runs.comparisons(study, run);
-            List<String> warnings = warnings(data, preview, run);
+            List<String> found = warnings(run);
+            found.forEach(warn);
+            warnings.addAll(found);
             Path dir = folder.staging();
             ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
             ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
@@ -111,14 +127,12 @@ final class StudyRun {
     }
 
     /**
-     * Data warnings, what the preview found (the same lines {@code check} prints), what the
-     * residual diagnostics left out, then one line per path whose allocation failed at some
-     * rebalance.
+     * The warnings of the results: what the residual diagnostics left out, then one line per path
+     * whose allocation failed at some rebalance. (Those of the data and of the preview, the same
+     * lines {@code check} prints, come before the walk.)
      */
-    private static List<String> warnings(StudyData data, RunPreview preview, RunResult<WindowEvidence> run) {
-        List<String> out = new ArrayList<>(data.warnings());
-        out.addAll(preview.warnings());
-        out.addAll(EvidenceNotes.warnings(run.probes()));
+    private static List<String> warnings(RunResult<WindowEvidence> run) {
+        List<String> out = new ArrayList<>(EvidenceNotes.warnings(run.probes()));
         for (PathResult p : run.paths()) {
             List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
             if (!failed.isEmpty()) {

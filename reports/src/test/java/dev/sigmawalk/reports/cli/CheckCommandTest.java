@@ -152,6 +152,13 @@ class CheckCommandTest {
                 + " sample-covariance strategy with the same objective and bounds\n"), text);
         assertTrue(text.contains("; no baseline: equal weight does not use the covariance estimate"), text);
         assertTrue(text.contains("walkforward.cost_bps: 0.0"), text);
+        // Only the defaults this study received: it gives rebalance_every and index-model's bounds.
+        assertTrue(text.contains("  strategies[1] (equal).risk: sample\n"), text);
+        assertTrue(text.contains("  strategies[1] (equal).bounds: none (short sales allowed)\n"), text);
+        assertTrue(!text.contains("walkforward.rebalance_every:"), text);
+        assertTrue(!text.contains("(index-model).bounds"), text);
+        assertTrue(!text.contains("(index-model).risk"), text);
+        assertTrue(!text.contains("market_premium"), "no strategy uses expected returns: " + text);
         assertTrue(text.contains("Warnings:\n  none\n"), text);
         assertEquals("", err.toString());
     }
