@@ -80,12 +80,12 @@ final class StudyRun {
             warnings.forEach(warn);
             long loaded = System.nanoTime();
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
-            RunResult<WindowFindings> found = new WalkForward<>(data.panel(), data.schedule(), strategies,
+            RunResult<WindowFindings> probed = new WalkForward<>(data.panel(), data.schedule(), strategies,
                     study.walkForward().windows(), study.walkForward().costBps(),
                     WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), Runs.LARGEST_PAIRS),
                             FactorDiagnosticsProbe.of(study, data))).run(options.threads(), progress);
-            RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(found);
-            Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(found);
+            RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(probed);
+            Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(probed);
             long walked = System.nanoTime();
             List<Summary> summaries = Runs.summaries(run);
             List<Comparison> comparisons = Runs.comparisons(study, run);
