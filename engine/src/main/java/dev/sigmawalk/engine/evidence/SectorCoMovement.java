@@ -18,10 +18,15 @@ import java.util.TreeMap;
  * @param withinSectors one entry per sector holding >= 2 of the window's assets, by sector name
  * @param acrossPairs pairs whose two assets are in different sectors
  * @param acrossMean their mean ρ; empty when every asset is in one sector
+ * @param betweenSectors the across-sector pairs split by the two sectors: one entry per pair of
+ *        distinct sectors that both hold assets of the window, in name order (the off-diagonal
+ *        cells of a sector x sector map whose diagonal is {@code withinSectors})
  */
-public record SectorCoMovement(List<SectorCorrelation> withinSectors, int acrossPairs, OptionalDouble acrossMean) {
+public record SectorCoMovement(List<SectorCorrelation> withinSectors, int acrossPairs, OptionalDouble acrossMean,
+                               List<SectorPairMean> betweenSectors) {
     public SectorCoMovement {
         withinSectors = List.copyOf(withinSectors);
+        betweenSectors = List.copyOf(betweenSectors);
         Objects.requireNonNull(acrossMean, "acrossMean");
         if (!(acrossPairs >= 0) || (acrossPairs == 0) != acrossMean.isEmpty()) {
             throw new IllegalArgumentException("across-sector pairs (" + acrossPairs
@@ -47,7 +52,15 @@ public record SectorCoMovement(List<SectorCorrelation> withinSectors, int across
             sector[i] = s;
             members.merge(s, 1, Integer::sum);
         }
+        List<String> names = new ArrayList<>(members.keySet());
+        int k = names.size();
+        int[] index = new int[n];
+        for (int i = 0; i < n; i++) {
+            index[i] = java.util.Collections.binarySearch(names, sector[i]);
+        }
         Map<String, Double> withinSum = new TreeMap<>();
+        double[] betweenSum = new double[k * k];
+        int[] betweenCount = new int[k * k];
         double acrossSum = 0;
         int across = 0;
         for (int i = 0; i < n; i++) {
@@ -58,17 +71,30 @@ public record SectorCoMovement(List<SectorCorrelation> withinSectors, int across
                 } else {
                     acrossSum += r;
                     across++;
+                    int cell = Math.min(index[i], index[j]) * k + Math.max(index[i], index[j]);
+                    betweenSum[cell] += r;
+                    betweenCount[cell]++;
+                }
+            }
+        }
+        List<SectorPairMean> between = new ArrayList<>();
+        for (int a = 0; a < k; a++) {
+            for (int b = a + 1; b < k; b++) {
+                int cell = a * k + b;
+                if (betweenCount[cell] > 0) {
+                    between.add(new SectorPairMean(names.get(a), names.get(b), betweenCount[cell],
+                            clamp(betweenSum[cell] / betweenCount[cell])));
                 }
             }
         }
         List<SectorCorrelation> within = new ArrayList<>();
         for (Map.Entry<String, Double> e : withinSum.entrySet()) {
-            int k = members.get(e.getKey());
-            int pairs = k * (k - 1) / 2;
-            within.add(new SectorCorrelation(e.getKey(), k, pairs, clamp(e.getValue() / pairs)));
+            int m = members.get(e.getKey());
+            int pairs = m * (m - 1) / 2;
+            within.add(new SectorCorrelation(e.getKey(), m, pairs, clamp(e.getValue() / pairs)));
         }
         OptionalDouble acrossMean = across == 0 ? OptionalDouble.empty() : OptionalDouble.of(clamp(acrossSum / across));
-        return new SectorCoMovement(within, across, acrossMean);
+        return new SectorCoMovement(within, across, acrossMean, between);
     }
 
     /** A mean of values in [-1, 1] can leave it by one rounding step. */

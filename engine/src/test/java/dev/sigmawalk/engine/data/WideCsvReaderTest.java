@@ -110,7 +110,8 @@ class WideCsvReaderTest {
 
     @Test
     void windows1252ByteFarIntoTheFile_isRefusedAtItsLine() throws IOException {
-        Written w = write(3, 9000, 17);
+        Written w = write(3, 6500, 17);
+        assertTrue(Files.size(w.file()) > (1 << 20), "the bad byte lies beyond the first chunk");
         byte[] bytes = Files.readAllBytes(w.file());
         int at = bytes.length - 100;
         while (bytes[at] != ',') {
@@ -159,5 +160,25 @@ class WideCsvReaderTest {
         Files.writeString(file, "date,A,B\n2020-01-31,0.1,0.2,\n");
         e = assertThrows(InputException.class, () -> WideCsvReader.read(file, ValueKind.RETURNS, null));
         assertEquals("w.csv line 2: the row has 4 cells but the header has 3", e.getMessage());
+    }
+
+    /** A header and a row longer than the first chunk (1 MiB) make the buffer grow rather than loop. */
+    @Test
+    void linesLongerThanAChunk_areRead() throws IOException {
+        int cols = 120_000;
+        StringBuilder header = new StringBuilder("date");
+        StringBuilder row = new StringBuilder("2020-01-31");
+        for (int j = 0; j < cols; j++) {
+            header.append(",ASSET").append(j);
+            row.append(',').append(j % 7 == 0 ? "" : "0.0" + (j % 10));
+        }
+        Path file = dir.resolve("long-lines.csv");
+        Files.writeString(file, header + "\n" + row + "\n" + row.toString().replace("2020-01-31", "2020-02-29") + "\n");
+        assertTrue(Files.size(file) > 2 * (1 << 20), "lines longer than a chunk");
+        WideTable t = WideCsvReader.read(file, ValueKind.RETURNS, null).table();
+        assertEquals(cols, t.columnCount());
+        assertEquals(2, t.rows());
+        assertTrue(Double.isNaN(t.value(1, 0)));
+        assertEquals(0.08, t.value(1, cols - 2), 0.0, "ASSET119998 holds 0.0 + (119998 mod 10)");
     }
 }

@@ -187,6 +187,35 @@ class ResidualCorrelationsTest {
         assertEquals(List.of(new SectorCorrelation("P", 2, 1, 0.5)), s.withinSectors());
         assertEquals(2, s.acrossPairs());
         assertEquals(0.0, s.acrossMean().orElseThrow(), HAND);
+        assertEquals(1, s.betweenSectors().size(), "one pair of distinct sectors");
+        SectorPairMean pq = s.betweenSectors().get(0);
+        assertEquals("P", pq.first());
+        assertEquals("Q", pq.second());
+        assertEquals(2, pq.pairs(), "X1-X3 and X2-X3");
+        assertEquals(0.0, pq.meanCorrelation(), HAND);
+    }
+
+    /**
+     * The sector x sector cells split the across-sector pairs: their pair counts add up to the
+     * across count and their pair-weighted mean is the across mean (an identity of means).
+     */
+    @Test
+    void bySector_betweenCells_splitTheAcrossPairs() {
+        ResidualCorrelations rho = ResidualCorrelations.of(ReferenceWindow.load());
+        Map<String, String> sectors = new java.util.HashMap<>();
+        for (int i = 0; i < rho.assets().size(); i++) {
+            sectors.put(rho.assets().get(i), "S" + (i % 3));
+        }
+        SectorCoMovement s = rho.bySector(sectors);
+        assertEquals(3, s.betweenSectors().size(), "S0-S1, S0-S2, S1-S2");
+        int pairs = 0;
+        double weighted = 0;
+        for (SectorPairMean c : s.betweenSectors()) {
+            pairs += c.pairs();
+            weighted += c.pairs() * c.meanCorrelation();
+        }
+        assertEquals(s.acrossPairs(), pairs);
+        assertEquals(s.acrossMean().orElseThrow(), weighted / pairs, HAND);
     }
 
     @Test

@@ -57,6 +57,8 @@ public final class ReportPdf {
         XRLog.setLoggingEnabled(false);
         // PDFBox logs through Commons Logging, which would hand over to an SLF4J without a
         // backend and print a notice about it; the tool logs nothing of the PDF library's.
+        System.getProperties().putIfAbsent("org.apache.commons.logging.LogFactory",
+                "org.apache.commons.logging.impl.LogFactoryImpl");
         System.getProperties().putIfAbsent("org.apache.commons.logging.Log", "org.apache.commons.logging.impl.NoOpLog");
         Document doc = Jsoup.parse(html.toFile(), StandardCharsets.UTF_8.name());
         prepare(doc);
