@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.WindowEvidence;
+import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
@@ -11,14 +12,18 @@ import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.run.RebalanceRecord;
 import dev.sigmawalk.engine.run.RunResult;
+import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.reports.api.Runs;
 import dev.sigmawalk.reports.files.EvidenceFiles;
+import dev.sigmawalk.reports.files.FactorDiagnosticsFile;
 import dev.sigmawalk.reports.files.Manifest;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.ResultFiles;
+import dev.sigmawalk.strategies.FactorDiagnosticsProbe;
 import dev.sigmawalk.strategies.StrategyCatalog;
+import dev.sigmawalk.strategies.risk.FactorDiagnostics;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -96,7 +101,12 @@ public final class StudyRun {
         warnings.addAll(RunPreview.of(study, data).warnings());
         warnings.forEach(warn);
         long loaded = System.nanoTime();
-        RunResult<WindowEvidence> run = Runs.walk(study, data, strategies, threads, progress);
+        RunResult<WindowFindings> probed = new WalkForward<>(data.panel(), data.schedule(), strategies,
+                study.walkForward().windows(), study.walkForward().costBps(),
+                WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), Runs.LARGEST_PAIRS),
+                        FactorDiagnosticsProbe.of(study, data))).run(threads, progress);
+        RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(probed);
+        Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(probed);
         long walked = System.nanoTime();
         List<Summary> summaries = Runs.summaries(run);
         List<Comparison> comparisons = Runs.comparisons(study, run);
@@ -108,10 +118,12 @@ public final class StudyRun {
         ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
         ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
         EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+        FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
+                study.walkForward().windows());
         EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
         EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
         long tested = System.nanoTime();
-        ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
+        ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics);
         long reported = System.nanoTime();
         Map<String, Double> seconds = new LinkedHashMap<>();
         seconds.put("read_and_check", (loaded - begin) / 1e9);
