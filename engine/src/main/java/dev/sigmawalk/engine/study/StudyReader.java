@@ -33,7 +33,23 @@ public final class StudyReader {
      */
     public static Study read(Path studyFile) {
         Path file = studyFile.toAbsolutePath().normalize();
-        Section root = Section.of(file, "", YamlTree.parse(file), ROOT);
+        return read(file, YamlTree.parse(file));
+    }
+
+    /**
+     * Reads {@code text} as the study file {@code studyFile} would be read if it held that text:
+     * relative paths resolve against its folder and messages name it. Lets a derived study be
+     * validated before it is written anywhere.
+     *
+     * @throws InputException naming the file, line, column, key path and value of the first problem
+     */
+    public static Study read(Path studyFile, String text) {
+        Path file = studyFile.toAbsolutePath().normalize();
+        return read(file, YamlTree.parse(file, text));
+    }
+
+    private static Study read(Path file, YamlNode document) {
+        Section root = Section.of(file, "", document, ROOT);
         String title = root.has("title") ? root.text("title") : defaultTitle(file);
         DataSpec data = data(Section.of(file, "data", root.node("data"), DATA));
         WalkForwardSpec walk = walkForward(Section.of(file, "walkforward", root.node("walkforward"), WALK));

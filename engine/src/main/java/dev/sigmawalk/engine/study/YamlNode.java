@@ -7,7 +7,7 @@ import java.util.Map;
  * A node of a YAML document that remembers where it starts (1-based line and column), so that
  * every message about a study file can point at the text to fix.
  */
-sealed interface YamlNode permits YamlNode.Mapping, YamlNode.Sequence, YamlNode.Scalar {
+public sealed interface YamlNode permits YamlNode.Mapping, YamlNode.Sequence, YamlNode.Scalar {
     int line();
 
     int column();
@@ -40,7 +40,7 @@ sealed interface YamlNode permits YamlNode.Mapping, YamlNode.Sequence, YamlNode.
      * @param kind what the YAML parser resolved it to
      */
     record Scalar(String text, Kind kind, int line, int column) implements YamlNode {
-        enum Kind { STRING, INTEGER, DECIMAL, BOOLEAN, NULL }
+        public enum Kind { STRING, INTEGER, DECIMAL, BOOLEAN, NULL }
 
         @Override
         public String describe() {

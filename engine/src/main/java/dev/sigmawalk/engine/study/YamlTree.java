@@ -20,7 +20,7 @@ import java.util.Map;
  * position of every token (a data-binding tree would lose it). A key given twice in one mapping
  * is an error, since YAML leaves its meaning to the reader.
  */
-final class YamlTree {
+public final class YamlTree {
     private final Path file;
     private final JsonParser parser;
 
@@ -33,9 +33,27 @@ final class YamlTree {
      * @return the document's root node
      * @throws InputException when the file is missing, empty or not valid YAML
      */
-    static YamlNode parse(Path file) {
+    public static YamlNode parse(Path file) {
         TextEncoding.requireUtf8(file, "study file");
-        try (JsonParser parser = new YAMLFactory().createParser(file.toFile())) {
+        return parse(file, factory -> factory.createParser(file.toFile()));
+    }
+
+    /**
+     * Parses {@code text} as if it were the content of {@code file}: messages name {@code file}.
+     *
+     * @throws InputException when the text is empty or not valid YAML
+     */
+    public static YamlNode parse(Path file, String text) {
+        return parse(file, factory -> factory.createParser(text));
+    }
+
+    /** Opens a parser over the document's source. */
+    private interface Source {
+        JsonParser open(YAMLFactory factory) throws IOException;
+    }
+
+    private static YamlNode parse(Path file, Source source) {
+        try (JsonParser parser = source.open(new YAMLFactory())) {
             JsonToken first = parser.nextToken();
             if (first == null) {
                 throw new InputException(new InputException.Location(file, 0, null),

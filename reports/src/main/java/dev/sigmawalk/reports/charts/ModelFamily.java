@@ -10,7 +10,8 @@ import java.util.Locale;
  * family also has its own dash pattern so that a grey-scale print stays readable.
  *
  * <p>CIE lightness L* (sRGB, D65): single-index 26, other 42, sample 43, market 53, shrinkage 57,
- * equal weight 58. Pairs closer than 10 in L* differ in dash pattern, and shrinkage (ochre) and
+ * equal weight 58; multi-index 40, principal components 44, exponentially weighted 41,
+ * nonlinear shrinkage 39. Pairs closer than 10 in L* differ in dash pattern, and shrinkage (ochre) and
  * equal weight (blue) lie on opposite sides of the blue-yellow axis that colour-blind readers
  * still see. Every colour has a contrast of at least 3:1 against the white ground, the WCAG 2.1
  * minimum for graphical objects (success criterion 1.4.11).
@@ -24,6 +25,14 @@ public enum ModelFamily {
     SHRINKAGE("shrinkage", new Color(0xB5, 0x7F, 0x00), new float[0]),
     /** Equal weights (a rule without a covariance input). */
     EQUAL_WEIGHT("equal weights", new Color(0x4C, 0x8F, 0xCB), new float[] {2f, 3f}),
+    /** Multi-index model: market plus sector or user factors (green). */
+    MULTI_INDEX("multi-index model", new Color(0x2E, 0x6B, 0x3A), new float[] {7f, 2f, 2f, 2f}),
+    /** Statistical factor model from principal components (teal). */
+    PRINCIPAL_COMPONENTS("principal components", new Color(0x00, 0x73, 0x7A), new float[] {4f, 4f}),
+    /** Exponentially weighted covariance (rose). */
+    EWMA("exponentially weighted", new Color(0xA8, 0x32, 0x6E), new float[] {10f, 2f, 2f, 2f, 2f, 2f}),
+    /** Ledoit-Wolf nonlinear shrinkage (olive brown). */
+    NONLINEAR_SHRINKAGE("nonlinear shrinkage", new Color(0x6B, 0x5A, 0x1E), new float[] {1f, 2f}),
     /** The market benchmark. */
     MARKET("market benchmark", new Color(0x7F, 0x7F, 0x7F), new float[] {12f, 3f, 2f, 3f}),
     /** A risk model this report does not know by name. */

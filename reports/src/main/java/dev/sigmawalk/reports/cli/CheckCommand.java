@@ -16,6 +16,8 @@ import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.engine.timeline.Schedule;
+import dev.sigmawalk.reports.sweep.SweepCheck;
+import dev.sigmawalk.reports.sweep.SweepReader;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -38,7 +40,7 @@ public final class CheckCommand implements Callable<Integer> {
     /** Assets with missing rows listed by name before the rest are only counted. */
     static final int LISTED_ASSETS = 20;
 
-    @Parameters(index = "0", paramLabel = "STUDY.yaml", description = "The study file.")
+    @Parameters(index = "0", paramLabel = "STUDY.yaml", description = "The study file (or a sweep file).")
     Path studyFile;
 
     @Spec
@@ -46,6 +48,10 @@ public final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (SweepReader.isSweep(studyFile)) {
+            SweepCheck.print(studyFile, spec.commandLine().getOut());
+            return 0;
+        }
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
         PrintWriter out = spec.commandLine().getOut();

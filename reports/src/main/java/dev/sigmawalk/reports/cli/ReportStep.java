@@ -17,12 +17,15 @@ import dev.sigmawalk.reports.html.ReportWriter;
 import dev.sigmawalk.reports.pdf.ReportPdf;
 import dev.sigmawalk.reports.html.RunRecord;
 import dev.sigmawalk.reports.html.WindowDiagnostics;
+import dev.sigmawalk.strategies.risk.FactorDiagnostics;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /** Assembles the report's input from a finished run and writes report.html, charts/ and report.pdf. */
@@ -31,7 +34,8 @@ final class ReportStep {
     }
 
     static void write(Path dir, Study study, StudyData data, RunResult<WindowEvidence> run, List<Summary> summaries,
-                      List<Comparison> comparisons, List<String> warnings, Instant started) {
+                      List<Comparison> comparisons, List<String> warnings, Instant started,
+                      Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics) {
         ReturnPanel panel = data.panel();
         List<InputFile> inputs = new ArrayList<>();
         for (FileFingerprint f : data.fingerprints()) {
@@ -40,7 +44,7 @@ final class ReportStep {
         RunRecord record = new RunRecord(VersionProvider.version(), inputs, panel.date(0),
                 panel.date(panel.rows() - 1), panel.assetCount(), started, Instant.now(), warnings);
         ReportEvidence evidence = new ReportEvidence(diagnostics(run, study.walkForward().windows()),
-                comparisons, Optional.of(new InputListSize(panel.assetCount())));
+                comparisons, Optional.of(new InputListSize(panel.assetCount())), flatten(factorDiagnostics));
         try {
             new ReportWriter().write(new ReportData(study, run, summaries, record, evidence), dir.resolve("report.html"),
                     dir.resolve("charts"));
@@ -48,6 +52,13 @@ final class ReportStep {
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report", e);
         }
+    }
+
+    /** Per window, every rebalance's factor diagnostics in one list. */
+    private static Map<Integer, List<FactorDiagnostics>> flatten(Map<Integer, List<List<FactorDiagnostics>>> byWindow) {
+        Map<Integer, List<FactorDiagnostics>> out = new LinkedHashMap<>();
+        byWindow.forEach((w, rebalances) -> out.put(w, rebalances.stream().flatMap(List::stream).toList()));
+        return out;
     }
 
     private static List<WindowDiagnostics> diagnostics(RunResult<WindowEvidence> run, List<Integer> windows) {

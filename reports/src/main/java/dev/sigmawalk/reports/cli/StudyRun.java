@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.WindowEvidence;
+import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
@@ -11,14 +12,18 @@ import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.run.RebalanceRecord;
 import dev.sigmawalk.engine.run.RunResult;
+import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.reports.api.Runs;
 import dev.sigmawalk.reports.files.EvidenceFiles;
+import dev.sigmawalk.reports.files.FactorDiagnosticsFile;
 import dev.sigmawalk.reports.files.Manifest;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.ResultFiles;
+import dev.sigmawalk.strategies.FactorDiagnosticsProbe;
 import dev.sigmawalk.strategies.StrategyCatalog;
+import dev.sigmawalk.strategies.risk.FactorDiagnostics;
 import java.io.PrintStream;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -34,7 +39,7 @@ import java.util.function.Consumer;
  * a foreign one before any work), walk forward, measure, test, write every output into a
  * staging folder and move it into place only when all of it succeeded.
  */
-final class StudyRun {
+public final class StudyRun {
     private StudyRun() {
     }
 
@@ -67,43 +72,68 @@ final class StudyRun {
         long begin = System.nanoTime();
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
-        List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
         Path target = options.out().orElse(study.output());
         try (OutputFolder folder = OutputFolder.prepare(target, options.force(), inputs(study, data))) {
-            List<String> warnings = new ArrayList<>(data.warnings());
-            warnings.addAll(RunPreview.of(study, data).warnings());
-            warnings.forEach(warn);
-            long loaded = System.nanoTime();
             ProgressListener progress = options.quiet() ? ProgressListener.NONE : new ProgressLine(err, System::nanoTime);
-            RunResult<WindowEvidence> run = Runs.walk(study, data, strategies, options.threads(), progress);
-            long walked = System.nanoTime();
-            List<Summary> summaries = Runs.summaries(run);
-            List<Comparison> comparisons = Runs.comparisons(study, run);
-            List<String> found = warnings(run);
-            found.forEach(warn);
-            warnings.addAll(found);
-            Path dir = folder.staging();
-            ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
-            ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
-            ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
-            ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
-            EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
-            EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
-            EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
-            long tested = System.nanoTime();
-            ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started);
-            long reported = System.nanoTime();
-            Map<String, Double> seconds = new LinkedHashMap<>();
-            seconds.put("read_and_check", (loaded - begin) / 1e9);
-            seconds.put("walk_forward", (walked - loaded) / 1e9);
-            seconds.put("measures_tests_and_csv", (tested - walked) / 1e9);
-            seconds.put("report", (reported - tested) / 1e9);
-            Manifest.write(dir.resolve("manifest.json"), new Manifest.Content(VersionProvider.version(), study,
-                    data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
-                    Instant.now(), options.threads(), seconds));
+            Written written = writeInto(folder.staging(), study, data, options.threads(), progress, warn, started, begin);
             folder.commit();
-            return new Outcome(folder.target(), summaries, run);
+            return new Outcome(folder.target(), written.summaries(), written.run());
         }
+    }
+
+    /** What {@link #writeInto} computed, besides the files. */
+    public record Written(List<Summary> summaries, RunResult<WindowEvidence> run) {
+    }
+
+    /**
+     * Walks forward, measures, tests and writes every output of a run of {@code study} into
+     * {@code dir} (a staging folder the caller publishes). The files depend only on the study and
+     * its data, never on {@code threads}, except the manifest's clock readings and thread count.
+     *
+     * @param warn receives every warning as soon as it is known (all also go to the manifest and the report)
+     * @param started when the run began (for the manifest and the report)
+     * @param begin {@link System#nanoTime} when reading the study began (for the manifest's timings)
+     */
+    public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
+                                    Consumer<String> warn, Instant started, long begin) {
+        List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
+        List<String> warnings = new ArrayList<>(data.warnings());
+        warnings.addAll(RunPreview.of(study, data).warnings());
+        warnings.forEach(warn);
+        long loaded = System.nanoTime();
+        RunResult<WindowFindings> probed = new WalkForward<>(data.panel(), data.schedule(), strategies,
+                study.walkForward().windows(), study.walkForward().costBps(),
+                WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), Runs.LARGEST_PAIRS),
+                        FactorDiagnosticsProbe.of(study, data))).run(threads, progress);
+        RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(probed);
+        Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(probed);
+        long walked = System.nanoTime();
+        List<Summary> summaries = Runs.summaries(run);
+        List<Comparison> comparisons = Runs.comparisons(study, run);
+        List<String> found = warnings(run);
+        found.forEach(warn);
+        warnings.addAll(found);
+        ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
+        ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
+        ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
+        ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
+        EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
+        FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
+                study.walkForward().windows());
+        EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
+        EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
+        long tested = System.nanoTime();
+        ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics);
+        long reported = System.nanoTime();
+        Map<String, Double> seconds = new LinkedHashMap<>();
+        seconds.put("read_and_check", (loaded - begin) / 1e9);
+        seconds.put("walk_forward", (walked - loaded) / 1e9);
+        seconds.put("measures_tests_and_csv", (tested - walked) / 1e9);
+        seconds.put("report", (reported - tested) / 1e9);
+        Manifest.write(dir.resolve("manifest.json"), new Manifest.Content(VersionProvider.version(), study,
+                data.panel(), data.periodsPerYearInferred(), data.fingerprints(), run, warnings, started,
+                Instant.now(), threads, seconds));
+        return new Written(summaries, run);
     }
 
     /** Every file the run reads: the study file and each data file. */

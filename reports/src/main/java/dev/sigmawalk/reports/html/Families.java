@@ -37,6 +37,14 @@ final class Families {
                 return ModelFamily.SINGLE_INDEX;
             case SHRINKAGE:
                 return ModelFamily.SHRINKAGE;
+            case MULTI_INDEX:
+                return ModelFamily.MULTI_INDEX;
+            case PRINCIPAL_COMPONENTS:
+                return ModelFamily.PRINCIPAL_COMPONENTS;
+            case EWMA:
+                return ModelFamily.EWMA;
+            case NONLINEAR_SHRINKAGE:
+                return ModelFamily.NONLINEAR_SHRINKAGE;
             default:
                 return ModelFamily.OTHER;
         }

@@ -98,7 +98,8 @@ public final class ReportWriter {
         return new ReportView(data.study().title(), subtitle(data, focus, charts.rollingSpan()), palette(),
                 legend(data, styles), headline, StudySetup.of(data), HeadlineTable.of(data, styles), cost, honesty,
                 concentration, shrinkage, windows, overTime(data, charts, focus),
-                new EvidenceSections(data, maker).all(), SectorMap.of(data).stream().toList(), RunFacts.of(data));
+                new EvidenceSections(data, maker).all(), SectorMap.of(data).stream().toList(), RunFacts.of(data),
+                new FactorLoop(data, styles).section().stream().toList());
     }
 
     /**

@@ -62,7 +62,8 @@ class StyleBookTest {
     @Test
     void mainFamilies_differInLightnessOrDash() {
         List<ModelFamily> main = List.of(ModelFamily.SAMPLE, ModelFamily.SINGLE_INDEX, ModelFamily.SHRINKAGE,
-                ModelFamily.EQUAL_WEIGHT, ModelFamily.MARKET);
+                ModelFamily.EQUAL_WEIGHT, ModelFamily.MARKET, ModelFamily.MULTI_INDEX, ModelFamily.PRINCIPAL_COMPONENTS,
+                ModelFamily.EWMA, ModelFamily.NONLINEAR_SHRINKAGE);
         for (int i = 0; i < main.size(); i++) {
             for (int j = i + 1; j < main.size(); j++) {
                 ModelFamily a = main.get(i);

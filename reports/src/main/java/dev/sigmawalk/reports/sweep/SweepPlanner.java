@@ -1,0 +1,124 @@
+package dev.sigmawalk.reports.sweep;
+
+import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.study.Study;
+import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.engine.study.YamlNode;
+import dev.sigmawalk.engine.study.YamlTree;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Derives every grid point's study from the base study and validates all of them before any
+ * work, as strictly as {@code sigmawalk run} validates one study. A value that makes the study
+ * invalid on its own is reported at that value in the sweep file; a combination that is invalid
+ * (a start date after an end date) is reported at {@code vary:} with the point's values.
+ *
+ * <p>Relative paths in the varied values resolve like the base study's own, against the base
+ * study's folder: a point is the base study with its values written in.
+ */
+public final class SweepPlanner {
+    private SweepPlanner() {
+    }
+
+    /**
+     * @param out the sweep's output folder; points go to {@code out/points/NNN}
+     * @throws InputException naming the sweep file (or the base study), line and column of the first problem
+     */
+    public static SweepPlan plan(SweepFile sweep, Path out) {
+        Path outAbs = out.toAbsolutePath().normalize();
+        Study base = StudyReader.read(sweep.study());
+        YamlNode.Mapping tree = (YamlNode.Mapping) YamlTree.parse(base.file());
+        for (Axis axis : sweep.axes()) {
+            for (YamlNode value : axis.values()) {
+                checkAlone(sweep, base, tree, axis, value);
+            }
+        }
+        int width = Math.max(3, String.valueOf(sweep.size()).length());
+        List<GridPoint> points = new ArrayList<>();
+        for (int p = 0; p < sweep.size(); p++) {
+            points.add(point(sweep, base, tree, p, width, outAbs));
+        }
+        return new SweepPlan(sweep, base, outAbs, points);
+    }
+
+    private static void checkAlone(SweepFile sweep, Study base, YamlNode.Mapping tree, Axis axis, YamlNode value) {
+        String shown = YamlText.flow(value);
+        try {
+            YamlNode.Mapping changed = TreeEdit.set(tree, axis.segments(), value);
+            StudyReader.read(base.file(), YamlText.document(changed));
+        } catch (IllegalArgumentException e) {
+            throw InputException.at(sweep.file(), axis.line(), axis.column(), "vary key '" + axis.key() + "': "
+                    + e.getMessage());
+        } catch (InputException e) {
+            throw InputException.at(sweep.file(), value.line(), value.column(), "vary." + axis.key() + " = " + shown
+                    + " makes the base study " + base.file().getFileName() + " invalid: " + problem(e, base.file()));
+        }
+    }
+
+    private static GridPoint point(SweepFile sweep, Study base, YamlNode.Mapping tree, int p, int width, Path out) {
+        int[] at = sweep.coordinates(p);
+        YamlNode.Mapping changed = tree;
+        List<String> values = new ArrayList<>();
+        Map<String, String> shown = new LinkedHashMap<>();
+        for (int a = 0; a < at.length; a++) {
+            Axis axis = sweep.axes().get(a);
+            changed = TreeEdit.set(changed, axis.segments(), axis.values().get(at[a]));
+            values.add(axis.label(at[a]));
+            shown.put(axis.key(), axis.label(at[a]));
+        }
+        String label = String.format("%0" + width + "d", p + 1);
+        changed = TreeEdit.without(changed, "output");
+        changed = TreeEdit.set(changed, List.of("title"), title(base.title() + " \u00b7 point " + label));
+        Study here;
+        try {
+            here = StudyReader.read(base.file(), YamlText.document(changed));
+        } catch (InputException e) {
+            Axis first = sweep.axes().get(0);
+            throw InputException.at(sweep.file(), first.line(), first.column(), "vary: point " + label + " " + shown
+                    + " is not a valid study: " + problem(e, base.file()));
+        }
+        Path folder = out.resolve(SweepPlan.POINTS).resolve(label);
+        String yaml = header(sweep, label, shown) + YamlText.document(
+                new PathRebase(base.file().getParent(), folder).apply(changed));
+        requireSame(here, StudyReader.read(folder.resolve(PointRunner.STUDY_FILE), yaml), label);
+        return new GridPoint(p + 1, label, values, folder, yaml);
+    }
+
+    private static YamlNode title(String text) {
+        return new YamlNode.Scalar(text, YamlNode.Scalar.Kind.STRING, 0, 0);
+    }
+
+    private static String header(SweepFile sweep, String label, Map<String, String> shown) {
+        StringBuilder h = new StringBuilder("# Grid point ").append(label).append(" of ").append(sweep.file().getFileName())
+                .append(": the base study ").append(sweep.study().getFileName()).append(" with\n");
+        shown.forEach((k, v) -> h.append("#   ").append(k).append(" = ").append(v.replace('\n', ' ')).append('\n'));
+        return h.toString();
+    }
+
+    /** The point read where it will stand must be the point read beside the base study. */
+    private static void requireSame(Study beside, Study standing, String label) {
+        if (!beside.data().equals(standing.data()) || !beside.walkForward().equals(standing.walkForward())
+                || !beside.strategies().equals(standing.strategies()) || !beside.evidence().equals(standing.evidence())
+                || !beside.title().equals(standing.title())) {
+            throw new IllegalStateException("point " + label + ": the study written to point.yaml does not read back"
+                    + " as the derived study (a file path the sweep does not know how to move?)");
+        }
+    }
+
+    /** The message of a problem in generated text, without the generated text's line and column. */
+    private static String problem(InputException e, Path generated) {
+        String m = e.getMessage();
+        String name = String.valueOf(generated.getFileName());
+        if (e.location() != null && e.location().file().equals(generated) && m.startsWith(name)) {
+            int colon = m.indexOf(": ");
+            if (colon > 0) {
+                return m.substring(colon + 2);
+            }
+        }
+        return m;
+    }
+}

@@ -1,0 +1,115 @@
+package dev.sigmawalk.reports.sweep;
+
+import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.reports.cli.VersionProvider;
+import dev.sigmawalk.reports.files.OutputFolder;
+import dev.sigmawalk.reports.files.SweepFiles;
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Consumer;
+
+/**
+ * Wires one sweep: read the sweep file and validate every point's study (before any work),
+ * claim the output folder, keep the points whose outputs are complete and current, run the rest
+ * on the chosen engine (each point published whole), then read every finished point back and
+ * write {@code sweep.csv}, {@code sweep.html} and {@code manifest.json}, published together.
+ */
+public final class SweepRun {
+    private SweepRun() {
+    }
+
+    /** Command-line choices of a sweep. */
+    public record Options(Optional<Path> out, boolean force, boolean quiet) {
+    }
+
+    /** Where the outputs went and how each point ended. */
+    public record Outcome(Path folder, List<PointOutcome> points, GridEvidence evidence) {
+        /** Number of points that failed. */
+        public long failed() {
+            return points.stream().filter(p -> p.status() == PointOutcome.Status.FAILED).count();
+        }
+    }
+
+    /**
+     * @throws InputException for a bad sweep file, base study or grid point, or a foreign output
+     *                        folder, before any point runs
+     */
+    public static Outcome execute(Path sweepFile, Options options, SweepEngine engine, PrintStream err) {
+        Instant started = Instant.now();
+        SweepFile sweep = SweepReader.read(sweepFile);
+        SweepPlan plan = SweepPlanner.plan(sweep, options.out().orElse(sweep.output()));
+        List<Path> inputs = List.of(sweep.file(), plan.base().file());
+        claim(plan.out(), options.force(), inputs);
+        PointReuse reuse = new PointReuse(VersionProvider.version());
+        List<PointOutcome> outcomes = new ArrayList<>();
+        List<PointTask> tasks = new ArrayList<>();
+        for (GridPoint p : plan.points()) {
+            if (reuse.reusable(p)) {
+                outcomes.add(new PointOutcome(p.number(), PointOutcome.Status.REUSED, "", 0));
+            } else {
+                tasks.add(p.task());
+            }
+        }
+        Consumer<PointOutcome> progress = options.quiet() ? o -> { } : progress(err, plan, tasks.size());
+        outcomes.addAll(engine.run(tasks, options.force(), progress));
+        outcomes.sort(Comparator.comparingInt(PointOutcome::number));
+        return publish(plan, outcomes, engine.describe(), started, options.force(), inputs);
+    }
+
+    /** Publishes the (possibly empty) folder at once, so that an interrupted sweep's folder is still sigmawalk's. */
+    private static void claim(Path out, boolean force, List<Path> inputs) {
+        try (OutputFolder folder = OutputFolder.prepare(out, force, inputs)) {
+            folder.commit();
+        }
+    }
+
+    private static Consumer<PointOutcome> progress(PrintStream err, SweepPlan plan, int total) {
+        int[] done = {0};
+        return o -> {
+            done[0]++;
+            err.println("sigmawalk: sweep point " + plan.points().get(o.number() - 1).label() + " " + o.status().spelling()
+                    + " (" + done[0] + " of " + total + ")" + (o.reason().isEmpty() ? "" : ": " + o.reason()));
+            err.flush();
+        };
+    }
+
+    private static Outcome publish(SweepPlan plan, List<PointOutcome> outcomes, String engine, Instant started,
+                                   boolean force, List<Path> inputs) {
+        List<PointRow> rows = new ArrayList<>();
+        List<PointComparison> tests = new ArrayList<>();
+        List<SweepFiles.Line> lines = new ArrayList<>();
+        for (PointOutcome o : outcomes) {
+            GridPoint p = plan.points().get(o.number() - 1);
+            if (!o.hasOutputs()) {
+                lines.add(new SweepFiles.Line(p.label(), p.values(), "", "", Double.NaN, Double.NaN, Double.NaN,
+                        Double.NaN, o.status().spelling(), o.reason()));
+                continue;
+            }
+            List<PointRow> summary = PointFiles.summary(p);
+            rows.addAll(summary);
+            tests.addAll(PointFiles.varianceTests(p));
+            for (PointRow r : summary) {
+                lines.add(new SweepFiles.Line(p.label(), p.values(), r.strategy(), r.window(), r.volatility(), r.sharpe(),
+                        r.meanTurnover(), r.bias(), o.status().spelling(), ""));
+            }
+        }
+        GridEvidence evidence = GridEvidence.of(rows, tests);
+        List<HeatMap> maps = HeatMap.of(plan.sweep(), rows);
+        try (OutputFolder folder = OutputFolder.prepare(plan.out(), force, inputs)) {
+            Path dir = folder.staging();
+            SweepFiles.writeSweep(dir.resolve("sweep.csv"), plan.keys(), lines);
+            Instant finished = Instant.now();
+            new SweepPage().write(dir.resolve("sweep.html"),
+                    new SweepPage.Content(plan, outcomes, maps, evidence, engine, started, finished));
+            SweepManifest.write(dir.resolve("manifest.json"), new SweepManifest.Content(VersionProvider.version(), plan,
+                    outcomes, evidence, engine, started, finished));
+            folder.commit();
+            return new Outcome(folder.target(), outcomes, evidence);
+        }
+    }
+}

@@ -1,0 +1,174 @@
+package dev.sigmawalk.reports.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import dev.sigmawalk.engine.study.RebalanceRule;
+import dev.sigmawalk.engine.study.Study;
+import dev.sigmawalk.engine.study.StudyReader;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * {@code sigmawalk sweep} end to end, in-process, on a 2 x 2 grid of the small sample study:
+ * grid order, every point's files byte-identical to {@code sigmawalk run} on its point.yaml,
+ * the sweep's own files, re-runs that keep current points, and failed points that do not stop
+ * the others.
+ */
+class SweepCommandTest {
+    @TempDir
+    static Path data;
+    static Path grid;
+    static Path out;
+
+    @BeforeAll
+    static void runGrid() throws IOException {
+        SweepFixture.baseStudy(data);
+        grid = SweepFixture.sweepFile(data, "grid.yaml", "walkforward.cost_bps: [5, 20]",
+                "walkforward.rebalance_every: [3, 6]");
+        out = data.resolve("grid-out");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", grid.toString(), "--out", out.toString(), "--quiet",
+                "--threads", "2");
+        assertEquals(0, r.code(), r.err());
+    }
+
+    @Test
+    void points_followFileOrder_lastKeyFastest() {
+        double[] costs = {5, 5, 20, 20};
+        int[] every = {3, 6, 3, 6};
+        for (int i = 0; i < 4; i++) {
+            Study s = StudyReader.read(out.resolve("points/00" + (i + 1) + "/point.yaml"));
+            assertEquals(costs[i], s.walkForward().costBps(), "point " + (i + 1) + " cost");
+            assertEquals(new RebalanceRule.EveryRows(every[i]), s.walkForward().rebalance(), "point " + (i + 1) + " rule");
+            assertEquals(data.resolve("assets-monthly.csv"), s.data().assets(), "point " + (i + 1) + " assets path");
+        }
+    }
+
+    @Test
+    void everyPoint_isByteIdenticalToRunningItsPointYamlAlone() throws IOException {
+        for (int i = 1; i <= 4; i++) {
+            Path point = out.resolve("points/00" + i);
+            Path alone = data.resolve("alone-" + i);
+            SweepFixture.Result r = SweepFixture.sigmawalk("run", point.resolve("point.yaml").toString(), "--out",
+                    alone.toString(), "--quiet", "--threads", "1");
+            assertEquals(0, r.code(), r.err());
+            SweepFixture.assertSameRun(point, alone, "point " + i);
+        }
+    }
+
+    @Test
+    void sweepCsv_hasOneRowPerPointStrategyAndWindow_copiedFromTheSummaries() throws IOException {
+        List<String> lines = SweepFixture.lines(out.resolve("sweep.csv"));
+        assertEquals("point,walkforward.cost_bps,walkforward.rebalance_every,strategy,window,volatility,sharpe,"
+                + "mean_turnover,bias,status,reason", lines.get(0));
+        // 2 strategies x 2 windows + the market, for each of 4 points
+        assertEquals(1 + 4 * 5, lines.size());
+        List<String> summary = SweepFixture.lines(out.resolve("points/003/summary.csv"));
+        String[] head = summary.get(0).split(",");
+        String[] first = summary.get(1).split(",", -1);
+        String expected = "003,20,3," + first[0] + "," + first[1] + "," + first[indexOf(head, "volatility")] + ","
+                + first[indexOf(head, "sharpe")] + "," + first[indexOf(head, "mean_turnover")] + ","
+                + first[indexOf(head, "bias")] + ",ran,";
+        assertTrue(lines.contains(expected), "sweep.csv holds point 003's first summary row: " + expected);
+    }
+
+    @Test
+    void sweepPage_isSelfContained_withAHeatMapPerStrategyAndMeasure() throws IOException {
+        String html = Files.readString(out.resolve("sweep.html"), StandardCharsets.UTF_8);
+        for (String s : List.of("index-model", "plain")) {
+            assertTrue(html.contains(s + ": Realised volatility"), "volatility map of " + s);
+            assertTrue(html.contains(s + ": Sharpe ratio"), "Sharpe map of " + s);
+        }
+        assertFalse(html.contains("http://") || html.contains("https://") || html.contains("<script"), "offline page");
+        assertFalse(html.contains("{{"), "no template tag left");
+        assertTrue(html.contains("border-collapse") && html.contains("td.best"), "the report's stylesheet is inlined");
+        assertTrue(html.contains("corrected for all"), "family-corrected p-value stated");
+        assertTrue(Files.isRegularFile(out.resolve("manifest.json")));
+    }
+
+    @Test
+    void rerun_keepsCompletePoints_andRunsAgainWhenAnInputChanges() throws IOException {
+        Path copy = data.resolve("rerun");
+        Files.createDirectories(copy);
+        Path base = SweepFixture.baseStudy(copy);
+        Path sweep = SweepFixture.sweepFile(copy, "grid.yaml", "walkforward.cost_bps: [5, 20]");
+        Path target = copy.resolve("out");
+        assertEquals(0, SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet").code());
+        FileTime before = Files.getLastModifiedTime(target.resolve("points/001/returns.csv"));
+
+        SweepFixture.Result again = SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet");
+        assertEquals(0, again.code(), again.err());
+        assertEquals(before, Files.getLastModifiedTime(target.resolve("points/001/returns.csv")), "point 001 kept");
+        assertTrue(SweepFixture.lines(target.resolve("sweep.csv")).stream().skip(1).allMatch(l -> l.contains(",reused,")),
+                "every point reused");
+
+        Files.writeString(base.getParent().resolve("sectors.csv"), "\n", StandardCharsets.UTF_8,
+                java.nio.file.StandardOpenOption.APPEND);
+        assertEquals(0, SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet").code());
+        assertTrue(SweepFixture.lines(target.resolve("sweep.csv")).stream().skip(1).allMatch(l -> l.contains(",ran,")),
+                "an input's fingerprint changed, so every point ran again");
+    }
+
+    @Test
+    void failedPoint_isRecordedWithItsReason_andTheOthersFinish() throws IOException {
+        Path sweep = SweepFixture.sweepFile(data, "bounds.yaml", "strategies.plain.bounds: [[0, 0.10], [0, 0.001]]");
+        Path target = data.resolve("bounds-out");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet");
+        assertEquals(1, r.code(), "some point failed: " + r.out() + r.err());
+        List<String> lines = SweepFixture.lines(target.resolve("sweep.csv"));
+        String failed = lines.stream().filter(l -> l.startsWith("002,")).findFirst().orElseThrow();
+        assertTrue(failed.contains(",failed,") && failed.contains("cannot make 72 weights sum to 1"), failed);
+        assertTrue(Files.isRegularFile(target.resolve("points/001/summary.csv")), "point 001 finished");
+        assertFalse(Files.exists(target.resolve("points/002")), "nothing half-written for the failed point");
+        try (var s = Files.list(target.resolve("points"))) {
+            assertEquals(List.of("001"), s.map(p -> p.getFileName().toString()).sorted().toList(), "no staging left");
+        }
+    }
+
+    @Test
+    void badValue_isReportedAtItsPlaceInTheSweepFile_beforeAnyWork() throws IOException {
+        Path sweep = SweepFixture.sweepFile(data, "bad.yaml", "walkforward.cost_bps: [5, -3]");
+        Path target = data.resolve("bad-out");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("bad.yaml line 4, column 29") && r.err().contains("cost_bps: -3 is negative"), r.err());
+        assertFalse(Files.exists(target), "nothing written");
+    }
+
+    @Test
+    void unknownStep_isReportedAtItsKey() throws IOException {
+        Path sweep = SweepFixture.sweepFile(data, "step.yaml", "strategies.nosuch.bounds: [[0, 1]]");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--quiet");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("step.yaml line 4, column 3") && r.err().contains("no item named 'nosuch'")
+                && r.err().contains("index-model, plain"), r.err());
+    }
+
+    @Test
+    void check_acceptsASweepFile_andValidatesEveryPointsData() throws IOException {
+        SweepFixture.Result ok = SweepFixture.sigmawalk("check", grid.toString());
+        assertEquals(0, ok.code(), ok.err());
+        assertTrue(ok.out().contains("Grid: 4 points") && ok.out().contains("Sweep is valid: grid.yaml"), ok.out());
+        Path sweep = SweepFixture.sweepFile(data, "check-bounds.yaml", "strategies.plain.bounds: [[0, 0.10], [0, 0.001]]");
+        SweepFixture.Result bad = SweepFixture.sigmawalk("check", sweep.toString());
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("1 point of 2 cannot run; first: point 002"), bad.err());
+    }
+
+    private static int indexOf(String[] header, String column) {
+        for (int i = 0; i < header.length; i++) {
+            if (header[i].equals(column)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("no column " + column);
+    }
+}

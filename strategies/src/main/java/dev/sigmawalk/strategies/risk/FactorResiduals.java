@@ -1,0 +1,194 @@
+package dev.sigmawalk.strategies.risk;
+
+import dev.sigmawalk.engine.evidence.BiasAdjustedLm;
+import dev.sigmawalk.engine.evidence.ExactPairMoments;
+import dev.sigmawalk.engine.evidence.RegressorSpace;
+import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.model.WindowMoments;
+import org.apache.commons.math3.special.Erf;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The residual diagnostics of a factor model (Method §11 last item): the residual correlations
+ * ρ_ij of the multi-index or principal-components fit, and from them the mean |ρ|, Pesaran's CD
+ * and the bias-adjusted LM of Method §8, all without forming the L×n residuals.
+ * <ul>
+ *   <li>multi-index: cov(e_i, e_j) from the fit ({@link MultiIndexFit#residualCovariance}); asset
+ *       i's regression is [1, G_i], so with sectors the pair moments μ_ij, v_ij depend on the
+ *       pair's two sectors and come from {@link ExactPairMoments#of}; with a factor file every
+ *       asset has the same k = K + 1 regressors;</li>
+ *   <li>principal components: e = x - x̄ - V_k V_k'(x - x̄), so cov(e) = S - V_k Λ_k V_k' and
+ *       k = components + 1 for every asset.</li>
+ * </ul>
+ */
+public final class FactorResiduals {
+    /** A residual variance below this share of the asset's variance counts as an exact fit. */
+    static final double EXACT_FIT = 1e-12;
+
+    private FactorResiduals() {
+    }
+
+    /** Whether {@link #diagnose} applies: multi-index and principal-components models. */
+    public static boolean applies(RiskModel model) {
+        return model instanceof MultiIndexRiskModel || model instanceof PrincipalComponentsRiskModel;
+    }
+
+    /**
+     * @param name the model's name for outputs, e.g. {@code principal-components:5}
+     * @param model a multi-index or principal-components model
+     * @param sectors asset to sector, for the within-sector means (may be empty)
+     * @return empty when the window cannot support the model or fewer than two assets have a
+     *         residual variance above rounding
+     */
+    public static Optional<FactorDiagnostics> diagnose(String name, RiskModel model, EstimationWindow window,
+                                                       Map<String, String> sectors) {
+        if (!applies(model)) {
+            throw new IllegalArgumentException("risk model " + model.label() + " has no factor residuals");
+        }
+        try {
+            return model instanceof MultiIndexRiskModel mi
+                    ? multiIndex(name, mi, window, sectors)
+                    : principalComponents(name, (PrincipalComponentsRiskModel) model, window, sectors);
+        } catch (IllegalArgumentException | ArithmeticException e) {
+            // The strategy records the same failure for this rebalance; there is nothing to diagnose.
+            return Optional.empty();
+        }
+    }
+
+    private static Optional<FactorDiagnostics> multiIndex(String name, MultiIndexRiskModel model, EstimationWindow window,
+                                                          Map<String, String> sectors) {
+        MultiIndexFit fit = model.fit(window);
+        WindowMoments moments = window.moments();
+        int n = window.assetCount();
+        double[] d = new double[n];
+        for (int i = 0; i < n; i++) {
+            d[i] = fit.residualVariance(i);
+        }
+        PairMomentsSource pairs = pairMoments(fit.design(), window);
+        return summarise(name, window, sectors, d, (i, j) -> fit.residualCovariance(i, j, moments.covariance(i, j)), pairs);
+    }
+
+    private static Optional<FactorDiagnostics> principalComponents(String name, PrincipalComponentsRiskModel model,
+                                                                   EstimationWindow window, Map<String, String> sectors) {
+        FactorCovariance sigma = model.estimate(window);
+        WindowMoments moments = window.moments();
+        double[] d = sigma.specificVariances();
+        ExactPairMoments common = ExactPairMoments.common(window.length(), model.components() + 1);
+        return summarise(name, window, sectors, d, (i, j) -> moments.covariance(i, j) - sigma.get(i, j),
+                (i, j) -> common);
+    }
+
+    /** cov(e_i, e_j) for i ≠ j. */
+    @FunctionalInterface
+    private interface ResidualCovariance {
+        double of(int i, int j);
+    }
+
+    /** The exact moments of the pair of assets i, j (window indices). */
+    @FunctionalInterface
+    private interface PairMomentsSource {
+        ExactPairMoments of(int i, int j);
+    }
+
+    /**
+     * With sectors, one regression per distinct column set (market only, or market and one sector),
+     * and the moments of a pair cached by its two column sets; with a file, one common regression.
+     */
+    private static PairMomentsSource pairMoments(FactorDesign design, EstimationWindow window) {
+        int len = design.length();
+        int k = design.factorCount();
+        int[][] columnsOf = design.columnsOf();
+        Map<List<Integer>, RegressorSpace> spaces = new HashMap<>();
+        List<Integer>[] keyOf = keys(columnsOf);
+        for (List<Integer> key : keyOf) {
+            spaces.computeIfAbsent(key, cols -> {
+                double[][] z = new double[cols.size() + 1][len];
+                Arrays.fill(z[0], 1.0);
+                for (int c = 0; c < cols.size(); c++) {
+                    for (int t = 0; t < len; t++) {
+                        z[c + 1][t] = design.values()[t * k + cols.get(c)];
+                    }
+                }
+                return RegressorSpace.of(z);
+            });
+        }
+        Map<List<List<Integer>>, ExactPairMoments> cache = new HashMap<>();
+        return (i, j) -> cache.computeIfAbsent(List.of(keyOf[i], keyOf[j]),
+                pair -> ExactPairMoments.of(spaces.get(pair.get(0)), spaces.get(pair.get(1))));
+    }
+
+    @SuppressWarnings("unchecked")
+    private static List<Integer>[] keys(int[][] columnsOf) {
+        List<Integer>[] keys = new List[columnsOf.length];
+        for (int i = 0; i < columnsOf.length; i++) {
+            keys[i] = Arrays.stream(columnsOf[i]).boxed().toList();
+        }
+        return keys;
+    }
+
+    private static Optional<FactorDiagnostics> summarise(String name, EstimationWindow window, Map<String, String> sectors,
+                                                         double[] d, ResidualCovariance cov, PairMomentsSource pairs) {
+        WindowMoments moments = window.moments();
+        List<Integer> kept = new ArrayList<>();
+        for (int i = 0; i < d.length; i++) {
+            if (d[i] > EXACT_FIT * moments.covariance(i, i)) {
+                kept.add(i);
+            }
+        }
+        int n = kept.size();
+        if (n < 2) {
+            return Optional.empty();
+        }
+        double[] rho = new double[n * n];
+        double sum = 0;
+        double sumAbs = 0;
+        for (int a = 0; a < n; a++) {
+            for (int b = a + 1; b < n; b++) {
+                int i = kept.get(a);
+                int j = kept.get(b);
+                double r = Math.max(-1.0, Math.min(1.0, cov.of(i, j) / Math.sqrt(d[i] * d[j])));
+                rho[a * n + b] = r;
+                sum += r;
+                sumAbs += Math.abs(r);
+            }
+        }
+        int len = window.length();
+        double cd = Math.sqrt(2.0 * len / ((double) n * (n - 1))) * sum;
+        double cdP = Math.min(1.0, Erf.erfc(Math.abs(cd) / Math.sqrt(2.0)));
+        Optional<BiasAdjustedLm> lm;
+        try {
+            lm = Optional.of(BiasAdjustedLm.of(n, (a, b) -> rho[a * n + b], (a, b) -> pairs.of(kept.get(a), kept.get(b))));
+        } catch (IllegalArgumentException e) {
+            // L - k ≤ 4: the paper's moments are undefined for so short a window.
+            lm = Optional.empty();
+        }
+        double meanAbs = Math.min(1.0, sumAbs / (n * (n - 1) / 2.0));
+        return Optional.of(new FactorDiagnostics(name, window.date(), len, n, meanAbs, lm, cd, cdP,
+                withinSector(window, sectors, kept, rho)));
+    }
+
+    private static Map<String, Double> withinSector(EstimationWindow window, Map<String, String> sectors,
+                                                    List<Integer> kept, double[] rho) {
+        int n = kept.size();
+        Map<String, double[]> sums = new HashMap<>();
+        for (int a = 0; a < n; a++) {
+            String sa = sectors.get(window.assets().get(kept.get(a)));
+            for (int b = a + 1; b < n && sa != null; b++) {
+                if (sa.equals(sectors.get(window.assets().get(kept.get(b))))) {
+                    double[] s = sums.computeIfAbsent(sa, x -> new double[2]);
+                    s[0] += rho[a * n + b];
+                    s[1]++;
+                }
+            }
+        }
+        Map<String, Double> out = new HashMap<>();
+        sums.forEach((sector, s) -> out.put(sector, Math.max(-1.0, Math.min(1.0, s[0] / s[1]))));
+        return out;
+    }
+}
