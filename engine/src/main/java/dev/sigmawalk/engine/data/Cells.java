@@ -1,5 +1,6 @@
 package dev.sigmawalk.engine.data;
 
+import dev.sigmawalk.engine.study.DecimalSpelling;
 import java.nio.file.Path;
 import java.time.DateTimeException;
 import java.time.LocalDate;
@@ -48,7 +49,7 @@ final class Cells {
         if (cell.isEmpty()) {
             return Double.NaN;
         }
-        if (looksNumeric(cell)) {
+        if (DecimalSpelling.isPlain(cell)) {
             double v = Double.parseDouble(cell);
             if (Double.isFinite(v)) {
                 return v;
@@ -80,47 +81,4 @@ final class Cells {
         }
     }
 
-    /** Sign, digits with at most one point, optional exponent: exactly what parseDouble accepts of these. */
-    private static boolean looksNumeric(String s) {
-        int i = 0;
-        int n = s.length();
-        if (s.charAt(0) == '+' || s.charAt(0) == '-') {
-            i++;
-        }
-        int digits = 0;
-        boolean point = false;
-        for (; i < n; i++) {
-            char c = s.charAt(i);
-            if (c >= '0' && c <= '9') {
-                digits++;
-            } else if (c == '.' && !point) {
-                point = true;
-            } else {
-                break;
-            }
-        }
-        if (digits == 0) {
-            return false;
-        }
-        if (i == n) {
-            return true;
-        }
-        char e = s.charAt(i);
-        if (e != 'e' && e != 'E') {
-            return false;
-        }
-        i++;
-        if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
-            i++;
-        }
-        int expDigits = 0;
-        for (; i < n; i++) {
-            char c = s.charAt(i);
-            if (c < '0' || c > '9') {
-                return false;
-            }
-            expDigits++;
-        }
-        return expDigits > 0;
-    }
 }

@@ -36,7 +36,7 @@ final class YamlNumber {
             int base = lower.charAt(1) == 'x' ? 16 : lower.charAt(1) == 'o' ? 8 : 2;
             return "is written in base " + base + "; expected a plain decimal number" + decimalHint(t, unsigned, base);
         }
-        if (!plainDecimal(unsigned)) {
+        if (!DecimalSpelling.isPlain(t)) {
             return "is not a plain decimal number; expected digits with an optional sign, point and exponent, such as 0.05";
         }
         if (unsigned.length() > 1 && unsigned.charAt(0) == '0' && Character.isDigit(unsigned.charAt(1))) {
@@ -62,44 +62,6 @@ final class YamlNumber {
         }
     }
 
-    /** Digits with at most one point (a digit on at least one side) and an optional exponent. */
-    private static boolean plainDecimal(String s) {
-        int i = 0;
-        int n = s.length();
-        int digits = 0;
-        boolean point = false;
-        for (; i < n; i++) {
-            char c = s.charAt(i);
-            if (c >= '0' && c <= '9') {
-                digits++;
-            } else if (c == '.' && !point) {
-                point = true;
-            } else {
-                break;
-            }
-        }
-        if (digits == 0) {
-            return false;
-        }
-        if (i == n) {
-            return true;
-        }
-        if (s.charAt(i) != 'e' && s.charAt(i) != 'E') {
-            return false;
-        }
-        i++;
-        if (i < n && (s.charAt(i) == '+' || s.charAt(i) == '-')) {
-            i++;
-        }
-        int expDigits = 0;
-        for (; i < n; i++) {
-            if (s.charAt(i) < '0' || s.charAt(i) > '9') {
-                return false;
-            }
-            expDigits++;
-        }
-        return expDigits > 0;
-    }
 
     private static String withoutLeadingZeros(String t) {
         String sign = t.startsWith("-") || t.startsWith("+") ? t.substring(0, 1) : "";

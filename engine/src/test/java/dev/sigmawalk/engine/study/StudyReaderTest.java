@@ -14,7 +14,7 @@ import java.util.Optional;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** Study files: keys as CONTRACT.md spells them, defaults from StudyDefaults, positions in errors. */
+/** Study files: keys as the README spells them, defaults from StudyDefaults, positions in errors. */
 class StudyReaderTest {
     private static final String BASE = String.join("\n",
             "title: Invented study",                 // line 1

@@ -9,7 +9,7 @@ import java.time.LocalDate;
 import java.util.List;
 
 /**
- * Writes the result CSV files of CONTRACT.md ("Output folder"): returns, rebalances, weights and
+ * Writes the result CSV files the README lists under "Outputs": returns, rebalances, weights and
  * summary. Rows come in a fixed order (paths in study order, then dates), so the same run gives
  * byte-identical files.
  */

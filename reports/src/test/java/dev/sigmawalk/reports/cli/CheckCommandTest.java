@@ -20,7 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
 
 /**
- * {@code sigmawalk check} through the real command line: exit codes of CONTRACT.md, messages on
+ * {@code sigmawalk check} through the real command line: exit codes as the README gives them, messages on
  * standard error naming file, line, column and value, and no file written, ever. Line numbers in
  * the expected messages were counted by hand in the invented fixtures below (header = line 1).
  */

@@ -108,7 +108,7 @@ class NewRiskModelReferenceTest {
 
     /**
      * Nonlinear shrinkage with n = 12 < N = 59 against nonlinear_shrinkage_cov.csv (numpy from the
-     * paper's equations; agrees with a transcription of the paper's listing to 4e-12) and against
+     * paper's equations; agrees with a port of the code listing published with the paper to 4e-12) and against
      * nonlinear_shrinkage_numpy_cov.csv, written by this folder's independent script
      * nonlinear_shrinkage_check.py ({@code numpy.linalg.eigh}, numpy 2.4).
      */
