@@ -109,17 +109,27 @@ final class DecimalBytes {
             return slow(b, s, e, file, line, column);
         }
         int q = scale + exponent;
-        double v;
-        if (m == 0) {
-            v = 0.0;
-        } else if (q >= 0 && q <= MAX_POWER) {
-            v = m * POWERS[q];
-        } else if (q < 0 && q >= -MAX_POWER) {
-            v = m / POWERS[-q];
-        } else {
+        if (!exact(m, q)) {
             return slow(b, s, e, file, line, column);
         }
+        double v = assemble(m, q);
         return negative ? -v : v;
+    }
+
+    /**
+     * Whether m · 10^q is one correctly rounded operation (Clinger 1990's fast path): m below 2^53
+     * (checked by the callers) and 10^|q| exact in a double; 0 is exact at any scale.
+     */
+    private static boolean exact(long m, int q) {
+        return m == 0 || q >= -MAX_POWER && q <= MAX_POWER;
+    }
+
+    /** m · 10^q for a case {@link #exact} accepts: one multiplication or division, so bit-identical to parseDouble. */
+    private static double assemble(long m, int q) {
+        if (m == 0) {
+            return 0.0;
+        }
+        return q >= 0 ? m * POWERS[q] : m / POWERS[-q];
     }
 
     /**
@@ -201,16 +211,10 @@ final class DecimalBytes {
             return false;
         }
         int q = scale + exponent;
-        double v;
-        if (m == 0) {
-            v = 0.0;
-        } else if (q >= 0 && q <= MAX_POWER) {
-            v = m * POWERS[q];
-        } else if (q < 0 && q >= -MAX_POWER) {
-            v = m / POWERS[-q];
-        } else {
+        if (!exact(m, q)) {
             return false;
         }
+        double v = assemble(m, q);
         value = negative ? -v : v;
         end = i;
         return true;
