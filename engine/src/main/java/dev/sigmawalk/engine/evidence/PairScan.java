@@ -54,13 +54,13 @@ public record PairScan(long pairs, double meanAbsCorrelation, double sumOfSquare
                 fill(z, len, n, tile, packed, i0, i1, j0, width);
                 for (int i = i0; i < i1; i++) {
                     int base = (i - i0) * TILE_COLUMNS - j0;
+                    int from = Math.max(j0, i + 1);
+                    sumAbs += absoluteSum(tile, base + from, base + j1);
+                    sumSquares += squareSum(tile, base + from, base + j1);
                     double threshold = top.threshold();
-                    for (int j = Math.max(j0, i + 1); j < j1; j++) {
-                        double r = tile[base + j];
-                        sumSquares += r * r;
-                        sumAbs += Math.min(1.0, Math.abs(r));
-                        if (r >= threshold) {
-                            top.offer(r, i, j);
+                    for (int j = from; j < j1; j++) {
+                        if (tile[base + j] >= threshold) {
+                            top.offer(tile[base + j], i, j);
                             threshold = top.threshold();
                         }
                     }
@@ -69,6 +69,44 @@ public record PairScan(long pairs, double meanAbsCorrelation, double sumOfSquare
         }
         long pairs = (long) n * (n - 1) / 2;
         return new PairScan(pairs, Math.min(1.0, sumAbs / pairs), sumSquares, top.pairs(rows.assets()));
+    }
+
+    /** Σ min(1, |v|) over tile[from..to), in four interleaved partial sums (independent additions pipeline). */
+    private static double absoluteSum(double[] tile, int from, int to) {
+        double a = 0;
+        double b = 0;
+        double c = 0;
+        double d = 0;
+        int k = from;
+        for (; k + 4 <= to; k += 4) {
+            a += Math.min(1.0, Math.abs(tile[k]));
+            b += Math.min(1.0, Math.abs(tile[k + 1]));
+            c += Math.min(1.0, Math.abs(tile[k + 2]));
+            d += Math.min(1.0, Math.abs(tile[k + 3]));
+        }
+        for (; k < to; k++) {
+            a += Math.min(1.0, Math.abs(tile[k]));
+        }
+        return (a + b) + (c + d);
+    }
+
+    /** Σ v² over tile[from..to), in four interleaved partial sums. */
+    private static double squareSum(double[] tile, int from, int to) {
+        double a = 0;
+        double b = 0;
+        double c = 0;
+        double d = 0;
+        int k = from;
+        for (; k + 4 <= to; k += 4) {
+            a += tile[k] * tile[k];
+            b += tile[k + 1] * tile[k + 1];
+            c += tile[k + 2] * tile[k + 2];
+            d += tile[k + 3] * tile[k + 3];
+        }
+        for (; k < to; k++) {
+            a += tile[k] * tile[k];
+        }
+        return (a + b) + (c + d);
     }
 
     /** tile[(i − i0) * TILE_COLUMNS + (j − j0)] = Σ_t z_ti z_tj for i0 ≤ i &lt; i1, j0 ≤ j &lt; j0 + width. */
