@@ -17,10 +17,6 @@ import dev.sigmawalk.strategies.rules.MinVariance;
 import dev.sigmawalk.strategies.rules.RuleInput;
 import dev.sigmawalk.strategies.rules.RuleOutcome;
 import dev.sigmawalk.strategies.rules.WarmStart;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
@@ -133,13 +129,6 @@ class SemidefiniteMinVarianceTest {
     }
 
     private static String text(String file) {
-        try (InputStream in = SemidefiniteMinVarianceTest.class.getResourceAsStream(file)) {
-            if (in == null) {
-                throw new IllegalStateException("missing test resource " + file);
-            }
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return ReferenceData.text(file);
     }
 }
