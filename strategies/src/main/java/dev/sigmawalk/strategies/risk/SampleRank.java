@@ -17,11 +17,12 @@ final class SampleRank {
 
     /**
      * Whether shrinkage takes the low-rank path, whose intensity needs an L×L Gram matrix of the
-     * rows, O(L² n), at every rebalance: when 4L ≤ n. Against it stand the dense path's running
+     * rows, O(L² n), at every rebalance: when 4L &lt; n. Against it stand the dense path's running
      * sums and n×n passes, about O(n²) a rebalance; at n = 2,000 on the benchmark machine the two
-     * cost about the same near L = 500 and the Gram matrix costs four times more at L = 1,000.
+     * cost about the same near L = 500 (which therefore stays dense) and the Gram matrix costs
+     * four times more at L = 1,000.
      */
     static boolean gramPays(int window, int assets) {
-        return 4L * window <= assets;
+        return 4L * window < assets;
     }
 }
