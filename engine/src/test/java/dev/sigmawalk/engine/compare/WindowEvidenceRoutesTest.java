@@ -165,6 +165,36 @@ class WindowEvidenceRoutesTest {
         assertTrue(small.diagnostics().orElseThrow().hasMeanAbsCorrelation(), "below the size: every rebalance");
     }
 
+    /**
+     * Both routes (n = 30 > L and n = 12 &lt; L) give the same notes when only one asset has a
+     * residual: every other asset named, then that no correlation is left, and no diagnostics.
+     */
+    @Test
+    void onlyOneAssetWithAResidual_givesNamedNotes_onBothRoutes() {
+        for (int n : new int[] {30, 12}) {
+            SplittableRandom rng = new SplittableRandom(n);
+            double[] m = new double[L];
+            double[] x = new double[L * n];
+            for (int t = 0; t < L; t++) {
+                m[t] = rng.nextDouble() - 0.5;
+                for (int i = 0; i < n; i++) {
+                    x[t * n + i] = i == n - 1 ? rng.nextDouble() : (i + 1) * m[t];
+                }
+            }
+            List<String> ids = IntStream.range(0, n).mapToObj(i -> "A" + i).toList();
+            WindowEvidence e = new WindowEvidenceProbe(Map.of(), 3).probe(new EstimationWindow(
+                    LocalDate.of(2020, 12, 31), 100, ids, IntStream.range(0, n).toArray(), x, m, 12, null));
+            assertTrue(e.diagnostics().isEmpty(), "n = " + n);
+            List<String> expected = new ArrayList<>();
+            for (int i = 0; i < n - 1; i++) {
+                expected.add("asset 'A" + i + "' left out of the residual diagnostics: its market-model residual"
+                        + " variance is zero (it moves exactly with the market)");
+            }
+            expected.add("fewer than two assets with a residual variance: no residual correlation");
+            assertEquals(expected, e.notes(), "n = " + n);
+        }
+    }
+
     @Test
     void plan_scansTheFirstEveryKthAndTheLast() {
         Schedule schedule = new Schedule(new int[] {10, 20, 30, 40, 50, 60, 70}, 80);
