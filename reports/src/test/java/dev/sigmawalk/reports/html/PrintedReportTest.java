@@ -52,11 +52,12 @@ class PrintedReportTest {
     void render(@TempDir Path dir) throws Exception {
         data = ReportFixture.data();
         Path report = dir.resolve("report.html");
-        new ReportWriter().write(data, report, dir.resolve("charts"));
+        ReportPage assembled = new ReportWriter().assemble(data, dir.resolve("charts"), Runnable::run);
+        assembled.writeHtml(report);
         html = Jsoup.parse(Files.readString(report, StandardCharsets.UTF_8));
         style = html.select("style").html();
         Path pdf = dir.resolve("report.pdf");
-        ReportPdf.write(report, pdf);
+        ReportPdf.write(assembled.outline(), dir, assembled.charts(), pdf);
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             pages = doc.getNumberOfPages();
             firstPage = doc.getPage(0).getMediaBox();
