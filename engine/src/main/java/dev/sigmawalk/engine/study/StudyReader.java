@@ -33,7 +33,7 @@ public final class StudyReader {
      */
     public static Study read(Path studyFile) {
         Path file = studyFile.toAbsolutePath().normalize();
-        return read(file, YamlTree.parse(file));
+        return readTree(file, YamlTree.parse(file));
     }
 
     /**
@@ -45,10 +45,22 @@ public final class StudyReader {
      */
     public static Study read(Path studyFile, String text) {
         Path file = studyFile.toAbsolutePath().normalize();
-        return read(file, YamlTree.parse(file, text));
+        return readTree(file, YamlTree.parse(file, text));
     }
 
-    private static Study read(Path file, YamlNode document) {
+    /**
+     * Reads a study given as a tree of nodes rather than as text, for a study built in code: the
+     * same keys, defaults and messages as a file. Messages name {@code studyFile} and the key path;
+     * a node's line and column are named when they are above 0. Relative paths resolve against
+     * the folder of {@code studyFile}, which need not exist.
+     *
+     * @throws InputException naming the key path and value of the first problem
+     */
+    public static Study read(Path studyFile, YamlNode document) {
+        return readTree(studyFile.toAbsolutePath().normalize(), document);
+    }
+
+    private static Study readTree(Path file, YamlNode document) {
         Section root = Section.of(file, "", document, ROOT);
         String title = root.has("title") ? root.text("title") : defaultTitle(file);
         DataSpec data = data(Section.of(file, "data", root.node("data"), DATA));

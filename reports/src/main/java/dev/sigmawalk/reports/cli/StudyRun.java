@@ -2,15 +2,12 @@ package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
-import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
-import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
-import dev.sigmawalk.engine.run.RebalanceRecord;
 import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
@@ -97,8 +94,7 @@ public final class StudyRun {
     public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
                                     Consumer<String> warn, Instant started, long begin) {
         List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
-        List<String> warnings = new ArrayList<>(data.warnings());
-        warnings.addAll(RunPreview.of(study, data).warnings());
+        List<String> warnings = new ArrayList<>(Runs.warningsBeforeWalk(study, data));
         warnings.forEach(warn);
         long loaded = System.nanoTime();
         RunResult<WindowFindings> probed = new WalkForward<>(data.panel(), data.schedule(), strategies,
@@ -110,7 +106,7 @@ public final class StudyRun {
         long walked = System.nanoTime();
         List<Summary> summaries = Runs.summaries(run);
         List<Comparison> comparisons = Runs.comparisons(study, run);
-        List<String> found = warnings(run);
+        List<String> found = Runs.warningsOfResults(run);
         found.forEach(warn);
         warnings.addAll(found);
         ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
@@ -141,32 +137,6 @@ public final class StudyRun {
         List<Path> out = new ArrayList<>();
         out.add(study.file());
         data.fingerprints().forEach(f -> out.add(f.path()));
-        return out;
-    }
-
-    /**
-     * The warnings of the results: what the residual diagnostics left out, then one line per path
-     * whose allocation failed at some rebalance. (Those of the data and of the preview, the same
-     * lines {@code check} prints, come before the walk.)
-     */
-    private static List<String> warnings(RunResult<WindowEvidence> run) {
-        List<String> out = new ArrayList<>(EvidenceNotes.warnings(run.probes()));
-        for (PathResult p : run.paths()) {
-            List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
-            if (!failed.isEmpty()) {
-                RebalanceRecord first = failed.get(0);
-                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": no portfolio formed at "
-                        + failed.size() + " of " + p.rebalances().size() + " rebalances (first " + first.date() + ": "
-                        + first.failure().get() + "); at those rebalances the path kept its previous portfolio, or cash"
-                        + " before its first one");
-            }
-            long notes = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).count();
-            if (notes > 0) {
-                RebalanceRecord first = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).findFirst().get();
-                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": " + notes + " rebalances with notes"
-                        + " (first " + first.date() + ": " + String.join("; ", first.notes()) + ")");
-            }
-        }
         return out;
     }
 
