@@ -16,13 +16,15 @@ import java.util.Set;
  * rows) happen when the data are loaded.
  */
 public final class StudyReader {
-    private static final Set<String> ROOT = Set.of("title", "data", "walkforward", "strategies", "evidence", "output");
+    private static final Set<String> ROOT = Set.of("title", "data", "walkforward", "strategies", "evidence", "output",
+            "report");
     private static final Set<String> DATA = Set.of("assets", "layout", "values", "market", "riskfree", "periods_per_year",
             "sectors");
     private static final Set<String> WALK = Set.of("windows", "rebalance_every", "rebalance", "start", "end", "cost_bps");
     /** A cost of 10 000 bps takes the whole traded value; more is no longer a cost. */
     private static final double MAX_COST_BPS = 10_000;
     private static final Set<String> EVIDENCE = Set.of("resamples", "seed", "block_length");
+    private static final Set<String> REPORT = Set.of("paper");
 
     private StudyReader() {
     }
@@ -70,7 +72,10 @@ public final class StudyReader {
                 ? evidence(Section.of(file, "evidence", root.node("evidence"), EVIDENCE))
                 : EvidenceSpec.defaults();
         Path output = root.resolve(root.has("output") ? root.text("output") : StudyDefaults.OUTPUT);
-        return new Study(file, title, data, walk, strategies, evidence, output);
+        ReportSpec report = root.has("report")
+                ? report(Section.of(file, "report", root.node("report"), REPORT))
+                : ReportSpec.defaults();
+        return new Study(file, title, data, walk, strategies, evidence, output, report);
     }
 
     private static String defaultTitle(Path file) {
@@ -162,5 +167,9 @@ public final class StudyReader {
         long seed = s.has("seed") ? s.wholeNumber("seed") : d.seed();
         int block = s.has("block_length") ? s.integer("block_length", 0) : d.blockLength();
         return new EvidenceSpec(resamples, seed, block);
+    }
+
+    private static ReportSpec report(Section s) {
+        return new ReportSpec(s.has("paper") ? s.choice("paper", Paper.class) : StudyDefaults.PAPER);
     }
 }

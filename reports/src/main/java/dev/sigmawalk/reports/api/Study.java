@@ -91,6 +91,7 @@ public final class Study {
         private final Map<String, Object> walkForward = new LinkedHashMap<>();
         private final List<Map<String, Object>> strategies = new ArrayList<>();
         private final Map<String, Object> evidence = new LinkedHashMap<>();
+        private final Map<String, Object> report = new LinkedHashMap<>();
 
         private Builder() {
         }
@@ -139,6 +140,12 @@ public final class Study {
             return this;
         }
 
+        /** One key of {@code report:}, for example {@code report("paper", "letter")}. */
+        public Builder report(String key, Object value) {
+            report.put(key, checked("report." + key, value));
+            return this;
+        }
+
         /**
          * Validates the study exactly as a study file is validated, with the same messages; they
          * name {@link #SOURCE_NAME} and the key path.
@@ -154,6 +161,9 @@ public final class Study {
             root.put("strategies", strategies);
             if (!evidence.isEmpty()) {
                 root.put("evidence", evidence);
+            }
+            if (!report.isEmpty()) {
+                root.put("report", report);
             }
             return new Study(StudyReader.read(Path.of(SOURCE_NAME), StudyTree.node("", root)));
         }

@@ -1,18 +1,30 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.study.Paper;
 import java.util.List;
 
 /**
  * What the template shows, already formatted as text. Every string is plain text that the
  * template escapes, except {@link Figure#svg()}, which this program generated itself.
- * Sections that do not apply are empty lists, so the template leaves them out.
+ * Sections that do not apply are empty lists, so the template leaves them out. {@code paper} is
+ * the CSS page size keyword of the print style sheet ({@code a4} or {@code letter}).
  */
 public record ReportView(String title, String subtitle, List<Swatch> palette, List<LegendEntry> legend,
                          Headline headline, Setup setup,
                          Table table, Cost cost, Honesty honesty, Concentration concentration,
                          List<Shrinkage> shrinkage, Windows windows, List<WindowCharts> overTime,
                          List<EvidenceBlock> evidence, List<Matrix> sectorMap, Record record,
-                         List<FactorLoopSection> factorLoop) {
+                         List<FactorLoopSection> factorLoop, String paper) {
+
+    /** A view printed on A4. */
+    public ReportView(String title, String subtitle, List<Swatch> palette, List<LegendEntry> legend,
+                      Headline headline, Setup setup, Table table, Cost cost, Honesty honesty,
+                      Concentration concentration, List<Shrinkage> shrinkage, Windows windows,
+                      List<WindowCharts> overTime, List<EvidenceBlock> evidence, List<Matrix> sectorMap,
+                      Record record, List<FactorLoopSection> factorLoop) {
+        this(title, subtitle, palette, legend, headline, setup, table, cost, honesty, concentration, shrinkage, windows,
+                overTime, evidence, sectorMap, record, factorLoop, Paper.A4.spelling());
+    }
 
     /** A view without the factor-model section. */
     public ReportView(String title, String subtitle, List<Swatch> palette, List<LegendEntry> legend,

@@ -42,7 +42,8 @@ class StudyBuilderTest {
                 .strategy("index", Map.of("risk", "single-index", "objective", "min-variance",
                         "bounds", List.of(0, 0.1)))
                 .strategy("tilted", Map.of("risk", "shrinkage", "shrinkage_target", "identity",
-                        "objective", "mean-variance", "risk_aversion", 4));
+                        "objective", "mean-variance", "risk_aversion", 4))
+                .report("paper", "letter");
     }
 
     private List<String> baseYaml() {
@@ -66,7 +67,9 @@ class StudyBuilderTest {
                 "    risk: shrinkage",
                 "    shrinkage_target: identity",
                 "    objective: mean-variance",
-                "    risk_aversion: 4");
+                "    risk_aversion: 4",
+                "report:",
+                "  paper: letter");
     }
 
     private dev.sigmawalk.engine.study.Study fromFile(List<String> lines) throws IOException {
@@ -84,6 +87,7 @@ class StudyBuilderTest {
         assertEquals(file.walkForward(), code.walkForward());
         assertEquals(file.strategies(), code.strategies());
         assertEquals(file.evidence(), code.evidence());
+        assertEquals(file.report(), code.report());
         assertEquals(Path.of(Study.Builder.SOURCE_NAME).toAbsolutePath().normalize(), code.file(),
                 "the study stands in the working folder");
     }
@@ -105,7 +109,8 @@ class StudyBuilderTest {
                 new Case("infinite", b -> b.walkForward("cost_bps", Double.NEGATIVE_INFINITY), "  cost_bps: 12.5",
                         "  cost_bps: -.inf"),
                 new Case("few resamples", b -> b.evidence("resamples", 5), "  risk_aversion: 4",
-                        "  risk_aversion: 4\nevidence:\n  resamples: 5"));
+                        "  risk_aversion: 4\nevidence:\n  resamples: 5"),
+                new Case("unknown paper", b -> b.report("paper", "a3"), "  paper: letter", "  paper: a3"));
         for (Case c : cases) {
             InputException fromCode = assertThrows(InputException.class, () -> c.code().apply(base()).build(), c.what());
             List<String> yaml = String.join("\n", baseYaml()).replace(c.yamlFrom(), c.yamlTo()).lines().toList();

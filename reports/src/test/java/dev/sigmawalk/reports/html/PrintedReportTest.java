@@ -167,6 +167,6 @@ class PrintedReportTest {
         assertTrue(style.contains("figure { margin: 1rem 0 1.2rem; break-inside: avoid;"), "no chart is split");
         assertTrue(style.contains("@bottom-right { content: \"Page \" counter(page) \" of \" counter(pages);"),
                 "pages are numbered");
-        assertTrue(style.contains("@page {\n  size: auto;"), "A4 or Letter, as the printer is set");
+        assertTrue(style.contains("@page {\n  size: a4 portrait;"), "the study's paper, A4 by default, as in the PDF");
     }
 }
