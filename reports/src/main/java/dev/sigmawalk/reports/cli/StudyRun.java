@@ -18,6 +18,8 @@ import dev.sigmawalk.reports.files.FactorDiagnosticsFile;
 import dev.sigmawalk.reports.files.Manifest;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.ResultFiles;
+import dev.sigmawalk.reports.files.SectorCorrelationsFile;
+import dev.sigmawalk.reports.html.SectorGrids;
 import dev.sigmawalk.strategies.FactorDiagnosticsProbe;
 import dev.sigmawalk.strategies.StrategyCatalog;
 import dev.sigmawalk.strategies.risk.FactorDiagnostics;
@@ -116,6 +118,8 @@ public final class StudyRun {
         EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
         FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
                 study.walkForward().windows());
+        SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
+                ReportStep.diagnostics(run, study.walkForward().windows()), ReportStep.flatten(factorDiagnostics)));
         EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
         EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
         long tested = System.nanoTime();
