@@ -1,5 +1,7 @@
 package dev.sigmawalk.engine.compare;
 
+import dev.sigmawalk.engine.evidence.ResidualFit;
+import dev.sigmawalk.engine.evidence.ResidualRows;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.model.WindowMoments;
 import java.util.ArrayList;
@@ -12,6 +14,10 @@ import java.util.Optional;
  * degenerate window is reported instead of stopping the run: a market whose excess return does
  * not vary leaves no market-model residuals at all; an asset whose residual variance is zero
  * (it moves exactly with the market) has no residual correlation and is left out, by name.
+ *
+ * <p>Two routes, the same decisions: {@link #of} reads the window's dense moments (the route
+ * when L ≥ n, where any model needs them anyway), {@link #rows} fits the residuals from the
+ * window's rows in O(L n) and never asks for a moment matrix (the route when L &lt; n).
  */
 final class ResidualGuard {
     /**
@@ -22,6 +28,7 @@ final class ResidualGuard {
     /** The note of a window whose market excess return does not vary (already warned of by the window scan). */
     static final String CONSTANT_MARKET = "the market's excess return does not vary in the window:"
             + " no market-model residuals";
+    private static final String TOO_FEW = "fewer than two assets with a residual variance: no residual correlation";
     /** Market-model residuals need more rows than the two regressors (intercept, market). */
     static final int MIN_ROWS = 3;
 
@@ -48,11 +55,9 @@ final class ResidualGuard {
     }
 
     static Usable of(EstimationWindow window) {
-        if (window.assetCount() < 2) {
-            return Usable.none("fewer than two eligible assets: no residual correlation");
-        }
-        if (window.length() < MIN_ROWS) {
-            return Usable.none("a window of " + window.length() + " rows leaves no market-model residuals");
+        Optional<String> refused = refusal(window);
+        if (refused.isPresent()) {
+            return Usable.none(refused.get());
         }
         WindowMoments m = window.moments();
         double smm = m.marketVariance();
@@ -67,18 +72,69 @@ final class ResidualGuard {
             if (d > RELATIVE_ZERO_VARIANCE * sii && Double.isFinite(d)) {
                 keep.add(i);
             } else {
-                notes.add("asset '" + window.assets().get(i) + "' left out of the residual diagnostics: its"
-                        + " market-model residual variance is zero (it moves exactly with the market)");
+                notes.add(leftOut(window.assets().get(i)));
             }
         }
         if (keep.size() < 2) {
-            notes.add("fewer than two assets with a residual variance: no residual correlation");
+            notes.add(TOO_FEW);
             return new Usable(Optional.empty(), List.of(), notes);
         }
         if (keep.size() == m.assets()) {
             return new Usable(Optional.of(m), window.assets(), List.of());
         }
         return new Usable(Optional.of(subset(m, keep)), names(window.assets(), keep), notes);
+    }
+
+    /**
+     * The standardised residuals of the usable assets, from the window's rows alone.
+     *
+     * @param rows the residuals of the usable assets; empty when nothing can be computed
+     * @param notes what was left out and why, in words (the same notes {@link #of} gives)
+     */
+    record UsableRows(Optional<ResidualRows> rows, List<String> notes) {
+        UsableRows {
+            Objects.requireNonNull(rows, "rows");
+            notes = List.copyOf(notes);
+        }
+    }
+
+    static UsableRows rows(EstimationWindow window) {
+        Optional<String> refused = refusal(window);
+        if (refused.isPresent()) {
+            return new UsableRows(Optional.empty(), List.of(refused.get()));
+        }
+        ResidualFit fit = ResidualFit.of(window);
+        int[] keep = new int[fit.assetCount()];
+        int kept = 0;
+        List<String> notes = new ArrayList<>();
+        for (int i = 0; i < fit.assetCount(); i++) {
+            if (fit.hasResidual(i)) {
+                keep[kept++] = i;
+            } else {
+                notes.add(leftOut(window.assets().get(i)));
+            }
+        }
+        if (kept < 2) {
+            notes.add(TOO_FEW);
+            return new UsableRows(Optional.empty(), notes);
+        }
+        return new UsableRows(Optional.of(fit.standardised(java.util.Arrays.copyOf(keep, kept))), notes);
+    }
+
+    /** Why a window gives no residuals at all (too few assets or rows, a market that does not vary). */
+    private static Optional<String> refusal(EstimationWindow window) {
+        if (window.assetCount() < 2) {
+            return Optional.of("fewer than two eligible assets: no residual correlation");
+        }
+        if (window.length() < MIN_ROWS) {
+            return Optional.of("a window of " + window.length() + " rows leaves no market-model residuals");
+        }
+        return window.marketVaries() ? Optional.empty() : Optional.of(CONSTANT_MARKET);
+    }
+
+    private static String leftOut(String asset) {
+        return "asset '" + asset + "' left out of the residual diagnostics: its"
+                + " market-model residual variance is zero (it moves exactly with the market)";
     }
 
     private static List<String> names(List<String> assets, List<Integer> keep) {

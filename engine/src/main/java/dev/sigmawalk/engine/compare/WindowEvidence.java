@@ -15,8 +15,10 @@ import java.util.Optional;
  *
  * @param date rebalance date
  * @param window L
- * @param diagnostics mean |ρ|, Breusch-Pagan LM and Pesaran CD; empty with fewer than two assets
- * @param largestPairs the pairs with the largest residual correlation, largest first
+ * @param diagnostics mean |ρ| (NaN where not computed), Breusch-Pagan LM, Pesaran CD and LM_adj; empty
+ *        with fewer than two assets
+ * @param largestPairs the pairs with the largest residual correlation, largest first; empty where
+ *        the all-pairs statistics were not computed at this rebalance ({@link PairScanPlan})
  * @param sectors residual correlation within and across sectors, when sectors are known
  * @param notes what the diagnostics left out of this window and why (a constant market, an asset
  *              that moves exactly with the market); empty for an ordinary window

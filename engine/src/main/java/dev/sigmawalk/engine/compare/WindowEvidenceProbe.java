@@ -1,18 +1,28 @@
 package dev.sigmawalk.engine.compare;
 
+import dev.sigmawalk.engine.evidence.PairScan;
 import dev.sigmawalk.engine.evidence.ResidualCorrelations;
+import dev.sigmawalk.engine.evidence.ResidualDiagnostics;
+import dev.sigmawalk.engine.evidence.ResidualPair;
+import dev.sigmawalk.engine.evidence.ResidualRows;
+import dev.sigmawalk.engine.evidence.SectorCoMovement;
 import dev.sigmawalk.engine.evidence.SingleIndexEstimates;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.run.WindowProbe;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 
 /**
- * Computes {@link WindowEvidence} from each estimation window, from the window's shared moments
- * (O(n²) per window, no second pass over the data).
+ * Computes {@link WindowEvidence} from each estimation window (Method §8) by the cheaper of two
+ * exact routes. When L ≥ n, from the window's dense moments, which every model of such a window
+ * needs anyway: O(n²). When L &lt; n, from the window's rows alone, never asking for an n×n
+ * moment matrix: the residuals are fitted in O(L n), CD, LM and LM_adj follow from sum
+ * identities in O(L² n) and the sector means in O(L n + L s²) ({@link ResidualRows}); the
+ * mean |ρ| and the largest pairs need every pair, O(L n²/2) in tiles ({@link PairScan}), and
+ * are computed at the rebalances the {@link PairScanPlan} names.
  */
 public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
     /** The group of assets the sectors file does not name. */
@@ -20,17 +30,25 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
 
     private final Map<String, String> sectors;
     private final int pairs;
+    private final PairScanPlan plan;
 
     /**
      * @param sectors asset to sector (may be empty)
      * @param pairs how many of the most correlated residual pairs to keep per window
+     * @param plan at which rebalances every pair is scanned
      */
-    public WindowEvidenceProbe(Map<String, String> sectors, int pairs) {
+    public WindowEvidenceProbe(Map<String, String> sectors, int pairs, PairScanPlan plan) {
         this.sectors = Map.copyOf(sectors);
         if (!(pairs >= 0)) {
             throw new IllegalArgumentException("pairs (" + pairs + ") must be >= 0");
         }
         this.pairs = pairs;
+        this.plan = Objects.requireNonNull(plan, "plan");
+    }
+
+    /** Every pair scanned at every rebalance. */
+    public WindowEvidenceProbe(Map<String, String> sectors, int pairs) {
+        this(sectors, pairs, PairScanPlan.always());
     }
 
     /**
@@ -41,23 +59,52 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
     @Override
     public WindowEvidence probe(EstimationWindow window) {
         Optional<SingleIndexEstimates> estimates = estimates(window);
+        boolean scan = plan.scans(window.endRow(), window.assetCount());
+        Found found;
+        try {
+            found = window.length() >= window.assetCount() ? fromMoments(window, scan) : fromRows(window, scan);
+        } catch (IllegalArgumentException e) {
+            // The guard applies the correlations' own rules, so this is a non-finite input only.
+            found = new Found(Optional.empty(), List.of(), Optional.empty(),
+                    List.of("residual diagnostics not computed: " + e.getMessage()));
+        }
+        return new WindowEvidence(window.date(), window.length(), found.diagnostics, found.largest, found.sectors,
+                found.notes, estimates);
+    }
+
+    /** What one route found. */
+    private record Found(Optional<ResidualDiagnostics> diagnostics, List<ResidualPair> largest,
+                         Optional<SectorCoMovement> sectors, List<String> notes) {
+    }
+
+    private Found fromMoments(EstimationWindow window, boolean scan) {
         ResidualGuard.Usable usable = ResidualGuard.of(window);
         if (usable.moments().isEmpty()) {
-            return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty(),
-                    usable.notes(), estimates);
+            return new Found(Optional.empty(), List.of(), Optional.empty(), usable.notes());
         }
-        ResidualCorrelations rho;
-        try {
-            rho = ResidualCorrelations.of(usable.moments().get(), usable.assets());
-        } catch (IllegalArgumentException e) {
-            List<String> notes = new ArrayList<>(usable.notes());
-            notes.add("residual diagnostics not computed: " + e.getMessage());
-            return new WindowEvidence(window.date(), window.length(), Optional.empty(), List.of(), Optional.empty(),
-                    notes, estimates);
+        ResidualCorrelations rho = ResidualCorrelations.of(usable.moments().get(), usable.assets());
+        ResidualDiagnostics d = rho.diagnostics();
+        return new Found(Optional.of(scan ? d : d.withMeanAbsCorrelation(Double.NaN)),
+                scan ? rho.largestPairs(pairs) : List.of(),
+                sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectorsOf(usable.assets()))),
+                usable.notes());
+    }
+
+    private Found fromRows(EstimationWindow window, boolean scan) {
+        ResidualGuard.UsableRows usable = ResidualGuard.rows(window);
+        if (usable.rows().isEmpty()) {
+            return new Found(Optional.empty(), List.of(), Optional.empty(), usable.notes());
         }
-        return new WindowEvidence(window.date(), window.length(), Optional.of(rho.diagnostics()),
-                rho.largestPairs(pairs), sectors.isEmpty() ? Optional.empty() : Optional.of(rho.bySector(sectorsOf(window))),
-                usable.notes(), estimates);
+        ResidualRows z = usable.rows().get();
+        ResidualDiagnostics d = z.diagnostics();
+        List<ResidualPair> largest = List.of();
+        if (scan) {
+            PairScan all = z.scan(pairs);
+            d = d.withMeanAbsCorrelation(all.meanAbsCorrelation());
+            largest = all.largest();
+        }
+        return new Found(Optional.of(d), largest,
+                sectors.isEmpty() ? Optional.empty() : Optional.of(z.bySector(sectorsOf(z.assets()))), usable.notes());
     }
 
     /**
@@ -76,10 +123,10 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         return Optional.of(SingleIndexEstimates.of(window.moments(), window.assets()));
     }
 
-    /** Every asset of the window with its sector; assets the sectors file does not list form their own group. */
-    private Map<String, String> sectorsOf(EstimationWindow window) {
+    /** Every given asset with its sector; assets the sectors file does not list form their own group. */
+    private Map<String, String> sectorsOf(List<String> assets) {
         Map<String, String> out = new HashMap<>();
-        for (String a : window.assets()) {
+        for (String a : assets) {
             out.put(a, sectors.getOrDefault(a, UNLISTED));
         }
         return out;

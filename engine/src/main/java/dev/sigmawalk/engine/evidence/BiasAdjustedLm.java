@@ -38,12 +38,26 @@ public record BiasAdjustedLm(double statistic, double pValue) {
     }
 
     /**
-     * The test when every residual comes from the same regression (k regressors over L rows), as
-     * for the single-index residuals (k = 2: intercept and market).
+     * The test when every pair shares its exact moments, as when every residual comes from the
+     * same regression (the single index, k = 2: intercept and market): the sum over pairs then
+     * needs only Σ ρ̂², Σ (d ρ̂² − μ) / v = (d Σ ρ̂² − P μ) / v with P = n(n-1)/2, which
+     * {@link ResidualRows} gets without visiting pairs. Regressions that differ per asset keep
+     * their per-pair moments: {@link #of}.
+     *
+     * @param assets n >= 2
+     * @param sumOfSquares Σ_{i&lt;j} ρ̂_ij², >= 0
+     * @param common the moments every pair shares
      */
-    public static BiasAdjustedLm common(int assets, int length, int regressors, PairCorrelation correlation) {
-        ExactPairMoments moments = ExactPairMoments.common(length, regressors);
-        return of(assets, correlation, (i, j) -> moments);
+    public static BiasAdjustedLm fromSquares(int assets, double sumOfSquares, ExactPairMoments common) {
+        Objects.requireNonNull(common, "common");
+        if (!(assets >= 2) || !(sumOfSquares >= 0)) {
+            throw new IllegalArgumentException("LM_adj needs >= 2 assets (" + assets + ") and a sum of squares >= 0 ("
+                    + sumOfSquares + ")");
+        }
+        double pairs = (double) assets * (assets - 1) / 2;
+        double sum = (common.degreesOfFreedom() * sumOfSquares - pairs * common.mean()) / common.sd();
+        double statistic = Math.sqrt(2.0 / ((double) assets * (assets - 1))) * sum;
+        return new BiasAdjustedLm(statistic, TailProbabilities.upperNormal(statistic));
     }
 
     /**

@@ -4,7 +4,9 @@ package dev.sigmawalk.engine.evidence;
  * Is the single-index assumption (uncorrelated residuals) holding in one window? Method §8.
  *
  * <ul>
- *   <li>mean |ρ_ij| over the n(n-1)/2 pairs i &lt; j;</li>
+ *   <li>mean |ρ_ij| over the n(n-1)/2 pairs i &lt; j; the one statistic here that needs every pair
+ *       by definition, so on very large windows it is computed only at some rebalances
+ *       (Method §8) and is NaN, "not computed at this rebalance", at the others;</li>
  *   <li>Breusch &amp; Pagan (1980, Rev. Econ. Studies 47, 239-253) Lagrange-multiplier test of a
  *       diagonal residual covariance: LM = L Σ_{i&lt;j} ρ_ij², asymptotically χ² with
  *       n(n-1)/2 degrees of freedom as L grows with n fixed; p = P(χ² &gt; LM);</li>
@@ -23,7 +25,7 @@ package dev.sigmawalk.engine.evidence;
  *
  * @param assets n
  * @param length L
- * @param meanAbsCorrelation mean |ρ_ij|, in [0, 1]
+ * @param meanAbsCorrelation mean |ρ_ij|, in [0, 1]; NaN when not computed at this rebalance
  * @param lmStatistic LM >= 0
  * @param lmDegreesOfFreedom n(n-1)/2
  * @param lmPValue in [0, 1]
@@ -43,8 +45,9 @@ public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelat
             throw new IllegalArgumentException("LM degrees of freedom (" + lmDegreesOfFreedom + ") must be n(n-1)/2 = "
                     + assets * (assets - 1) / 2);
         }
-        if (!(meanAbsCorrelation >= 0 && meanAbsCorrelation <= 1)) {
-            throw new IllegalArgumentException("mean |residual correlation| (" + meanAbsCorrelation + ") must be in [0, 1]");
+        if (!(meanAbsCorrelation >= 0 && meanAbsCorrelation <= 1) && !Double.isNaN(meanAbsCorrelation)) {
+            throw new IllegalArgumentException("mean |residual correlation| (" + meanAbsCorrelation
+                    + ") must be in [0, 1], or NaN when not computed");
         }
         if (!(lmStatistic >= 0) || Double.isInfinite(lmStatistic)) {
             throw new IllegalArgumentException("LM statistic (" + lmStatistic + ") must be finite and >= 0");
@@ -70,13 +73,23 @@ public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelat
         return !Double.isNaN(lmAdjStatistic);
     }
 
+    /** True when the mean |ρ| was computed at this rebalance. */
+    public boolean hasMeanAbsCorrelation() {
+        return !Double.isNaN(meanAbsCorrelation);
+    }
+
+    /** These statistics with the mean |ρ| of an all-pairs scan. */
+    public ResidualDiagnostics withMeanAbsCorrelation(double mean) {
+        return new ResidualDiagnostics(assets, length, mean, lmStatistic, lmDegreesOfFreedom, lmPValue, cdStatistic,
+                cdPValue, lmAdjStatistic, lmAdjPValue);
+    }
+
     /** Intercept and market. */
     private static final int SINGLE_INDEX_REGRESSORS = 2;
 
-    /** The statistics of a window's residual correlations. */
+    /** The statistics of a window's residual correlations, summed pair by pair. */
     static ResidualDiagnostics of(ResidualCorrelations rho) {
         int n = rho.assetCount();
-        int length = rho.length();
         double sum = 0;
         double sumAbs = 0;
         double sumSquares = 0;
@@ -88,17 +101,30 @@ public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelat
                 sumSquares += r * r;
             }
         }
+        return fromSums(n, rho.length(), sum, sumSquares, sumAbs / (n * (n - 1) / 2));
+    }
+
+    /**
+     * The statistics from the two sums over pairs i &lt; j, for single-index residuals (every asset
+     * regressed on the same intercept and market, k = 2):
+     * LM = L Σρ², CD = √(2L / (n(n-1))) Σρ and, since every pair then shares μ and v,
+     * LM_adj = √(2 / (n(n-1))) (d Σρ² − P μ) / v with P = n(n-1)/2 ({@link BiasAdjustedLm#fromSquares}).
+     *
+     * @param meanAbsCorrelation mean |ρ|, or NaN when not computed
+     */
+    static ResidualDiagnostics fromSums(int n, int length, double sum, double sumSquares, double meanAbsCorrelation) {
         int pairs = n * (n - 1) / 2;
         double lm = length * sumSquares;
         double cd = Math.sqrt(2.0 * length / ((double) n * (n - 1))) * sum;
         double adjusted = Double.NaN;
         double adjustedP = Double.NaN;
         if (length >= MIN_LM_ADJ_LENGTH) {
-            BiasAdjustedLm test = BiasAdjustedLm.common(n, length, SINGLE_INDEX_REGRESSORS, rho::correlation);
+            BiasAdjustedLm test = BiasAdjustedLm.fromSquares(n, sumSquares,
+                    ExactPairMoments.common(length, SINGLE_INDEX_REGRESSORS));
             adjusted = test.statistic();
             adjustedP = test.pValue();
         }
-        return new ResidualDiagnostics(n, length, sumAbs / pairs, lm, pairs,
+        return new ResidualDiagnostics(n, length, meanAbsCorrelation, lm, pairs,
                 TailProbabilities.chiSquaredUpper(lm, pairs), cd, TailProbabilities.twoSidedNormal(cd), adjusted,
                 adjustedP);
     }

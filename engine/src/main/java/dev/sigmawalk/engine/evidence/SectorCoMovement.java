@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
-import java.util.TreeMap;
 
 /**
  * Residual correlations grouped by sector: the mean over pairs inside each sector, and the mean
@@ -35,63 +34,50 @@ public record SectorCoMovement(List<SectorCorrelation> withinSectors, int across
     }
 
     /**
-     * Groups a window's residual correlations.
+     * Groups a window's residual correlations pair by pair.
      *
      * @param sectorOf sector of every asset of the window; an asset without one is an error
      */
     static SectorCoMovement of(ResidualCorrelations rho, Map<String, String> sectorOf) {
-        List<String> assets = rho.assets();
-        int n = assets.size();
-        String[] sector = new String[n];
-        Map<String, Integer> members = new TreeMap<>();
+        SectorIndex index = SectorIndex.of(rho.assets(), sectorOf);
+        int n = rho.assetCount();
+        int k = index.sectors();
+        double[] cells = new double[k * k];
         for (int i = 0; i < n; i++) {
-            String s = sectorOf.get(assets.get(i));
-            if (s == null) {
-                throw new IllegalArgumentException("asset '" + assets.get(i) + "' has no sector in the sector map");
+            int g = index.of(i);
+            for (int j = i + 1; j < n; j++) {
+                int h = index.of(j);
+                cells[Math.min(g, h) * k + Math.max(g, h)] += rho.correlation(i, j);
             }
-            sector[i] = s;
-            members.merge(s, 1, Integer::sum);
         }
-        List<String> names = new ArrayList<>(members.keySet());
-        int k = names.size();
-        int[] index = new int[n];
-        for (int i = 0; i < n; i++) {
-            index[i] = java.util.Collections.binarySearch(names, sector[i]);
-        }
-        Map<String, Double> withinSum = new TreeMap<>();
-        double[] betweenSum = new double[k * k];
-        int[] betweenCount = new int[k * k];
+        return fromCells(index, cells);
+    }
+
+    /**
+     * The means from the sums of ρ over each cell's pairs.
+     *
+     * @param cells s×s row-major, upper triangle read: cell (g, g) the sum over pairs i &lt; j inside
+     *        sector g, cell (g, h), g &lt; h, the sum over pairs with one asset in each
+     */
+    static SectorCoMovement fromCells(SectorIndex index, double[] cells) {
+        int k = index.sectors();
+        List<SectorCorrelation> within = new ArrayList<>();
+        List<SectorPairMean> between = new ArrayList<>();
         double acrossSum = 0;
         int across = 0;
-        for (int i = 0; i < n; i++) {
-            for (int j = i + 1; j < n; j++) {
-                double r = rho.correlation(i, j);
-                if (sector[i].equals(sector[j])) {
-                    withinSum.merge(sector[i], r, Double::sum);
-                } else {
-                    acrossSum += r;
-                    across++;
-                    int cell = Math.min(index[i], index[j]) * k + Math.max(index[i], index[j]);
-                    betweenSum[cell] += r;
-                    betweenCount[cell]++;
-                }
+        for (int g = 0; g < k; g++) {
+            int m = index.members(g);
+            if (m >= 2) {
+                int pairs = m * (m - 1) / 2;
+                within.add(new SectorCorrelation(index.name(g), m, pairs, clamp(cells[g * k + g] / pairs)));
             }
-        }
-        List<SectorPairMean> between = new ArrayList<>();
-        for (int a = 0; a < k; a++) {
-            for (int b = a + 1; b < k; b++) {
-                int cell = a * k + b;
-                if (betweenCount[cell] > 0) {
-                    between.add(new SectorPairMean(names.get(a), names.get(b), betweenCount[cell],
-                            clamp(betweenSum[cell] / betweenCount[cell])));
-                }
+            for (int h = g + 1; h < k; h++) {
+                int pairs = m * index.members(h);
+                double sum = cells[g * k + h];
+                acrossSum += sum;
+                across += pairs;
+                between.add(new SectorPairMean(index.name(g), index.name(h), pairs, clamp(sum / pairs)));
             }
-        }
-        List<SectorCorrelation> within = new ArrayList<>();
-        for (Map.Entry<String, Double> e : withinSum.entrySet()) {
-            int m = members.get(e.getKey());
-            int pairs = m * (m - 1) / 2;
-            within.add(new SectorCorrelation(e.getKey(), m, pairs, clamp(e.getValue() / pairs)));
         }
         OptionalDouble acrossMean = across == 0 ? OptionalDouble.empty() : OptionalDouble.of(clamp(acrossSum / across));
         return new SectorCoMovement(within, across, acrossMean, between);

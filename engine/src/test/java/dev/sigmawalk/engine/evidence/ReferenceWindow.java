@@ -23,9 +23,14 @@ final class ReferenceWindow {
     }
 
     static EstimationWindow load() {
-        try (InputStream in = ReferenceWindow.class.getResourceAsStream("window.csv")) {
+        return load("window.csv");
+    }
+
+    /** A window file of the same layout (row, market, then one column per asset). */
+    static EstimationWindow load(String resource) {
+        try (InputStream in = ReferenceWindow.class.getResourceAsStream(resource)) {
             if (in == null) {
-                throw new IllegalStateException("test resource window.csv is missing");
+                throw new IllegalStateException("test resource " + resource + " is missing");
             }
             BufferedReader reader = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
             String[] header = reader.readLine().split(",");

@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.Comparisons;
 import dev.sigmawalk.engine.compare.EvidenceNotes;
+import dev.sigmawalk.engine.compare.PairScanPlan;
 import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
@@ -45,7 +46,8 @@ public final class Runs {
                                                  List<StrategyDefinition> strategies, int threads,
                                                  ProgressListener progress) {
         return new WalkForward<>(data.panel(), data.schedule(), strategies, study.walkForward().windows(),
-                study.walkForward().costBps(), new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS))
+                study.walkForward().costBps(), new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS,
+                        PairScanPlan.of(data.schedule())))
                 .run(threads, progress);
     }
 

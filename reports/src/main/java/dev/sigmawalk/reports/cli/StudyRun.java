@@ -2,6 +2,7 @@ package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
+import dev.sigmawalk.engine.compare.PairScanPlan;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
@@ -101,7 +102,8 @@ public final class StudyRun {
         long loaded = System.nanoTime();
         RunResult<WindowFindings> probed = new WalkForward<>(data.panel(), data.schedule(), strategies,
                 study.walkForward().windows(), study.walkForward().costBps(),
-                WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), Runs.LARGEST_PAIRS),
+                WindowFindings.probe(new WindowEvidenceProbe(data.sectors(), Runs.LARGEST_PAIRS,
+                        PairScanPlan.of(data.schedule())),
                         FactorDiagnosticsProbe.of(study, data))).run(threads, progress);
         RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(probed);
         Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(probed);

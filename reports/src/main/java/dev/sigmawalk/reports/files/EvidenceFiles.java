@@ -19,7 +19,8 @@ public final class EvidenceFiles {
     /**
      * {@code diagnostics.csv}: date,window,assets,mean_abs_residual_corr,lm_stat,lm_pvalue,cd_stat,
      * cd_pvalue,lm_adj_stat,lm_adj_pvalue, one row per window length per rebalance (windows in study
-     * order). LM_adj cells are empty where the window is too short for it (Method §8).
+     * order). LM_adj cells are empty where the window is too short for it, and the mean |ρ| cell
+     * where a large window's all-pairs statistics were not computed at that rebalance (Method §8).
      */
     public static void writeDiagnostics(Path file, Map<Integer, List<WindowEvidence>> byWindow, List<Integer> windows) {
         try (CsvWriter csv = new CsvWriter(file, "date", "window", "assets", "mean_abs_residual_corr", "lm_stat",

@@ -22,9 +22,11 @@ public final class SweepFiles {
      * @param bias bias statistic
      * @param status ran, reused or failed
      * @param reason why the point failed; empty otherwise
+     * @param comparison the row's comparison with its baseline over the grid
      */
     public record Line(String point, List<String> values, String strategy, String window, double volatility,
-                       double sharpe, double meanTurnover, double bias, String status, String reason) {
+                       double sharpe, double meanTurnover, double bias, String status, String reason,
+                       Comparison comparison) {
         public Line {
             Objects.requireNonNull(point, "point");
             values = List.copyOf(values);
@@ -32,20 +34,41 @@ public final class SweepFiles {
             Objects.requireNonNull(window, "window");
             Objects.requireNonNull(status, "status");
             Objects.requireNonNull(reason, "reason");
+            Objects.requireNonNull(comparison, "comparison");
         }
     }
 
     /**
-     * Header {@code point,<one column per varied key>,strategy,window,volatility,sharpe,mean_turnover,bias,status,reason}.
-     * Measures are copied from each point's {@code summary.csv}, so they carry the same digits.
+     * A row's variance comparison in the grid's family (Method §9).
+     *
+     * @param baseline the strategy it was compared with in its point's {@code tests.csv}; empty for none
+     * @param familyPValue Romano-Wolf adjusted over the grid family on the common dates (NaN = empty cell)
+     * @param holmPValue Holm-adjusted over every comparison of the grid, each on its own period
+     * @param note why a compared row has no family p-value; empty otherwise
+     */
+    public record Comparison(String baseline, double familyPValue, double holmPValue, String note) {
+        /** A row that is not compared with anything. */
+        public static final Comparison NONE = new Comparison("", Double.NaN, Double.NaN, "");
+
+        public Comparison {
+            Objects.requireNonNull(baseline, "baseline");
+            Objects.requireNonNull(note, "note");
+        }
+    }
+
+    /**
+     * Header {@code point,<one column per varied key>,strategy,window,volatility,sharpe,mean_turnover,bias,status,reason,
+     * baseline,family_pvalue,holm_pvalue,family_note}. Measures are copied from each point's
+     * {@code summary.csv}, so they carry the same digits.
      */
     public static void writeSweep(Path file, List<String> keys, List<Line> lines) {
-        String[] header = new String[keys.size() + 9];
+        String[] header = new String[keys.size() + 13];
         header[0] = "point";
         for (int i = 0; i < keys.size(); i++) {
             header[i + 1] = keys.get(i);
         }
-        String[] tail = {"strategy", "window", "volatility", "sharpe", "mean_turnover", "bias", "status", "reason"};
+        String[] tail = {"strategy", "window", "volatility", "sharpe", "mean_turnover", "bias", "status", "reason",
+            "baseline", "family_pvalue", "holm_pvalue", "family_note"};
         System.arraycopy(tail, 0, header, keys.size() + 1, tail.length);
         try (CsvWriter csv = new CsvWriter(file, header)) {
             for (Line l : lines) {
@@ -56,7 +79,9 @@ public final class SweepFiles {
                 csv.text(l.point());
                 l.values().forEach(csv::text);
                 csv.text(l.strategy()).text(l.window()).number(l.volatility()).number(l.sharpe())
-                        .number(l.meanTurnover()).number(l.bias()).text(l.status()).text(l.reason()).end();
+                        .number(l.meanTurnover()).number(l.bias()).text(l.status()).text(l.reason())
+                        .text(l.comparison().baseline()).number(l.comparison().familyPValue())
+                        .number(l.comparison().holmPValue()).text(l.comparison().note()).end();
             }
         }
     }

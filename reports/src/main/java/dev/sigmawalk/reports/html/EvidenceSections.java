@@ -1,6 +1,7 @@
 package dev.sigmawalk.reports.html;
 
 import dev.sigmawalk.engine.compare.Comparison;
+import dev.sigmawalk.engine.compare.PairScanPlan;
 import dev.sigmawalk.engine.evidence.DifferenceTest;
 import dev.sigmawalk.engine.evidence.InputListSize;
 import dev.sigmawalk.engine.evidence.ResidualPair;
@@ -15,6 +16,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.jfree.chart.JFreeChart;
 
 /**
@@ -50,7 +52,7 @@ final class EvidenceSections {
         List<ReportView.TextRow> rows = new ArrayList<>();
         for (WindowDiagnostics w : windows) {
             int n = w.points().size();
-            double meanAbs = w.points().stream().mapToDouble(p -> p.diagnostics().meanAbsCorrelation()).average().orElseThrow();
+            OptionalDouble meanAbs = scanned(w).mapToDouble(p -> p.diagnostics().meanAbsCorrelation()).average();
             rows.add(new ReportView.TextRow(List.of(Words.periods(w.window()), Integer.toString(n), Formats.ratio(meanAbs),
                     Formats.ratio(w.latest().diagnostics().meanAbsCorrelation()), share(cdRejections(w), n),
                     lmAdjShare(w), Formats.pValue(w.latest().diagnostics().cdPValue()),
@@ -70,6 +72,7 @@ final class EvidenceSections {
                 + "is badly over-sized when the number of assets is not small against the window (with 70 assets "
                 + "and 36 periods it rejects about 64 % of the time even when residuals are independent), so its "
                 + "rejections are not evidence here.");
+        thinningNote(windows).ifPresent(notes::add);
         SectorReading reading = SectorReading.of(longest);
         if (!reading.isEmpty()) {
             answer += " " + sectorAnswer(reading, longest.window());
@@ -244,14 +247,38 @@ final class EvidenceSections {
         List<ChartLine> lines = new ArrayList<>();
         for (int k = 0; k < windows.size(); k++) {
             WindowDiagnostics w = windows.get(k);
-            LocalDate[] dates = w.points().stream().map(DiagnosticsPoint::date).toArray(LocalDate[]::new);
-            double[] y = w.points().stream().mapToDouble(p -> p.diagnostics().meanAbsCorrelation()).toArray();
+            LocalDate[] dates = scanned(w).map(DiagnosticsPoint::date).toArray(LocalDate[]::new);
+            double[] y = scanned(w).mapToDouble(p -> p.diagnostics().meanAbsCorrelation()).toArray();
             lines.add(new ChartLine(Words.periods(w.window()), book.variant(RESIDUAL_LINE, k), TimeAxisValues.of(dates), y));
         }
         JFreeChart c = LineCharts.overTime("Mean absolute residual correlation at each rebalance",
                 "Mean |residual correlation| (0 to 1)", LineCharts.plainAxis(), lines, new LineOptions(false, true));
         return maker.make("residual-correlation", c, "0 would mean the market explains all co-movement; one line per "
                 + "window length, told apart by dash pattern.", FigureMaker.WIDE);
+    }
+
+    /** The rebalances at which the mean |ρ| was computed (all of them unless the window was large, Method §8). */
+    static java.util.stream.Stream<DiagnosticsPoint> scanned(WindowDiagnostics w) {
+        return w.points().stream().filter(p -> p.diagnostics().hasMeanAbsCorrelation());
+    }
+
+    /** Says where the all-pairs statistics were computed at some rebalances only; empty when everywhere. */
+    private static Optional<String> thinningNote(List<WindowDiagnostics> windows) {
+        List<String> parts = new ArrayList<>();
+        for (WindowDiagnostics w : windows) {
+            long with = scanned(w).count();
+            if (with < w.points().size()) {
+                parts.add(with + " of " + w.points().size() + " rebalances with the " + w.window() + "-period window");
+            }
+        }
+        if (parts.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of("The mean absolute residual correlation and the most correlated pairs need every one of the "
+                + "n(n-1)/2 pairs of assets, so with more than " + (PairScanPlan.LARGE_FROM - 1) + " assets they were "
+                + "computed only at the first rebalance, every " + PairScanPlan.EVERY + "th after it and the last ("
+                + String.join("; ", parts) + "). Their average and chart use those rebalances only; the tests and "
+                + "the sector means use every rebalance.");
     }
 
     private static String pValues(Optional<DifferenceTest> test, double family) {

@@ -117,8 +117,8 @@ final class FactorLoop {
                                                        List<FactorDiagnostics> points, Set<String> models) {
         Map<String, String[]> residuals = new LinkedHashMap<>();
         int n = single.points().size();
-        double siMean = single.points().stream().mapToDouble(p -> p.diagnostics().meanAbsCorrelation()).average()
-                .orElseThrow();
+        OptionalDouble siMean = EvidenceSections.scanned(single).mapToDouble(p -> p.diagnostics().meanAbsCorrelation())
+                .average();
         long siLm = single.points().stream().filter(p -> p.diagnostics().hasLmAdj()
                 && p.diagnostics().lmAdjPValue() < LEVEL).count();
         residuals.put(SINGLE_INDEX, new String[] {Formats.ratio(siMean), share(siLm, n)});

@@ -28,21 +28,57 @@ final class GridWords {
                 .append(" a year");
         e.baseline().ifPresent(b -> s.append(" against ").append(percent(b.volatility())).append(" for its baseline ")
                 .append(b.strategy()));
-        s.append(". Its own p-value is ").append(p(e.rawPValue())).append("; corrected for all ")
-                .append(e.family()).append(" comparisons in the grid it is ").append(p(e.familyPValue()))
-                .append(e.familyPValue() <= LEVEL
-                        ? ", so the difference is larger than the search alone would explain at the 5 % level."
-                        : ", so once the search is accounted for the difference is not distinguishable from chance"
-                        + " at the 5 % level.");
+        s.append(". Its own p-value is ").append(p(e.rawPValue())).append(". ");
+        GridFamily f = e.family();
+        if (f.notFormed().isPresent()) {
+            s.append("No grid family could be formed (").append(f.notFormed().get()).append("); Holm's correction over all ")
+                    .append(e.comparisonCount()).append(" comparisons gives ").append(p(e.holmPValue()))
+                    .append(verdict(e.holmPValue()));
+            return s.toString();
+        }
+        s.append("Corrected for the search over ").append(SweepPage.count(f.members().size(), "comparison"))
+                .append(" of the grid on their ").append(f.periods()).append(" common dates (")
+                .append(f.first().get()).append(" to ").append(f.last().get()).append(") it is ")
+                .append(p(e.familyPValue())).append(verdict(e.familyPValue()));
+        if (!f.leftOut().isEmpty()) {
+            s.append(" ").append(SweepPage.count(f.leftOut().size(), "comparison"))
+                    .append(f.leftOut().size() == 1 ? " was" : " were").append(" left out of that family (listed below);"
+                    + " Holm's correction over all ").append(e.comparisonCount()).append(", which leaves none out, gives ")
+                    .append(p(e.holmPValue())).append(".");
+        }
         return s.toString();
     }
 
+    private static String verdict(double p) {
+        return p <= LEVEL
+                ? ", so the difference is larger than the search alone would explain at the 5 % level."
+                : ", so once the search is accounted for the difference is not distinguishable from chance at the 5 % level.";
+    }
+
     static String method(GridEvidence e) {
-        return "Each comparison is a point's strategy against its baseline in the same window: the studentised"
-                + " circular block bootstrap p-value of the difference in variance of net returns, from that point's"
-                + " tests.csv (Method \u00a79). The family-corrected value applies Holm's (1979) step-down adjustment over"
-                + " every such comparison in the grid (" + e.family() + "), which holds under any dependence between"
-                + " the points' studies.";
+        GridFamily f = e.family();
+        String resampling = f.members().isEmpty() ? "" : " (block length " + f.blockLength() + ", the largest of the"
+                + " members' own, and the base study's resamples and seed)";
+        return "Each comparison is a point's strategy against the strategy its tests.csv compares it with, in the same"
+                + " window: the difference in variance of net returns (Ledoit-Wolf 2011). The grid's family is every"
+                + " such comparison of every point, on the dates they all share: the others join the best comparison"
+                + " in order of how many of its dates they share, each only while at least half of the best"
+                + " comparison's dates stay common. On those dates each member's test is run again, and the"
+                + " Romano-Wolf studentised stepdown draws one set of circular block starts for all members"
+                + resampling + ", so the dependence between the points' studies is kept (Method \u00a79). Holm's"
+                + " (1979) step-down over the points' own p-values, each on its own period, is in sweep.csv as"
+                + " holm_pvalue: it leaves no comparison out and holds under any dependence, but is more conservative.";
+    }
+
+    /** One line per comparison left out of the grid family: where it is and why. */
+    static List<String> leftOut(GridEvidence e) {
+        List<String> out = new ArrayList<>();
+        for (GridFamily.LeftOut l : e.family().leftOut()) {
+            PointComparison c = l.comparison();
+            out.add("Point " + c.point().label() + ", " + c.strategy() + " against " + c.baseline() + ", window "
+                    + c.window() + ": " + l.reason() + ".");
+        }
+        return out;
     }
 
     private static String values(SweepPlan plan, GridPoint p) {

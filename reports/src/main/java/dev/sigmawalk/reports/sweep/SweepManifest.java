@@ -62,10 +62,29 @@ final class SweepManifest {
                 .put("volatility", b.volatility()));
         e.baseline().ifPresent(b -> ev.put("baseline", b.strategy()).put("baseline_volatility", b.volatility()));
         if (e.best().isPresent()) {
-            ev.put("bootstrap_pvalue", e.rawPValue()).put("family_pvalue", e.familyPValue());
+            ev.put("bootstrap_pvalue", e.rawPValue()).put("holm_pvalue", e.holmPValue());
+            if (Double.isFinite(e.familyPValue())) {
+                ev.put("family_pvalue", e.familyPValue());
+            }
         }
-        ev.put("family_size", e.family()).put("family_method", "Holm step-down over every strategy-baseline variance"
-                + " comparison of every point");
+        GridFamily f = e.family();
+        ev.put("comparisons", e.comparisonCount()).put("family_size", f.members().size())
+                .put("family_method", "Romano-Wolf studentised stepdown over every variance comparison of every point,"
+                        + " on the dates they share (Method \u00a79)")
+                .put("common_dates", f.periods());
+        f.first().ifPresent(d -> ev.put("common_first", d.toString()));
+        f.last().ifPresent(d -> ev.put("common_last", d.toString()));
+        f.notFormed().ifPresent(r -> ev.put("family_not_formed", r));
+        if (!f.members().isEmpty()) {
+            ev.put("block_length", f.blockLength()).put("resamples", c.plan().base().evidence().resamples())
+                    .put("seed", c.plan().base().evidence().seed());
+        }
+        ArrayNode left = ev.putArray("left_out");
+        for (GridFamily.LeftOut l : f.leftOut()) {
+            left.addObject().put("point", l.comparison().point().label()).put("strategy", l.comparison().strategy())
+                    .put("baseline", l.comparison().baseline()).put("window", l.comparison().window())
+                    .put("reason", l.reason());
+        }
         root.put("started", c.started().toString());
         root.put("finished", c.finished().toString());
         try {

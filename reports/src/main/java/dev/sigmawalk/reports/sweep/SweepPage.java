@@ -64,8 +64,10 @@ final class SweepPage {
         }
         String subtitle = "Base study " + plan.sweep().study().getFileName() + ", " + count(plan.points().size(), "point")
                 + ", run " + c.engine() + ".";
-        return new SweepView(style(), plan.sweep().title(), subtitle, axes, counts(c.outcomes()), GridWords.answer(plan, c.evidence()),
-                GridWords.method(c.evidence()), maps, points, c.started().toString(), c.finished().toString());
+        List<String> leftOut = GridWords.leftOut(c.evidence());
+        return new SweepView(style(), plan.sweep().title(), subtitle, axes, counts(c.outcomes()),
+                GridWords.answer(plan, c.evidence()), GridWords.method(c.evidence()), !leftOut.isEmpty(), leftOut, maps,
+                points, c.started().toString(), c.finished().toString());
     }
 
     private static String values(SweepPlan plan, GridPoint p) {

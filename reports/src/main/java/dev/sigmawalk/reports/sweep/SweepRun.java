@@ -1,6 +1,8 @@
 package dev.sigmawalk.reports.sweep;
 
 import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.evidence.DifferenceTests;
+import dev.sigmawalk.engine.evidence.HacKernel;
 import dev.sigmawalk.reports.cli.VersionProvider;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.SweepFiles;
@@ -61,6 +63,38 @@ public final class SweepRun {
         return publish(plan, outcomes, engine.describe(), started, options.force(), inputs);
     }
 
+    /** One line per summary row of every finished point, one per failed point, in grid order. */
+    private static List<SweepFiles.Line> lines(SweepPlan plan, List<PointOutcome> outcomes, List<PointRow> rows,
+                                               GridEvidence evidence) {
+        List<SweepFiles.Line> lines = new ArrayList<>();
+        int next = 0;
+        for (PointOutcome o : outcomes) {
+            GridPoint p = plan.points().get(o.number() - 1);
+            if (!o.hasOutputs()) {
+                lines.add(new SweepFiles.Line(p.label(), p.values(), "", "", Double.NaN, Double.NaN, Double.NaN,
+                        Double.NaN, o.status().spelling(), o.reason(), SweepFiles.Comparison.NONE));
+                continue;
+            }
+            while (next < rows.size() && rows.get(next).point().equals(p)) {
+                PointRow r = rows.get(next++);
+                lines.add(new SweepFiles.Line(p.label(), p.values(), r.strategy(), r.window(), r.volatility(), r.sharpe(),
+                        r.meanTurnover(), r.bias(), o.status().spelling(), "", comparison(evidence, r)));
+            }
+        }
+        return lines;
+    }
+
+    /** The row's comparison columns: its baseline, grid family and Holm p-values, or why it has none. */
+    private static SweepFiles.Comparison comparison(GridEvidence e, PointRow r) {
+        int t = GridEvidence.indexOf(e.comparisons(), r);
+        if (t < 0) {
+            return SweepFiles.Comparison.NONE;
+        }
+        PointComparison c = e.comparisons().get(t);
+        double family = e.family().member(c).map(GridFamily.Member::adjusted).orElse(Double.NaN);
+        return new SweepFiles.Comparison(c.baseline(), family, e.holm()[t], e.family().note(c));
+    }
+
     /** Publishes the (possibly empty) folder at once, so that an interrupted sweep's folder is still sigmawalk's. */
     private static void claim(Path out, boolean force, List<Path> inputs) {
         try (OutputFolder folder = OutputFolder.prepare(out, force, inputs)) {
@@ -81,24 +115,19 @@ public final class SweepRun {
     private static Outcome publish(SweepPlan plan, List<PointOutcome> outcomes, String engine, Instant started,
                                    boolean force, List<Path> inputs) {
         List<PointRow> rows = new ArrayList<>();
-        List<PointComparison> tests = new ArrayList<>();
-        List<SweepFiles.Line> lines = new ArrayList<>();
+        List<ContrastReturns> candidates = new ArrayList<>();
         for (PointOutcome o : outcomes) {
-            GridPoint p = plan.points().get(o.number() - 1);
-            if (!o.hasOutputs()) {
-                lines.add(new SweepFiles.Line(p.label(), p.values(), "", "", Double.NaN, Double.NaN, Double.NaN,
-                        Double.NaN, o.status().spelling(), o.reason()));
-                continue;
-            }
-            List<PointRow> summary = PointFiles.summary(p);
-            rows.addAll(summary);
-            tests.addAll(PointFiles.varianceTests(p));
-            for (PointRow r : summary) {
-                lines.add(new SweepFiles.Line(p.label(), p.values(), r.strategy(), r.window(), r.volatility(), r.sharpe(),
-                        r.meanTurnover(), r.bias(), o.status().spelling(), ""));
+            if (o.hasOutputs()) {
+                GridPoint p = plan.points().get(o.number() - 1);
+                rows.addAll(PointFiles.summary(p));
+                candidates.addAll(PointFiles.contrasts(p, PointFiles.varianceTests(p)));
             }
         }
-        GridEvidence evidence = GridEvidence.of(rows, tests);
+        // The grid's evidence is computed here, on the driver, from the published files alone,
+        // so it is the same whichever engine ran the points and in whatever order they finished.
+        GridEvidence evidence = GridEvidence.of(rows, candidates,
+                new DifferenceTests(HacKernel.PARZEN, plan.base().evidence()));
+        List<SweepFiles.Line> lines = lines(plan, outcomes, rows, evidence);
         List<HeatMap> maps = HeatMap.of(plan.sweep(), rows);
         try (OutputFolder folder = OutputFolder.prepare(plan.out(), force, inputs)) {
             Path dir = folder.staging();

@@ -7,7 +7,7 @@ import java.util.List;
  * the report's own stylesheet.
  */
 record SweepView(String style, String title, String subtitle, List<AxisLine> axes, String counts, String answer,
-                 String method, List<HeatTable> maps, List<PointLine> points, String started, String finished) {
+                 String method, boolean anyLeftOut, List<String> leftOut, List<HeatTable> maps, List<PointLine> points, String started, String finished) {
 
     /** A varied key and its values. */
     record AxisLine(String key, String values) {

@@ -109,4 +109,41 @@ class EvidenceSectionsTest {
         assertTrue(doc.select("nav a[href=#shrinkage]").isEmpty(), "no contents entry either");
         assertNotNull(doc.getElementById("windows"));
     }
+
+    /**
+     * Where a large window's mean |ρ| and largest pairs were computed at some rebalances only
+     * (every other one here), the table's average uses those rebalances, the chart draws them,
+     * the test counts use every rebalance and a note says how many rebalances had the mean.
+     */
+    @Test
+    void thinnedAllPairsStatistics_areAveragedWhereComputed_andSaidSo(@TempDir Path dir) throws Exception {
+        java.util.List<WindowDiagnostics> thinned = new java.util.ArrayList<>();
+        for (WindowDiagnostics w : data.evidence().diagnostics()) {
+            java.util.List<DiagnosticsPoint> points = new java.util.ArrayList<>();
+            for (int k = 0; k < w.points().size(); k++) {
+                DiagnosticsPoint p = w.points().get(k);
+                boolean keep = k % 2 == 0 || k == w.points().size() - 1;
+                points.add(keep ? p : new DiagnosticsPoint(p.date(), p.diagnostics().withMeanAbsCorrelation(Double.NaN),
+                        java.util.List.of(), p.sectors()));
+            }
+            thinned.add(new WindowDiagnostics(w.window(), points));
+        }
+        ReportEvidence base = data.evidence();
+        ReportData thin = new ReportData(data.study(), data.run(), data.summaries(), data.record(),
+                new ReportEvidence(thinned, base.comparisons(), base.inputList(), base.factorDiagnostics()));
+        Element section = render(thin, dir).getElementById("single-index-check");
+        Elements rows = section.select("tbody tr");
+        for (int k = 0; k < thinned.size(); k++) {
+            WindowDiagnostics w = thinned.get(k);
+            double mean = w.points().stream().filter(p -> p.diagnostics().hasMeanAbsCorrelation())
+                    .mapToDouble(p -> p.diagnostics().meanAbsCorrelation()).average().orElseThrow();
+            assertEquals(Formats.ratio(mean), rows.get(k).select("td").get(2).text(), "window " + w.window());
+            assertEquals(Integer.toString(w.points().size()), rows.get(k).select("td").get(1).text());
+            long with = w.points().stream().filter(p -> p.diagnostics().hasMeanAbsCorrelation()).count();
+            assertTrue(section.text().contains(with + " of " + w.points().size() + " rebalances with the " + w.window()
+                    + "-period window"), section.text());
+        }
+        assertFalse(section.text().contains("NaN"), "no NaN reaches the page");
+        assertFalse(section.select("figure svg path").isEmpty(), "residual chart");
+    }
 }

@@ -4,6 +4,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.sigmawalk.engine.evidence.DifferenceMeasure;
+import dev.sigmawalk.engine.evidence.DifferenceTests;
+import dev.sigmawalk.engine.evidence.FamilyContrast;
+import dev.sigmawalk.engine.evidence.HacKernel;
+import dev.sigmawalk.engine.evidence.RomanoWolfStepdown;
+import dev.sigmawalk.engine.study.EvidenceSpec;
 import dev.sigmawalk.engine.study.RebalanceRule;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
@@ -12,7 +18,11 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.FileTime;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeSet;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -68,7 +78,7 @@ class SweepCommandTest {
     void sweepCsv_hasOneRowPerPointStrategyAndWindow_copiedFromTheSummaries() throws IOException {
         List<String> lines = SweepFixture.lines(out.resolve("sweep.csv"));
         assertEquals("point,walkforward.cost_bps,walkforward.rebalance_every,strategy,window,volatility,sharpe,"
-                + "mean_turnover,bias,status,reason", lines.get(0));
+                + "mean_turnover,bias,status,reason,baseline,family_pvalue,holm_pvalue,family_note", lines.get(0));
         // 2 strategies x 2 windows + the market, for each of 4 points
         assertEquals(1 + 4 * 5, lines.size());
         List<String> summary = SweepFixture.lines(out.resolve("points/003/summary.csv"));
@@ -77,7 +87,78 @@ class SweepCommandTest {
         String expected = "003,20,3," + first[0] + "," + first[1] + "," + first[indexOf(head, "volatility")] + ","
                 + first[indexOf(head, "sharpe")] + "," + first[indexOf(head, "mean_turnover")] + ","
                 + first[indexOf(head, "bias")] + ",ran,";
-        assertTrue(lines.contains(expected), "sweep.csv holds point 003's first summary row: " + expected);
+        assertTrue(lines.stream().anyMatch(l -> l.startsWith(expected)), "sweep.csv holds point 003's first summary row: "
+                + expected);
+    }
+
+    /**
+     * The grid's family p-values in {@code sweep.csv} are the Romano-Wolf stepdown run directly on
+     * the points' published files: every variance comparison of every point's {@code tests.csv},
+     * in grid order, on the dates of {@code returns.csv} they all share (here every point has the
+     * same out-of-sample dates, so all eight join), with the base study's 100 resamples and the
+     * default seed.
+     */
+    @Test
+    void familyPValues_areTheStepdownOnThePointsCommonDates() throws IOException {
+        List<String[]> compared = new ArrayList<>();
+        List<Map<String, double[]>> paths = new ArrayList<>();
+        TreeSet<String> common = null;
+        for (int i = 1; i <= 4; i++) {
+            Path point = out.resolve("points/00" + i);
+            Map<String, List<String[]>> rows = new LinkedHashMap<>();
+            List<String> returns = SweepFixture.lines(point.resolve("returns.csv"));
+            for (String line : returns.subList(1, returns.size())) {
+                String[] f = line.split(",", -1);
+                rows.computeIfAbsent(f[1] + "@" + f[2], k -> new ArrayList<>()).add(f);
+            }
+            Map<String, double[]> net = new LinkedHashMap<>();
+            for (Map.Entry<String, List<String[]>> e : rows.entrySet()) {
+                if (e.getKey().startsWith("market@")) {
+                    continue;
+                }
+                net.put(e.getKey(), e.getValue().stream().mapToDouble(f -> Double.parseDouble(f[4])).toArray());
+                TreeSet<String> dates = new TreeSet<>(e.getValue().stream().map(f -> f[0]).toList());
+                if (common == null) {
+                    common = dates;
+                } else {
+                    assertEquals(common, dates, "point " + i + " " + e.getKey() + " has the grid's dates");
+                }
+            }
+            for (String line : SweepFixture.lines(point.resolve("tests.csv"))) {
+                String[] f = line.split(",", -1);
+                if (f[3].equals("variance")) {
+                    compared.add(new String[] {String.valueOf(i), f[0], f[1], f[2]});
+                }
+            }
+            paths.add(net);
+        }
+        DifferenceTests tests = new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(100, EvidenceSpec.DEFAULT_SEED, 0));
+        List<FamilyContrast> family = new ArrayList<>();
+        for (String[] c : compared) {
+            Map<String, double[]> net = paths.get(Integer.parseInt(c[0]) - 1);
+            double[] a = net.get(c[1] + "@" + c[3]);
+            double[] b = net.get(c[2] + "@" + c[3]);
+            family.add(new FamilyContrast(DifferenceMeasure.VARIANCE, a, b, tests.variance(a, b)));
+        }
+        assertEquals(8, family.size(), "two windows of one pair in each of four points");
+        double[] expected = RomanoWolfStepdown.adjust(family, 100, EvidenceSpec.DEFAULT_SEED);
+
+        List<String> sweep = SweepFixture.lines(out.resolve("sweep.csv"));
+        String[] head = sweep.get(0).split(",");
+        for (int k = 0; k < compared.size(); k++) {
+            String[] c = compared.get(k);
+            String prefix = "00" + c[0] + ",";
+            String[] row = sweep.stream().map(l -> l.split(",", -1))
+                    .filter(f -> (f[0] + ",").equals(prefix) && f[indexOf(head, "strategy")].equals(c[1])
+                            && f[indexOf(head, "window")].equals(c[3]))
+                    .findFirst().orElseThrow();
+            assertEquals(c[2], row[indexOf(head, "baseline")], "baseline of " + String.join(" ", c));
+            assertEquals(expected[k], Double.parseDouble(row[indexOf(head, "family_pvalue")]), 0.0,
+                    "family p-value of " + String.join(" ", c));
+            double holm = Double.parseDouble(row[indexOf(head, "holm_pvalue")]);
+            assertTrue(holm > 0 && holm <= 1, "Holm value of " + String.join(" ", c) + ": " + holm);
+            assertEquals("", row[indexOf(head, "family_note")], "no note for a member");
+        }
     }
 
     @Test
@@ -90,7 +171,7 @@ class SweepCommandTest {
         assertFalse(html.contains("http://") || html.contains("https://") || html.contains("<script"), "offline page");
         assertFalse(html.contains("{{"), "no template tag left");
         assertTrue(html.contains("border-collapse") && html.contains("td.best"), "the report's stylesheet is inlined");
-        assertTrue(html.contains("corrected for all"), "family-corrected p-value stated");
+        assertTrue(html.contains("Corrected for the search over"), "family-corrected p-value stated");
         assertTrue(Files.isRegularFile(out.resolve("manifest.json")));
     }
 
