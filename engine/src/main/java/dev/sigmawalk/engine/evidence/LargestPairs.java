@@ -56,7 +56,8 @@ final class LargestPairs {
     List<ResidualPair> pairs(List<String> assets) {
         Integer[] order = new Integer[size];
         Arrays.setAll(order, k -> k);
-        Arrays.sort(order, (a, b) -> worse(a, value[b], first[b], second[b]) ? 1 : worse(b, value[a], first[a], second[a]) ? -1 : 0);
+        Arrays.sort(order, (a, b) -> worse(a, value[b], first[b], second[b]) ? 1
+                : worse(b, value[a], first[a], second[a]) ? -1 : 0);
         List<ResidualPair> out = new ArrayList<>(size);
         for (int k : order) {
             double r = Math.max(-1.0, Math.min(1.0, value[k]));

@@ -43,8 +43,7 @@ public record PairScan(long pairs, double meanAbsCorrelation, double sumOfSquare
         double[] tile = new double[TILE_ROWS * TILE_COLUMNS];
         double[] packed = new double[4 * TILE_COLUMNS];
         LargestPairs top = new LargestPairs(largest);
-        double sumAbs = 0;
-        double sumSquares = 0;
+        double[] sums = new double[2];
         for (int i0 = 0; i0 < n; i0 += TILE_ROWS) {
             int i1 = Math.min(n, i0 + TILE_ROWS);
             for (int j0 = i0; j0 < n; j0 += TILE_COLUMNS) {
@@ -54,13 +53,12 @@ public record PairScan(long pairs, double meanAbsCorrelation, double sumOfSquare
                 fill(z, len, n, tile, packed, i0, i1, j0, width);
                 for (int i = i0; i < i1; i++) {
                     int base = (i - i0) * TILE_COLUMNS - j0;
+                    int from = Math.max(j0, i + 1);
+                    addRow(tile, base + from, base + j1, sums);
                     double threshold = top.threshold();
-                    for (int j = Math.max(j0, i + 1); j < j1; j++) {
-                        double r = tile[base + j];
-                        sumSquares += r * r;
-                        sumAbs += Math.min(1.0, Math.abs(r));
-                        if (r >= threshold) {
-                            top.offer(r, i, j);
+                    for (int j = from; j < j1; j++) {
+                        if (tile[base + j] >= threshold) {
+                            top.offer(tile[base + j], i, j);
                             threshold = top.threshold();
                         }
                     }
@@ -68,7 +66,43 @@ public record PairScan(long pairs, double meanAbsCorrelation, double sumOfSquare
             }
         }
         long pairs = (long) n * (n - 1) / 2;
-        return new PairScan(pairs, Math.min(1.0, sumAbs / pairs), sumSquares, top.pairs(rows.assets()));
+        return new PairScan(pairs, Math.min(1.0, sums[0] / pairs), sums[1], top.pairs(rows.assets()));
+    }
+
+    /**
+     * Adds Σ min(1, |v|) and Σ v² over tile[from..to) to sums[0] and sums[1], each in four
+     * interleaved partial sums so that the additions pipeline instead of waiting on each other.
+     */
+    private static void addRow(double[] tile, int from, int to, double[] sums) {
+        double a0 = 0;
+        double a1 = 0;
+        double a2 = 0;
+        double a3 = 0;
+        double q0 = 0;
+        double q1 = 0;
+        double q2 = 0;
+        double q3 = 0;
+        int k = from;
+        for (; k + 4 <= to; k += 4) {
+            double r0 = tile[k];
+            double r1 = tile[k + 1];
+            double r2 = tile[k + 2];
+            double r3 = tile[k + 3];
+            a0 += Math.min(1.0, Math.abs(r0));
+            a1 += Math.min(1.0, Math.abs(r1));
+            a2 += Math.min(1.0, Math.abs(r2));
+            a3 += Math.min(1.0, Math.abs(r3));
+            q0 += r0 * r0;
+            q1 += r1 * r1;
+            q2 += r2 * r2;
+            q3 += r3 * r3;
+        }
+        for (; k < to; k++) {
+            a0 += Math.min(1.0, Math.abs(tile[k]));
+            q0 += tile[k] * tile[k];
+        }
+        sums[0] += (a0 + a1) + (a2 + a3);
+        sums[1] += (q0 + q1) + (q2 + q3);
     }
 
     /** tile[(i − i0) * TILE_COLUMNS + (j − j0)] = Σ_t z_ti z_tj for i0 ≤ i &lt; i1, j0 ≤ j &lt; j0 + width. */

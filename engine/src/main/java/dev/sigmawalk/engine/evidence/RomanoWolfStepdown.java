@@ -1,5 +1,6 @@
 package dev.sigmawalk.engine.evidence;
 
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
@@ -64,22 +65,36 @@ public final class RomanoWolfStepdown {
         for (int s = 0; s < size; s++) {
             observed[s] = Math.abs(family.get(s).test().statistic());
         }
-        double[][] resampled = new double[resamples][size];
+        // A series that several contrasts share (a path in several pairs, or the same values
+        // rebuilt for each contrast) is resampled once per draw: same values, same starts.
+        List<double[]> distinct = new ArrayList<>();
+        int[] firstOf = new int[size];
+        int[] secondOf = new int[size];
+        for (int s = 0; s < size; s++) {
+            firstOf[s] = indexOf(distinct, family.get(s).first());
+            secondOf[s] = indexOf(distinct, family.get(s).second());
+        }
         int drawn = blocks * block;
-        double[] ra = new double[drawn];
-        double[] rb = new double[drawn];
+        CircularResample[] draws = new CircularResample[distinct.size()];
+        for (int d = 0; d < draws.length; d++) {
+            draws[d] = new CircularResample(drawn);
+        }
+        double[][] resampled = new double[resamples][size];
         int[] starts = new int[blocks];
         SplittableRandom random = new SplittableRandom(seed);
         for (int m = 0; m < resamples; m++) {
             for (int j = 0; j < blocks; j++) {
                 starts[j] = random.nextInt(length);
             }
+            for (int d = 0; d < draws.length; d++) {
+                draws[d].draw(distinct.get(d), starts, block);
+            }
             for (int s = 0; s < size; s++) {
                 FamilyContrast c = family.get(s);
-                fill(c.first(), starts, block, ra);
-                fill(c.second(), starts, block, rb);
-                resampled[m][s] = StudentisedBlockBootstrap.studentised(c.measure(), ra, rb, block,
-                        c.test().difference());
+                CircularResample ra = draws[firstOf[s]];
+                CircularResample rb = draws[secondOf[s]];
+                resampled[m][s] = StudentisedBlockBootstrap.studentised(c.measure(), ra.values(), rb.values(),
+                        CircularResample.moments(ra, rb), block, c.test().difference());
             }
         }
         return fromResamples(observed, resampled);
@@ -119,13 +134,14 @@ public final class RomanoWolfStepdown {
         return adjusted;
     }
 
-    /** The resample of x made of the circular blocks starting at {@code starts}. */
-    private static void fill(double[] x, int[] starts, int block, double[] out) {
-        int length = x.length;
-        for (int j = 0; j < starts.length; j++) {
-            for (int k = 0; k < block; k++) {
-                out[j * block + k] = x[(starts[j] + k) % length];
+    /** Where {@code x}'s values sit in {@code distinct}, appending them when they are new. */
+    private static int indexOf(List<double[]> distinct, double[] x) {
+        for (int d = 0; d < distinct.size(); d++) {
+            if (distinct.get(d) == x || Arrays.equals(distinct.get(d), x)) {
+                return d;
             }
         }
+        distinct.add(x);
+        return distinct.size() - 1;
     }
 }

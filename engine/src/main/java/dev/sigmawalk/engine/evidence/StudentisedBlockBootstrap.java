@@ -56,20 +56,19 @@ final class StudentisedBlockBootstrap {
                     + length + " periods");
         }
         int drawn = blocks * blockLength;
-        double[] ra = new double[drawn];
-        double[] rb = new double[drawn];
+        CircularResample ra = new CircularResample(drawn);
+        CircularResample rb = new CircularResample(drawn);
+        int[] starts = new int[blocks];
         SplittableRandom random = new SplittableRandom(seed);
         int atLeast = 0;
         for (int m = 0; m < resamples; m++) {
             for (int j = 0; j < blocks; j++) {
-                int start = random.nextInt(length);
-                for (int k = 0; k < blockLength; k++) {
-                    int source = (start + k) % length;
-                    ra[j * blockLength + k] = a[source];
-                    rb[j * blockLength + k] = b[source];
-                }
+                starts[j] = random.nextInt(length);
             }
-            if (studentised(measure, ra, rb, blockLength, difference) >= observed) {
+            ra.draw(a, starts, blockLength);
+            rb.draw(b, starts, blockLength);
+            if (studentised(measure, ra.values(), rb.values(), CircularResample.moments(ra, rb), blockLength,
+                    difference) >= observed) {
                 atLeast++;
             }
         }
@@ -82,9 +81,14 @@ final class StudentisedBlockBootstrap {
      */
     static double studentised(DifferenceMeasure measure, double[] ra, double[] rb, int blockLength,
                               double difference) {
+        return studentised(measure, ra, rb, PairMoments.of(ra, rb, ra.length), blockLength, difference);
+    }
+
+    /** As {@link #studentised(DifferenceMeasure, double[], double[], int, double)} with v* already known. */
+    static double studentised(DifferenceMeasure measure, double[] ra, double[] rb, PairMoments v, int blockLength,
+                              double difference) {
         int drawn = ra.length;
         int blocks = drawn / blockLength;
-        PairMoments v = PairMoments.of(ra, rb, drawn);
         if (v.degenerate()) {
             return Double.POSITIVE_INFINITY;
         }

@@ -95,6 +95,64 @@ class RomanoWolfStepdownTest {
                 RomanoWolfStepdown.adjust(percent, spec.resamples(), spec.seed()), 0.0);
     }
 
+    /**
+     * Resampling each distinct series once per draw, with its sums taken while it is drawn, gives
+     * the very bits of the definition written out plainly: every contrast's two series resampled
+     * period by period ((start + k) mod T), v* by {@link PairMoments#of}, d* by the studentised
+     * statistic, then the stepdown. The family shares series the way a study's does (one path in
+     * two pairs, the Sharpe and variance contrasts of a pair, equal series held in separate
+     * arrays), and the block of 7 wraps past the end of the 150 periods.
+     */
+    @Test
+    void sharedSeries_giveTheSameBitsAsThePlainDefinition() {
+        EvidenceSpec spec = new EvidenceSpec(250, 17L, 7);
+        DifferenceTests tests = new DifferenceTests(HacKernel.PARZEN, spec);
+        SimulatedPair p = SimulatedPair.normal(71, 150, 0.03, 0.0, 1, 1.1, 0.5, 0.3);
+        SimulatedPair q = SimulatedPair.normal(72, 150, 0.0, 0.02, 1.2, 1, 0.4, 0.2);
+        double[] copy = p.second().clone();
+        List<FamilyContrast> family = new ArrayList<>();
+        for (double[][] pair : new double[][][] {{p.first(), p.second()}, {q.first(), copy}, {q.second(), p.first()}}) {
+            for (DifferenceMeasure m : DifferenceMeasure.values()) {
+                family.add(new FamilyContrast(m, pair[0], pair[1], tests.compare(m, pair[0], pair[1])));
+            }
+        }
+        assertArrayEquals(plainDefinition(family, spec.resamples(), spec.seed()),
+                RomanoWolfStepdown.adjust(family, spec.resamples(), spec.seed()), 0.0);
+    }
+
+    /** The adjusted p-values computed straight from the definition (class Javadoc), one contrast at a time. */
+    private static double[] plainDefinition(List<FamilyContrast> family, int resamples, long seed) {
+        int length = family.get(0).first().length;
+        int block = family.stream().mapToInt(c -> c.test().blockLength()).max().getAsInt();
+        int blocks = length / block;
+        double[] observed = new double[family.size()];
+        for (int s = 0; s < observed.length; s++) {
+            observed[s] = Math.abs(family.get(s).test().statistic());
+        }
+        double[][] resampled = new double[resamples][family.size()];
+        double[] ra = new double[blocks * block];
+        double[] rb = new double[blocks * block];
+        int[] starts = new int[blocks];
+        java.util.SplittableRandom random = new java.util.SplittableRandom(seed);
+        for (int m = 0; m < resamples; m++) {
+            for (int j = 0; j < blocks; j++) {
+                starts[j] = random.nextInt(length);
+            }
+            for (int s = 0; s < family.size(); s++) {
+                FamilyContrast c = family.get(s);
+                for (int j = 0; j < blocks; j++) {
+                    for (int k = 0; k < block; k++) {
+                        ra[j * block + k] = c.first()[(starts[j] + k) % length];
+                        rb[j * block + k] = c.second()[(starts[j] + k) % length];
+                    }
+                }
+                resampled[m][s] = StudentisedBlockBootstrap.studentised(c.measure(), ra, rb, block,
+                        c.test().difference());
+            }
+        }
+        return RomanoWolfStepdown.fromResamples(observed, resampled);
+    }
+
     private static double[] scaled(double[] x) {
         double[] out = new double[x.length];
         for (int t = 0; t < x.length; t++) {

@@ -13,6 +13,7 @@ import dev.sigmawalk.reports.html.DiagnosticsPoint;
 import dev.sigmawalk.reports.html.InputFile;
 import dev.sigmawalk.reports.html.ReportData;
 import dev.sigmawalk.reports.html.ReportEvidence;
+import dev.sigmawalk.reports.html.ReportPage;
 import dev.sigmawalk.reports.html.ReportWriter;
 import dev.sigmawalk.reports.pdf.ReportPdf;
 import dev.sigmawalk.reports.html.RunRecord;
@@ -27,15 +28,19 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.Executor;
 
-/** Assembles the report's input from a finished run and writes report.html, charts/ and report.pdf. */
+/**
+ * Assembles the report's input from a finished run and writes report.html, charts/ and report.pdf,
+ * the charts drawn on the given workers.
+ */
 final class ReportStep {
     private ReportStep() {
     }
 
     static void write(Path dir, Study study, StudyData data, RunResult<WindowEvidence> run, List<Summary> summaries,
                       List<Comparison> comparisons, List<String> warnings, Instant started,
-                      Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics) {
+                      Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics, Executor workers) {
         ReturnPanel panel = data.panel();
         List<InputFile> inputs = new ArrayList<>();
         for (FileFingerprint f : data.fingerprints()) {
@@ -46,9 +51,12 @@ final class ReportStep {
         ReportEvidence evidence = new ReportEvidence(diagnostics(run, study.walkForward().windows()),
                 comparisons, Optional.of(new InputListSize(panel.assetCount())), flatten(factorDiagnostics));
         try {
-            new ReportWriter().write(new ReportData(study, run, summaries, record, evidence), dir.resolve("report.html"),
-                    dir.resolve("charts"));
-            ReportPdf.write(dir.resolve("report.html"), dir.resolve("report.pdf"));
+            ReportPage page = new ReportWriter().assemble(new ReportData(study, run, summaries, record, evidence),
+                    dir.resolve("charts"), workers);
+            // The PDF is laid out while the workers draw the charts' SVG and PNG copies; it draws
+            // each chart itself once that chart's worker is done with it.
+            ReportPdf.write(page.outline(), dir, page.charts(), dir.resolve("report.pdf"));
+            page.writeHtml(dir.resolve("report.html"));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report", e);
         }

@@ -32,6 +32,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
 import java.util.function.Consumer;
 
 /**
@@ -108,24 +109,36 @@ public final class StudyRun {
         RunResult<WindowEvidence> run = WindowFindings.evidenceOnly(probed);
         Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics = WindowFindings.factorsOnly(probed);
         long walked = System.nanoTime();
-        List<Summary> summaries = Runs.summaries(run);
-        List<Comparison> comparisons = Runs.comparisons(study, run);
-        List<String> found = Runs.warningsOfResults(run);
-        found.forEach(warn);
-        warnings.addAll(found);
-        ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
-        ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
-        ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
-        ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
-        EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), study.walkForward().windows());
-        FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
-                study.walkForward().windows());
-        SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
-                ReportStep.diagnostics(run, study.walkForward().windows()), ReportStep.flatten(factorDiagnostics)));
-        EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
-        EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
-        long tested = System.nanoTime();
-        ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics);
+        List<Summary> summaries;
+        List<Comparison> comparisons;
+        long tested;
+        try (Workers workers = new Workers(threads)) {
+            // The files of the walk itself need neither the measures nor the tests: a worker
+            // writes them while this thread runs the tests.
+            CompletableFuture<Void> runFiles = workers.start(() -> {
+                ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
+                ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
+                ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
+                EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(),
+                        study.walkForward().windows());
+                FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
+                        study.walkForward().windows());
+                SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
+                        ReportStep.diagnostics(run, study.walkForward().windows()), ReportStep.flatten(factorDiagnostics)));
+                EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
+            });
+            summaries = Runs.summaries(run);
+            comparisons = Runs.comparisons(study, run);
+            List<String> found = Runs.warningsOfResults(run);
+            found.forEach(warn);
+            warnings.addAll(found);
+            ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
+            EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
+            Workers.await(runFiles);
+            tested = System.nanoTime();
+            ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics,
+                    workers.executor());
+        }
         long reported = System.nanoTime();
         Map<String, Double> seconds = new LinkedHashMap<>();
         seconds.put("read_and_check", (loaded - begin) / 1e9);

@@ -1,17 +1,20 @@
 package dev.sigmawalk.reports.html;
 
 import dev.sigmawalk.reports.charts.ChartRenderer;
+import dev.sigmawalk.reports.charts.RenderedChart;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.Executor;
 import org.jfree.chart.JFreeChart;
 
 /**
- * Renders charts to inline SVG and writes their PNG copies into the charts folder. Remembers the
- * files it wrote so the report can list them.
+ * Hands each chart to the workers that draw its inline SVG and its PNG copy in the charts
+ * folder. Remembers the charts in page order so the report can list their files and the PDF can
+ * draw them.
  */
 final class FigureMaker {
     /**
@@ -24,27 +27,40 @@ final class FigureMaker {
 
     private final Path chartsDir;
     private final String chartsFolderName;
+    private final Executor workers;
     private final List<Path> written = new ArrayList<>();
+    private final List<RenderedChart> charts = new ArrayList<>();
 
-    FigureMaker(Path chartsDir) {
+    /** @param workers draw the charts; {@code Runnable::run} draws each one at once */
+    FigureMaker(Path chartsDir, Executor workers) {
         this.chartsDir = chartsDir;
+        this.workers = workers;
         Path name = chartsDir.getFileName();
         this.chartsFolderName = name == null ? "charts" : name.toString();
     }
 
     Figure make(String id, JFreeChart chart, String caption, ChartRenderer renderer) {
         Path png = chartsDir.resolve(id + ".png");
-        try {
-            Files.createDirectories(chartsDir);
-            renderer.png(chart, png);
-        } catch (IOException e) {
-            throw new UncheckedIOException("could not write chart " + png + ": " + e.getMessage(), e);
+        if (charts.isEmpty()) {
+            try {
+                Files.createDirectories(chartsDir);
+            } catch (IOException e) {
+                throw new UncheckedIOException("could not create the charts folder " + chartsDir + ": "
+                        + e.getMessage(), e);
+            }
         }
+        RenderedChart rendered = RenderedChart.start(id, chart, renderer, png, workers);
         written.add(png);
-        return new Figure(id, caption, renderer.svg(chart, id), chartsFolderName + "/" + id + ".png");
+        charts.add(rendered);
+        return new Figure(id, caption, rendered, chartsFolderName + "/" + id + ".png");
     }
 
     List<Path> written() {
         return List.copyOf(written);
+    }
+
+    /** Every chart handed over so far, in page order. */
+    List<RenderedChart> charts() {
+        return List.copyOf(charts);
     }
 }

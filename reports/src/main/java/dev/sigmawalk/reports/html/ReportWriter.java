@@ -7,14 +7,13 @@ import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.reports.charts.ModelFamily;
 import dev.sigmawalk.reports.charts.StyleBook;
 import java.io.IOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
+import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.Executor;
 import java.util.stream.Collectors;
 
 /**
@@ -36,7 +35,7 @@ public final class ReportWriter {
     }
 
     /**
-     * Writes the report and its charts.
+     * Writes the report and its charts on the calling thread.
      *
      * @param data what to report
      * @param htmlFile the report file to create or replace
@@ -45,16 +44,25 @@ public final class ReportWriter {
      * @return the PNG files written, in page order
      */
     public List<Path> write(ReportData data, Path htmlFile, Path chartsDir) throws IOException {
-        FigureMaker maker = new FigureMaker(chartsDir);
+        ReportPage page = assemble(data, chartsDir, Runnable::run);
+        page.writeHtml(htmlFile);
+        return page.pngs();
+    }
+
+    /**
+     * Assembles the page, handing every chart to {@code workers}, which draw its SVG markup and
+     * write its PNG copy while the caller goes on (the PDF can be laid out meanwhile); the files
+     * are the same whichever executor draws them.
+     *
+     * @param chartsDir folder for the PNG copies (created when missing)
+     * @param workers draw the charts ({@code Runnable::run}: at once, on the calling thread)
+     */
+    public ReportPage assemble(ReportData data, Path chartsDir, Executor workers) {
+        FigureMaker maker = new FigureMaker(chartsDir, workers);
         ReportView view = view(data, maker);
-        Path parent = htmlFile.toAbsolutePath().getParent();
-        if (parent != null) {
-            Files.createDirectories(parent);
-        }
-        try (Writer out = Files.newBufferedWriter(htmlFile, StandardCharsets.UTF_8)) {
-            template.execute(out, view);
-        }
-        return maker.written();
+        StringWriter page = new StringWriter(1 << 18);
+        template.execute(page, view);
+        return new ReportPage(page.toString(), maker.charts(), maker.written());
     }
 
     static ReportView view(ReportData data, FigureMaker maker) {

@@ -2,8 +2,8 @@ package dev.sigmawalk.reports.pdf;
 
 import com.openhtmltopdf.outputdevice.helper.BaseRendererBuilder;
 import com.openhtmltopdf.pdfboxout.PdfRendererBuilder;
-import com.openhtmltopdf.svgsupport.BatikSVGDrawer;
 import com.openhtmltopdf.util.XRLog;
+import dev.sigmawalk.reports.charts.RenderedChart;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.OutputStream;
@@ -11,6 +11,7 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -48,10 +49,15 @@ public final class ReportPdf {
     }
 
     /**
-     * @param html the report written by the HTML writer
+     * Writes the PDF from the report's page as the HTML writer wrote it.
+     *
+     * @param html the page's markup
+     * @param folder the folder the page lives in (relative references resolve against it)
+     * @param charts charts drawn from their chart objects, by the id of their {@code <svg>} element;
+     *               any other SVG is drawn from its markup
      * @param pdf the PDF to create or replace
      */
-    public static void write(Path html, Path pdf) throws IOException {
+    public static void write(String html, Path folder, List<RenderedChart> charts, Path pdf) throws IOException {
         // The renderer logs every font it loads and every style it skips on standard error; a
         // run's standard error is kept for the tool's own progress and warnings.
         XRLog.setLoggingEnabled(false);
@@ -60,29 +66,38 @@ public final class ReportPdf {
         System.getProperties().putIfAbsent("org.apache.commons.logging.LogFactory",
                 "org.apache.commons.logging.impl.LogFactoryImpl");
         System.getProperties().putIfAbsent("org.apache.commons.logging.Log", "org.apache.commons.logging.impl.NoOpLog");
-        Document doc = Jsoup.parse(html.toFile(), StandardCharsets.UTF_8.name());
-        prepare(doc);
+        String base = folder.toAbsolutePath().toUri().toString();
+        Document doc = Jsoup.parse(html, base);
+        ChartPainter painter = new ChartPainter(charts);
+        prepare(doc, painter);
         try (OutputStream out = Files.newOutputStream(pdf)) {
             PdfRendererBuilder builder = new PdfRendererBuilder();
             builder.useFastMode();
-            builder.useSVGDrawer(new BatikSVGDrawer());
+            builder.useSVGDrawer(painter);
             builder.useFont(() -> font(REGULAR), FONT_FAMILY, 400, BaseRendererBuilder.FontStyle.NORMAL, true);
             builder.useFont(() -> font(BOLD), FONT_FAMILY, 700, BaseRendererBuilder.FontStyle.NORMAL, true);
-            builder.withW3cDocument(new W3CDom().fromJsoup(doc), html.toAbsolutePath().getParent().toUri().toString());
+            builder.withW3cDocument(new W3CDom().fromJsoup(doc), base);
             builder.withProducer("sigmawalk");
             builder.toStream(out);
             builder.run();
         }
     }
 
-    /** Unfolds every section, adds the PDF layout rules and gives every chart its size on paper. */
-    static void prepare(Document doc) {
+    /**
+     * Unfolds every section, adds the PDF layout rules and gives every chart its size on paper;
+     * the markup inside a chart the painter draws from its chart object is dropped, so the
+     * renderer neither copies nor styles it.
+     */
+    static void prepare(Document doc, ChartPainter painter) {
         for (Element d : doc.select("details")) {
             d.attr("open", "");
         }
         doc.head().appendElement("style").appendText(PDF_STYLE);
         for (Element svg : doc.select("figure svg")) {
             Matcher m = VIEW_BOX.matcher(svg.attr("viewBox"));
+            if (painter.draws(svg.id())) {
+                svg.empty();
+            }
             if (m.matches()) {
                 double w = Double.parseDouble(m.group(1));
                 double h = Double.parseDouble(m.group(2));

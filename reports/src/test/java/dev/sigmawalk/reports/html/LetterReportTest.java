@@ -42,10 +42,12 @@ class LetterReportTest {
     @BeforeAll
     void render(@TempDir Path dir) throws Exception {
         Path report = dir.resolve("report.html");
-        new ReportWriter().write(ReportFixture.data(Paper.LETTER), report, dir.resolve("charts"));
+        ReportPage assembled = new ReportWriter().assemble(ReportFixture.data(Paper.LETTER), dir.resolve("charts"),
+                Runnable::run);
+        assembled.writeHtml(report);
         html = Jsoup.parse(Files.readString(report, StandardCharsets.UTF_8));
         Path pdf = dir.resolve("report.pdf");
-        ReportPdf.write(report, pdf);
+        ReportPdf.write(assembled.outline(), dir, assembled.charts(), pdf);
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             pages = doc.getNumberOfPages();
             for (PDPage page : doc.getPages()) {

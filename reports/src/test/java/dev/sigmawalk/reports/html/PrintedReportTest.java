@@ -52,11 +52,12 @@ class PrintedReportTest {
     void render(@TempDir Path dir) throws Exception {
         data = ReportFixture.data();
         Path report = dir.resolve("report.html");
-        new ReportWriter().write(data, report, dir.resolve("charts"));
+        ReportPage assembled = new ReportWriter().assemble(data, dir.resolve("charts"), Runnable::run);
+        assembled.writeHtml(report);
         html = Jsoup.parse(Files.readString(report, StandardCharsets.UTF_8));
         style = html.select("style").html();
         Path pdf = dir.resolve("report.pdf");
-        ReportPdf.write(report, pdf);
+        ReportPdf.write(assembled.outline(), dir, assembled.charts(), pdf);
         try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
             pages = doc.getNumberOfPages();
             firstPage = doc.getPage(0).getMediaBox();
@@ -74,6 +75,26 @@ class PrintedReportTest {
         assertEquals(A4_HEIGHT, firstPage.getHeight(), POINT_TOLERANCE, "A4 height");
         for (int p = 1; p <= pages; p++) {
             assertTrue(text.contains("Page " + p + " of " + pages), "page number " + p + " of " + pages);
+        }
+    }
+
+    /**
+     * The charts' words are text in the PDF, not outlines: every {@code <text>} of every chart's
+     * SVG (titles, axis labels including the rotated vertical ones, tick labels, legends) is found
+     * by the text extraction. Spaces are ignored on both sides, since a rotated label comes back
+     * a few letters to a line.
+     */
+    @Test
+    void pdf_holdsEveryChartWord_asText() {
+        String flat = text.replace(" ", "");
+        java.util.Set<String> words = new java.util.LinkedHashSet<>();
+        for (Element t : html.select("figure svg text")) {
+            words.add(t.text().replace(" ", ""));
+        }
+        assertTrue(words.contains("Valueof1invested(logscale)"), "the growth chart's vertical axis label: " + words);
+        assertTrue(words.contains("Date"), "the horizontal axis label");
+        for (String w : words) {
+            assertTrue(flat.contains(w), "chart text in the PDF: " + w);
         }
     }
 

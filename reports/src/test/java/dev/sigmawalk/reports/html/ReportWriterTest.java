@@ -8,6 +8,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.run.PathResult;
+import dev.sigmawalk.reports.pdf.ReportPdf;
 import java.awt.image.BufferedImage;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -16,6 +17,8 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Set;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
 import javax.imageio.ImageIO;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
@@ -246,6 +249,29 @@ class ReportWriterTest {
     @Test
     void sameData_giveTheSameBytes(@TempDir Path other) throws Exception {
         new ReportWriter().write(data, other.resolve("report.html"), other.resolve("charts"));
+        assertArrayEquals(Files.readAllBytes(dir.resolve("report.html")), Files.readAllBytes(other.resolve("report.html")));
+    }
+
+    /**
+     * Charts drawn by four worker threads, the page assembled meanwhile and the PDF laid out before
+     * the HTML is written (as a run does it): the same report and the same PNG files, byte for
+     * byte, as everything drawn on one thread.
+     */
+    @Test
+    void chartsDrawnByWorkers_giveTheSameBytes(@TempDir Path other) throws Exception {
+        ExecutorService workers = Executors.newFixedThreadPool(4);
+        try {
+            ReportPage page = new ReportWriter().assemble(data, other.resolve("charts"), workers);
+            ReportPdf.write(page.outline(), other, page.charts(), other.resolve("report.pdf"));
+            page.writeHtml(other.resolve("report.html"));
+            assertEquals(pngs.size(), page.pngs().size(), "PNG files");
+            for (Path png : pngs) {
+                assertArrayEquals(Files.readAllBytes(png), Files.readAllBytes(other.resolve("charts")
+                        .resolve(png.getFileName())), "PNG " + png.getFileName());
+            }
+        } finally {
+            workers.shutdownNow();
+        }
         assertArrayEquals(Files.readAllBytes(dir.resolve("report.html")), Files.readAllBytes(other.resolve("report.html")));
     }
 
