@@ -51,6 +51,12 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         this(sectors, pairs, PairScanPlan.always());
     }
 
+    /** Only when L ≥ n: with fewer rows than assets the evidence comes from the window's rows. */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return window >= assets;
+    }
+
     /**
      * Never throws for a degenerate window: {@link ResidualGuard} leaves out what cannot be
      * computed and the evidence carries a note saying so, because evidence must never stop the
