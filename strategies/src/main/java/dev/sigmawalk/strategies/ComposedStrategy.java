@@ -48,6 +48,12 @@ final class ComposedStrategy implements StrategyDefinition {
         return risk.label();
     }
 
+    /** The risk model decides: expected returns and the rules read only the estimate and the cheap moments. */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return risk.needsDenseMoments(window, assets);
+    }
+
     @Override
     public Allocator newAllocator(int window) {
         WarmStart warm = new WarmStart();

@@ -51,6 +51,12 @@ public final class FactorDiagnosticsProbe implements WindowProbe<List<FactorDiag
         return List.copyOf(models.keySet());
     }
 
+    /** When there is a factor model to diagnose: its residual covariances start from the dense S. */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return !models.isEmpty();
+    }
+
     @Override
     public List<FactorDiagnostics> probe(EstimationWindow window) {
         List<FactorDiagnostics> out = new ArrayList<>();

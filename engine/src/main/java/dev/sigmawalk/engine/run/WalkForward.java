@@ -24,9 +24,10 @@ import java.util.concurrent.atomic.AtomicInteger;
  * The walk-forward loop. For each window length (window lengths run in parallel, and so do the
  * strategies' decisions at one rebalance), at each rebalance τ it builds one estimation window from rows τ−L+1..τ, lets every strategy decide on
  * that same window (so the window's moments are computed once and shared), then holds each
- * strategy's portfolio over the rows up to the next rebalance. The moments come from running
+ * strategy's portfolio over the rows up to the next rebalance. The dense moments come from running
  * sums per window length ({@link RunningMoments}), moved from one rebalance to the next by
- * adding and removing rows.
+ * adding and removing rows, when a consumer needs them ({@link DenseMomentPlan}); otherwise each
+ * window computes only its cheap moments, in O(L n).
  *
  * <p>Every path is advanced by one task at a time in date order, with its own allocator and
  * book, and written into a slot fixed by study order, so the result does not depend on the
@@ -139,12 +140,15 @@ public final class WalkForward<T> {
         }
         List<T> probed = new ArrayList<>();
         // One set of running sums per window length, owned by this thread and moved forward in
-        // date order, so the moments do not depend on the number of threads.
-        RunningMoments running = new RunningMoments(panel, length, RunningMoments.DEFAULT_REFRESH_EVERY);
+        // date order, so the moments do not depend on the number of threads; kept only when a
+        // consumer of this window length needs the dense S (DenseMomentPlan).
+        DenseMomentPlan plan = new DenseMomentPlan(strategies, probe);
+        RunningMoments running = plan.needs(length, panel.assetCount())
+                ? new RunningMoments(panel, length, RunningMoments.DEFAULT_REFRESH_EVERY) : null;
         int firstHeld = schedule.firstRebalance() + 1;
         for (int j = 0; j < schedule.count(); j++) {
             int tau = schedule.rebalanceRow(j);
-            EstimationWindow window = builder.build(tau, length, running);
+            EstimationWindow window = builder.build(tau, length, running, n -> plan.needs(length, n));
             if (probe != null) {
                 probed.add(probe.probe(window));
             }

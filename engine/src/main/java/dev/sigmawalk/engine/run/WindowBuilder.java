@@ -7,6 +7,7 @@ import dev.sigmawalk.engine.moments.RunningMoments;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.function.IntPredicate;
 import java.util.function.Supplier;
 
 /**
@@ -116,6 +117,20 @@ final class WindowBuilder {
      *     moments from the window's own rows
      */
     EstimationWindow build(int tau, int length, RunningMoments running) {
+        return build(tau, length, running, n -> true);
+    }
+
+    /**
+     * The window of length L ending at row τ. When {@code dense} holds for its number of eligible
+     * assets n, its moments include the dense S, from the running sums when given (moved to τ
+     * when a model first asks; they must not move past τ before then) or else from the window's
+     * own rows; otherwise only the cheap moments are computed, from the window's rows in O(L n),
+     * and the dense S only if someone asks anyway ({@link WindowMoments#withoutCovariance}).
+     *
+     * @param running the running sums for this window length, or {@code null}
+     * @param dense whether a consumer of the window needs the dense S, given n
+     */
+    EstimationWindow build(int tau, int length, RunningMoments running, IntPredicate dense) {
         int[] cols = eligible(tau, length);
         int n = cols.length;
         int all = panel.assetCount();
@@ -137,7 +152,12 @@ final class WindowBuilder {
         for (int c : cols) {
             ids.add(panel.assets().get(c));
         }
-        Supplier<WindowMoments> source = running == null ? null : () -> momentsAt(running, tau, length, cols);
+        Supplier<WindowMoments> source;
+        if (!dense.test(n)) {
+            source = () -> WindowMoments.withoutCovariance(x, m, n);
+        } else {
+            source = running == null ? null : () -> momentsAt(running, tau, length, cols);
+        }
         return new EstimationWindow(panel.date(tau), tau, ids, cols, x, m, panel.periodsPerYear(), source);
     }
 

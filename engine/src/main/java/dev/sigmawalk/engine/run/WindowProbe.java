@@ -10,4 +10,15 @@ import dev.sigmawalk.engine.model.EstimationWindow;
 @FunctionalInterface
 public interface WindowProbe<T> {
     T probe(EstimationWindow window);
+
+    /**
+     * Whether {@link #probe} reads the dense n×n sample matrix of a window of {@code window}
+     * rows and {@code assets} eligible assets; the same contract as
+     * {@link dev.sigmawalk.engine.model.StrategyDefinition#needsDenseMoments}. A probe that
+     * works from the window's rows, or only from the cheap moments (means, variances, each
+     * asset's covariance with the market), answers no. The default says yes.
+     */
+    default boolean needsDenseMoments(int window, int assets) {
+        return true;
+    }
 }

@@ -27,9 +27,19 @@ record WindowFindings(WindowEvidence evidence, List<FactorDiagnostics> factors) 
         factors = List.copyOf(factors);
     }
 
-    /** Both probes on each window. */
+    /** Both probes on each window; the dense moments are needed when either needs them. */
     static WindowProbe<WindowFindings> probe(WindowEvidenceProbe evidence, FactorDiagnosticsProbe factors) {
-        return (EstimationWindow w) -> new WindowFindings(evidence.probe(w), factors.probe(w));
+        return new WindowProbe<>() {
+            @Override
+            public WindowFindings probe(EstimationWindow w) {
+                return new WindowFindings(evidence.probe(w), factors.probe(w));
+            }
+
+            @Override
+            public boolean needsDenseMoments(int window, int assets) {
+                return evidence.needsDenseMoments(window, assets) || factors.needsDenseMoments(window, assets);
+            }
+        };
     }
 
     /** The run with only the single-index evidence, as the rest of the outputs read it. */

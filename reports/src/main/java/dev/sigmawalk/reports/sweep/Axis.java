@@ -26,8 +26,16 @@ public record Axis(String key, int line, int column, List<YamlNode> values) {
         return List.of(key.split("\\.", -1));
     }
 
-    /** How value {@code i} is shown in {@code sweep.csv} and on the sweep page. */
+    /**
+     * How value {@code i} is shown in {@code sweep.csv} and on the sweep page: a text as it reads
+     * ({@code 2012-01-01}, not the quoted form the derived study needs), anything else in YAML's
+     * flow form ({@code [60, 120]}).
+     */
     public String label(int i) {
-        return YamlText.flow(values.get(i));
+        YamlNode v = values.get(i);
+        if (v instanceof YamlNode.Scalar s && s.kind() == YamlNode.Scalar.Kind.STRING) {
+            return s.text();
+        }
+        return YamlText.flow(v);
     }
 }

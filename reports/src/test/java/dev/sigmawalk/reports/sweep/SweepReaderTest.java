@@ -36,7 +36,11 @@ class SweepReaderTest {
         assertEquals(dir.resolve("sweep-out"), s.output());
         assertEquals("b.x", s.axes().get(0).key());
         assertEquals("[60, 120]", s.axes().get(1).label(1));
+        assertEquals("3", s.axes().get(0).label(2));
         assertEquals(6, s.size());
+        SweepFile dates = SweepReader.read(write("study: b.yaml\nvary:\n  walkforward.start: [2012-01-01, 'a b']\n"));
+        assertEquals(java.util.List.of("2012-01-01", "a b"), java.util.List.of(dates.axes().get(0).label(0),
+                dates.axes().get(0).label(1)), "texts shown as they read, without the quotes a study needs");
         assertEquals(java.util.List.of(2, 1), java.util.Arrays.stream(s.coordinates(5)).boxed().toList());
     }
 

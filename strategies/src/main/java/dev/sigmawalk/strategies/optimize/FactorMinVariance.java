@@ -53,10 +53,7 @@ public final class FactorMinVariance {
     private static final class Run {
         private final int n;
         private final int k;
-        private final double[] b;
-        private final double[] c;
-        private final double[] d;
-        private final double[] absFactor;
+        private final FactorProducts sigma;
         private final double[] lo;
         private final double[] hi;
         private final SolverSettings settings;
@@ -68,35 +65,19 @@ public final class FactorMinVariance {
         private int freeCount;
 
         Run(FactorForm form, double[] lower, double[] upper, SolverSettings settings) {
-            this.d = form.specificVariances();
-            this.n = d.length;
-            this.k = form.factorCount();
-            this.b = form.loadings();
-            double[] sf = form.factorCovariance();
-            if (lower.length != n || upper.length != n || b.length != n * k || sf.length != k * k) {
+            this.sigma = new FactorProducts(form);
+            this.n = sigma.size();
+            this.k = sigma.factorCount();
+            if (lower.length != n || upper.length != n) {
                 throw new IllegalArgumentException("factor form (n = " + n + ", K = " + k + ") and bounds ("
                         + lower.length + ", " + upper.length + ") do not match");
-            }
-            this.c = new double[n * k];
-            for (int i = 0; i < n; i++) {
-                for (int a = 0; a < k; a++) {
-                    double v = 0;
-                    for (int e = 0; e < k; e++) {
-                        v += b[i * k + e] * sf[e * k + a];
-                    }
-                    c[i * k + a] = v;
-                }
-            }
-            this.absFactor = new double[k * k];
-            for (int e = 0; e < k * k; e++) {
-                absFactor[e] = Math.abs(sf[e]);
             }
             this.lo = lower;
             this.hi = upper;
             this.settings = settings;
             double trace = 0;
             for (int i = 0; i < n; i++) {
-                trace += diagonal(i);
+                trace += sigma.diagonal(i);
             }
             double rho = trace / n;
             this.shift = rho > 0 && Double.isFinite(rho) ? rho : 1;
@@ -106,20 +87,12 @@ public final class FactorMinVariance {
             this.free = new int[n];
         }
 
-        /** Σ_ii. */
         private double diagonal(int i) {
-            return entry(i, i) + d[i];
+            return sigma.diagonal(i);
         }
 
-        /** c_i'b_j, the factor part of Σ_ij. */
         private double entry(int i, int j) {
-            double v = 0;
-            int ri = i * k;
-            int rj = j * k;
-            for (int a = 0; a < k; a++) {
-                v += c[ri + a] * b[rj + a];
-            }
-            return v;
+            return sigma.entry(i, j);
         }
 
         /** The lowest-variance assets free (twice as many as the caps need, at least 2), the rest at lower. */
@@ -202,29 +175,23 @@ public final class FactorMinVariance {
                 return false;
             }
             double pinnedSum = 0;
-            double[] exposure = new double[k];
+            double[] pinnedWeights = new double[n];
             for (int i = 0; i < n; i++) {
                 if (side[i] == BoundSide.FREE) {
                     continue;
                 }
                 double v = side[i] == BoundSide.LOWER ? lo[i] : hi[i];
                 w[i] = v;
+                pinnedWeights[i] = v;
                 if (v != 0) {
                     pinnedSum += v;
-                    for (int a = 0; a < k; a++) {
-                        exposure[a] += b[i * k + a] * v;
-                    }
                 }
             }
+            double[] exposure = sigma.exposures(pinnedWeights);
             double[] a = new double[m];
             double[] u = new double[m];
             for (int r = 0; r < m; r++) {
-                int i = free[r];
-                double pinned = 0;
-                for (int e = 0; e < k; e++) {
-                    pinned += c[i * k + e] * exposure[e];
-                }
-                a[r] = -pinned;
+                a[r] = -sigma.throughFactors(free[r], exposure);
                 u[r] = 1;
             }
             factor.solveInPlace(a);
@@ -242,52 +209,11 @@ public final class FactorMinVariance {
 
         /** g = C(B'w) + d∘w, O(nK). */
         private void gradient() {
-            double[] exposure = new double[k];
-            for (int i = 0; i < n; i++) {
-                double wi = w[i];
-                if (wi != 0) {
-                    for (int a = 0; a < k; a++) {
-                        exposure[a] += b[i * k + a] * wi;
-                    }
-                }
-            }
-            for (int i = 0; i < n; i++) {
-                double v = 0;
-                for (int a = 0; a < k; a++) {
-                    v += c[i * k + a] * exposure[a];
-                }
-                g[i] = v + d[i] * w[i];
-            }
+            sigma.gradient(w, g);
         }
 
-        /** max_i (Σ_a |b_ia| (|Σ_F| |B|'|w|)_a + d_i |w_i|), ≥ max_i Σ_j |Σ_ij w_j|; 1 when 0. */
         private double scale() {
-            double[] spread = new double[k];
-            for (int i = 0; i < n; i++) {
-                double wi = Math.abs(w[i]);
-                if (wi != 0) {
-                    for (int a = 0; a < k; a++) {
-                        spread[a] += Math.abs(b[i * k + a]) * wi;
-                    }
-                }
-            }
-            double[] through = new double[k];
-            for (int a = 0; a < k; a++) {
-                double v = 0;
-                for (int e = 0; e < k; e++) {
-                    v += absFactor[a * k + e] * spread[e];
-                }
-                through[a] = v;
-            }
-            double largest = 0;
-            for (int i = 0; i < n; i++) {
-                double v = d[i] * Math.abs(w[i]);
-                for (int a = 0; a < k; a++) {
-                    v += Math.abs(b[i * k + a]) * through[a];
-                }
-                largest = Math.max(largest, v);
-            }
-            return largest > 0 && Double.isFinite(largest) ? largest : 1;
+            return sigma.scale(w);
         }
     }
 }

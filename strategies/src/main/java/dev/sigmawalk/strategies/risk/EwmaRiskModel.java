@@ -64,6 +64,12 @@ public record EwmaRiskModel(double halfLife) implements RiskModel {
         return w;
     }
 
+    /** Never: the model works from the window's rows. */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return false;
+    }
+
     @Override
     public String label() {
         return "ewma (half-life " + Formats.number(halfLife) + ")";

@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.strategies.optimize.FactorForm;
 
 import java.util.Objects;
+import java.util.OptionalDouble;
 
 /**
  * A covariance matrix in factor form, Σ = B Σ_F B' + diag(d) (Method §11): n assets load on K
@@ -28,14 +29,49 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
     private final double[] loadings;
     private final double[] factorCovariance;
     private final double[] specific;
+    /** Σ_F off its diagonal is exactly 0: products then cost O(K) per asset instead of O(K²). */
+    private final boolean diagonalFactors;
+    private final OptionalDouble shrinkage;
     private double[] dense;
 
-    private FactorCovariance(int n, int k, double[] loadings, double[] factorCovariance, double[] specific) {
+    private FactorCovariance(int n, int k, double[] loadings, double[] factorCovariance, double[] specific,
+                             OptionalDouble shrinkage) {
         this.n = n;
         this.k = k;
         this.loadings = loadings;
         this.factorCovariance = factorCovariance;
         this.specific = specific;
+        this.diagonalFactors = isDiagonal(factorCovariance, k);
+        this.shrinkage = shrinkage;
+    }
+
+    private static boolean isDiagonal(double[] m, int k) {
+        for (int a = 0; a < k; a++) {
+            for (int b = 0; b < k; b++) {
+                if (a != b && m[a * k + b] != 0) {
+                    return false;
+                }
+            }
+        }
+        return true;
+    }
+
+    /**
+     * The same matrix reporting the Ledoit-Wolf intensity δ that made it (Method §3), for a
+     * shrinkage estimate handed on in factor form; shares the arrays.
+     *
+     * @param delta δ in [0, 1]
+     */
+    public FactorCovariance withShrinkage(double delta) {
+        if (!(delta >= 0 && delta <= 1)) {
+            throw new IllegalArgumentException("shrinkage intensity (" + delta + ") must be in [0, 1]");
+        }
+        return new FactorCovariance(n, k, loadings, factorCovariance, specific, OptionalDouble.of(delta));
+    }
+
+    @Override
+    public OptionalDouble shrinkage() {
+        return shrinkage;
     }
 
     /**
@@ -77,7 +113,7 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
                         + ") must be finite and >= 0");
             }
         }
-        return new FactorCovariance(n, k, loadings, factorCovariance, specific);
+        return new FactorCovariance(n, k, loadings, factorCovariance, specific, OptionalDouble.empty());
     }
 
     /** n. */
@@ -118,6 +154,12 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
         int lo = Math.min(i, j);
         int hi = Math.max(i, j);
         double v = 0;
+        if (diagonalFactors) {
+            for (int a = 0; a < k; a++) {
+                v += loadings[lo * k + a] * factorCovariance[a * k + a] * loadings[hi * k + a];
+            }
+            return i == j ? v + specific[i] : v;
+        }
         for (int b = 0; b < k; b++) {
             double row = 0;
             for (int a = 0; a < k; a++) {
@@ -215,6 +257,14 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
 
     private double[] loadingsTimesFactorCovariance() {
         double[] c = new double[n * k];
+        if (diagonalFactors) {
+            for (int i = 0; i < n; i++) {
+                for (int a = 0; a < k; a++) {
+                    c[i * k + a] = loadings[i * k + a] * factorCovariance[a * k + a];
+                }
+            }
+            return c;
+        }
         for (int i = 0; i < n; i++) {
             for (int b = 0; b < k; b++) {
                 double s = 0;

@@ -31,6 +31,12 @@ public record MultiIndexRiskModel(FactorColumns factors) implements RiskModel {
         return MultiIndexFit.of(window, factors.design(window));
     }
 
+    /** Never: the model works from the window's rows. */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return false;
+    }
+
     @Override
     public String label() {
         return "multi-index (" + factors.spelling() + ")";

@@ -63,6 +63,12 @@ public record NonlinearShrinkageRiskModel() implements RiskModel {
         return s;
     }
 
+    /** Only when n ≤ L: with more assets than rows the eigenpairs come from the L×L dual ({@link SampleEigen}). */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return assets <= window;
+    }
+
     @Override
     public String label() {
         return "nonlinear shrinkage";

@@ -54,6 +54,12 @@ public record PrincipalComponentsRiskModel(int components) implements RiskModel 
         return components + 1;
     }
 
+    /** Only when n ≤ L: with more assets than rows the eigenpairs come from the L×L dual ({@link SampleEigen}). */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return assets <= window;
+    }
+
     @Override
     public String label() {
         return "principal components (" + components + ")";

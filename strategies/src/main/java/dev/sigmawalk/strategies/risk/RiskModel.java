@@ -36,6 +36,18 @@ public sealed interface RiskModel permits SampleRiskModel, SingleIndexRiskModel,
     String label();
 
     /**
+     * Whether {@link #estimate} reads the window's dense sample matrix S
+     * ({@code window.moments().covariance()}) for a window of {@code window} rows and
+     * {@code assets} eligible assets. A function of the two numbers only, so the engine's choice
+     * of running sums is the same on every run (see
+     * {@link dev.sigmawalk.engine.model.StrategyDefinition#needsDenseMoments}). The cheap moments
+     * (means, variances, covariances with the market) never count.
+     */
+    default boolean needsDenseMoments(int window, int assets) {
+        return true;
+    }
+
+    /**
      * A model of Method §3, which takes no settings beyond the shrinkage target.
      *
      * @param kind   {@code risk:}: sample, single-index or shrinkage

@@ -161,24 +161,154 @@ final class ShrinkageIntensity {
 
     /** True when γ̂ ≤ {@link #SAME_AS_SAMPLE} Σ_ij s_ij² (divisor-L moments throughout). */
     private static boolean sameAsSample(CentredWindow w, double gamma) {
+        return sameAsSample(gamma, sampleNormSquared(w));
+    }
+
+    /** True when γ̂ ≤ {@link #SAME_AS_SAMPLE} ‖S‖², both with divisor-L moments. */
+    private static boolean sameAsSample(double gamma, double normSquared) {
+        return !(gamma > SAME_AS_SAMPLE * normSquared);
+    }
+
+    /** Σ_ij s_ij² with divisor-L moments, from the dense S. */
+    private static double sampleNormSquared(CentredWindow w) {
         double c = w.toPopulationDivisor();
         double norm = 0;
         for (double v : w.moments().covariance()) {
             norm += c * v * c * v;
         }
-        return !(gamma > SAME_AS_SAMPLE * norm);
+        return norm;
     }
 
     /** δ = max(0, min(1, κ̂/L)), κ̂ = (π̂ - ρ̂)/γ̂; 0 when the target equals S. */
     private static double fromKappa(CentredWindow w, double pi, double rho, double gamma) {
-        if (sameAsSample(w, gamma)) {
+        return fromKappa(pi, rho, gamma, sampleNormSquared(w), w.length());
+    }
+
+    /** As {@link #fromKappa(CentredWindow, double, double, double)} with ‖S‖² (divisor L) given. */
+    private static double fromKappa(double pi, double rho, double gamma, double normSquared, int length) {
+        if (sameAsSample(gamma, normSquared)) {
             return 0.0;
         }
-        double delta = (pi - rho) / gamma / w.length();
+        double delta = (pi - rho) / gamma / length;
         if (Double.isNaN(delta)) {
             throw new ArithmeticException("shrinkage intensity is undefined (pi " + pi + ", rho " + rho
                     + ", gamma " + gamma + ")");
         }
         return Math.max(0.0, Math.min(1.0, delta));
+    }
+
+    /**
+     * The single-index intensity of {@link #singleIndex} without the n×n matrices, for any L and
+     * n: every O(n²) sum of the dense version becomes an O(L n) row sum or the squared norm of an
+     * L×L Gram matrix ({@link CentredColumns#gramNormSquared}), O(L² n) in all.
+     * <ul>
+     *   <li>Σ_ij s_ij² = ‖X̃X̃'‖²/L², so π̂ = 1/L Σ_t (Σ_i x̃_ti²)² − ‖X̃X̃'‖²/L²;</li>
+     *   <li>with a_i = s_i0, Σ_{i≠j} f_ij s_ij = (a'Sa − Σ_i a_i² s_ii)/s_00 and
+     *       a'Sa = 1/L Σ_t c_t², c_t = Σ_i a_i x̃_ti;</li>
+     *   <li>the target with its diagonal, aa'/s_00, equals X̃'PX̃/L with P = ỹỹ'/ỹ'ỹ, so
+     *       S − aa'/s_00 = E'E/L with E = (I − P)X̃ the market-model residuals, and
+     *       γ̂ = Σ_{i≠j} (e_i'e_j)²/L² = (‖EE'‖² − Σ_i (e_i'e_i)²)/L², a sum of squares of small
+     *       numbers rather than a difference of large ones.</li>
+     * </ul>
+     */
+    static double singleIndexGram(CentredWindow w, CentredColumns x) {
+        int n = w.assets();
+        int len = w.length();
+        double c = w.toPopulationDivisor();
+        double s00 = c * w.moments().marketVariance();
+        double[] si0 = new double[n];
+        double[] slope = new double[n];
+        for (int i = 0; i < n; i++) {
+            si0[i] = c * w.moments().marketCovariance()[i];
+            slope[i] = si0[i] / s00;
+        }
+        RowSums rows = RowSums.of(w, si0);
+        double normS = CentredColumns.gramNormSquared(x.columns(), n, len) / ((double) len * len);
+        double pi = rows.squaredNorms / len - normS;
+        double piDiagonal = rows.fourthPowers / len - rows.ownVarianceSquares(len);
+        double rhoOff = 2.0 / s00 * rows.cross / len - rows.market / (s00 * s00 * len)
+                - rows.targetTimesSample / (s00 * len);
+        double[] e = x.residuals(slope);
+        double gamma = (CentredColumns.gramNormSquared(e, n, len) - CentredColumns.ownNormsSquared(e, n, len))
+                / ((double) len * len);
+        return fromKappa(pi, piDiagonal + rhoOff, gamma, normS, len);
+    }
+
+    /**
+     * The identity-target intensity of {@link #identity} without the n×n matrices: with
+     * m_L = tr(S_L)/n, γ̂ = ‖S_L − m_L I‖² = ‖S_L‖² − n m_L², and ‖S_L‖² = ‖X̃X̃'‖²/L².
+     */
+    static double identityGram(CentredWindow w, CentredColumns x) {
+        int n = w.assets();
+        int len = w.length();
+        RowSums rows = RowSums.of(w, new double[n]);
+        double normS = CentredColumns.gramNormSquared(x.columns(), n, len) / ((double) len * len);
+        double trace = 0;
+        for (int i = 0; i < n; i++) {
+            trace += rows.ownSquares[i] / len;
+        }
+        double gamma = Math.max(0.0, normS - trace * trace / n);
+        if (sameAsSample(gamma, normS)) {
+            return 0.0;
+        }
+        double pi = rows.squaredNorms / len - normS;
+        double dSquared = gamma / n;
+        double bBarSquared = Math.max(0.0, pi) / ((double) n * len);
+        return Math.min(bBarSquared, dSquared) / dSquared;
+    }
+
+    /**
+     * The O(L n) sums over the window's rows that the Gram forms share, for weights a_i: with
+     * c_t = Σ_i a_i x̃_ti, the single-index terms Σ_t ỹ_t Σ_i x̃_ti²(c_t − a_i x̃_ti),
+     * Σ_t ỹ_t²(c_t² − Σ_i a_i² x̃_ti²) and Σ_t (c_t² − Σ_i a_i² x̃_ti²); and Σ_t (Σ_i x̃_ti²)²,
+     * Σ_t Σ_i x̃_ti⁴ and each Σ_t x̃_ti².
+     */
+    private static final class RowSums {
+        double cross;
+        double market;
+        double targetTimesSample;
+        double squaredNorms;
+        double fourthPowers;
+        double[] ownSquares;
+
+        static RowSums of(CentredWindow w, double[] a) {
+            int n = w.assets();
+            RowSums r = new RowSums();
+            r.ownSquares = new double[n];
+            double[] x = new double[n];
+            for (int t = 0; t < w.length(); t++) {
+                double y = w.row(t, x);
+                double ct = 0;
+                double ownSq = 0;
+                double norm = 0;
+                for (int i = 0; i < n; i++) {
+                    double sq = x[i] * x[i];
+                    ct += a[i] * x[i];
+                    ownSq += a[i] * a[i] * sq;
+                    norm += sq;
+                    r.fourthPowers += sq * sq;
+                    r.ownSquares[i] += sq;
+                }
+                double rowCross = 0;
+                for (int i = 0; i < n; i++) {
+                    rowCross += x[i] * x[i] * (ct - a[i] * x[i]);
+                }
+                r.cross += y * rowCross;
+                r.market += y * y * (ct * ct - ownSq);
+                r.targetTimesSample += ct * ct - ownSq;
+                r.squaredNorms += norm * norm;
+            }
+            return r;
+        }
+
+        /** Σ_i s_ii² with divisor-L variances from the rows. */
+        double ownVarianceSquares(int len) {
+            double sum = 0;
+            for (double v : ownSquares) {
+                double sii = v / len;
+                sum += sii * sii;
+            }
+            return sum;
+        }
     }
 }

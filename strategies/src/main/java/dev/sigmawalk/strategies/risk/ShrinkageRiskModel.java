@@ -19,7 +19,9 @@ import java.util.OptionalDouble;
  *   <li>identity: F = (tr S / n) I (Ledoit &amp; Wolf 2004, J. Multivariate Analysis).</li>
  * </ul>
  * The estimate reports δ through {@link CovarianceEstimate#shrinkage()}. Cost O(L n + n²) on top
- * of the window's moments.
+ * of the window's moments; with fewer rows than assets the single-index and identity targets
+ * give Σ as diagonal plus low rank instead, in O(L² n) without any n×n matrix
+ * ({@link LowRankShrinkage}).
  *
  * @param target the structured matrix shrunk toward
  */
@@ -36,6 +38,14 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
      */
     @Override
     public CovarianceEstimate estimate(EstimationWindow window) {
+        if (structured(window.length(), window.assetCount())) {
+            return LowRankShrinkage.estimate(target, new CentredWindow(window));
+        }
+        return dense(window);
+    }
+
+    /** The estimate as a dense n×n matrix, whatever the window's shape. */
+    CovarianceEstimate dense(EstimationWindow window) {
         CentredWindow centred = new CentredWindow(window);
         WindowMoments moments = centred.moments();
         int n = moments.assets();
@@ -54,6 +64,19 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
             delta = ShrinkageIntensity.identity(centred, f, pi);
         }
         return new DenseCovariance(n, combine(delta, f, moments.covariance()), OptionalDouble.of(delta));
+    }
+
+    /**
+     * Not when the estimate is handed on as diagonal plus low rank ({@link LowRankShrinkage}:
+     * the single-index and identity targets with L &lt; n).
+     */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return !structured(window, assets);
+    }
+
+    private boolean structured(int window, int assets) {
+        return target != ShrinkageTarget.CONSTANT_CORRELATION && SampleRank.lowRank(window, assets);
     }
 
     @Override

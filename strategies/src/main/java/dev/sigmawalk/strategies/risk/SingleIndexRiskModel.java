@@ -18,6 +18,12 @@ public record SingleIndexRiskModel() implements RiskModel {
         return SingleIndexCovariance.fit(window.moments());
     }
 
+    /** Never: the model reads the cheap moments only. */
+    @Override
+    public boolean needsDenseMoments(int window, int assets) {
+        return false;
+    }
+
     @Override
     public String label() {
         return "single-index";

@@ -4,12 +4,14 @@ import dev.sigmawalk.strategies.optimize.ActiveSetSolver;
 import dev.sigmawalk.strategies.optimize.BoundSide;
 import dev.sigmawalk.strategies.optimize.FactorForm;
 import dev.sigmawalk.strategies.optimize.FactorMinVariance;
+import dev.sigmawalk.strategies.optimize.FactorScreening;
 import dev.sigmawalk.strategies.optimize.QuadraticProblem;
 import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import dev.sigmawalk.strategies.optimize.SingleFactorMinVariance;
 import dev.sigmawalk.strategies.optimize.SolveOutcome;
 import dev.sigmawalk.strategies.optimize.SolverSettings;
 import dev.sigmawalk.strategies.optimize.UnboundedSolver;
+import dev.sigmawalk.strategies.optimize.ZeroVarianceProjection;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -22,9 +24,15 @@ import java.util.Optional;
  *       as NotFormed naming the singular matrix.</li>
  *   <li>Bounds and a single-factor Σ: the O(n log n) clamp-and-threshold rule, falling back to
  *       the exact active-set solver when it cannot certify its answer.</li>
+ *   <li>Bounds and a factor form without specific variance (a sample covariance of fewer rows
+ *       than assets): the screened exact solve below; when the minimum variance is zero, the
+ *       zero-variance portfolio of smallest Σ w_i² ({@link ZeroVarianceProjection}, Method §5).</li>
  *   <li>Bounds and a factor-form Σ = BΣ_FB' + diag(d): the primal-dual active-set method on
  *       the factors ({@link FactorMinVariance}), without the n×n matrix, warm-started from the
- *       previous rebalance; the dense solver when it cannot certify its answer.</li>
+ *       previous rebalance.</li>
+ *   <li>A factor form that neither settles, with every lower bound 0: the exact dense solver on
+ *       a screened subset of the assets, verified on all of them ({@link FactorScreening});
+ *       otherwise the dense solver on the n×n matrix.</li>
  *   <li>Bounds otherwise: the exact active-set solver, warm-started from the previous rebalance.</li>
  * </ul>
  *
@@ -70,14 +78,36 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
         }
         BoundSide[] guess = warm.guessFor(input.assets());
         if (input.covariance() instanceof FactorForm) {
-            Optional<SolveOutcome.Optimal> small = new FactorMinVariance(settings)
-                    .solve((FactorForm) input.covariance(), lo, hi, guess);
-            if (small.isPresent()) {
-                return small.get();
+            Optional<SolveOutcome.Optimal> structured = factorSide((FactorForm) input.covariance(), lo, hi, guess);
+            if (structured.isPresent()) {
+                return structured.get();
             }
         }
         QuadraticProblem problem = new QuadraticProblem(n, input.covariance().dense(), new double[n], lo, hi);
         return new ActiveSetSolver(settings).solve(problem, guess);
+    }
+
+    /**
+     * A factor form without specific variance (singular): the screened exact solve, and when
+     * its optimum has zero variance (so that every zero-variance portfolio is optimal), the
+     * minimum-norm one among them (Method §5). Otherwise the factor-side primal-dual method, then
+     * the screened solve. Empty when none certifies an answer.
+     */
+    private Optional<SolveOutcome.Optimal> factorSide(FactorForm form, double[] lo, double[] hi, BoundSide[] guess) {
+        if (!ZeroVarianceProjection.applies(form)) {
+            Optional<SolveOutcome.Optimal> small = new FactorMinVariance(settings).solve(form, lo, hi, guess);
+            if (small.isPresent()) {
+                return small;
+            }
+            return FactorScreening.applies(lo) ? new FactorScreening(settings).solve(form, lo, hi, guess) : Optional.empty();
+        }
+        Optional<SolveOutcome.Optimal> screened = FactorScreening.applies(lo)
+                ? new FactorScreening(settings).solve(form, lo, hi, guess) : Optional.empty();
+        if (screened.isPresent() && !ZeroVarianceProjection.zeroVariance(form, screened.get().weights())) {
+            return screened;
+        }
+        Optional<SolveOutcome.Optimal> zero = new ZeroVarianceProjection().solve(form, lo, hi);
+        return zero.isPresent() ? zero : screened;
     }
 
     @Override

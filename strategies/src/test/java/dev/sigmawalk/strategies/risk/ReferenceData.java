@@ -27,7 +27,12 @@ public final class ReferenceData {
 
     /** window.csv as an estimation window: column {@code market} = m_t, A01..A12 = x_t. */
     public static EstimationWindow window() {
-        List<String[]> rows = rows("window.csv");
+        return window("window.csv");
+    }
+
+    /** A CSV of the window.csv layout ({@code row,market,<assets>}) as an estimation window. */
+    public static EstimationWindow window(String file) {
+        List<String[]> rows = rows(file);
         String[] header = rows.get(0);
         List<String> assets = Arrays.asList(header).subList(2, header.length);
         int n = assets.size();
@@ -76,9 +81,14 @@ public final class ReferenceData {
 
     /** A numeric key at the top level of values.json. */
     public static double value(String key) {
-        Matcher m = Pattern.compile("\"" + Pattern.quote(key) + "\"\\s*:\\s*([-+0-9.eE]+)").matcher(text("values.json"));
+        return value("values.json", key);
+    }
+
+    /** A numeric key at the top level of a JSON file of the values.json kind. */
+    public static double value(String file, String key) {
+        Matcher m = Pattern.compile("\"" + Pattern.quote(key) + "\"\\s*:\\s*([-+0-9.eE]+)").matcher(text(file));
         if (!m.find()) {
-            throw new IllegalArgumentException("values.json has no numeric key " + key);
+            throw new IllegalArgumentException(file + " has no numeric key " + key);
         }
         return Double.parseDouble(m.group(1));
     }
