@@ -17,9 +17,9 @@ import java.util.Optional;
 
 /**
  * Computes {@link WindowEvidence} from each estimation window (Method §8) by the cheaper of two
- * exact routes. When L ≥ n, from the window's dense moments, which every model of such a window
- * needs anyway: O(n²). When L &lt; n, from the window's rows alone, never asking for an n×n
- * moment matrix: the residuals are fitted in O(L n), CD, LM and LM_adj follow from sum
+ * exact routes. When L ≥ n, or when a model already had the window's dense moments built, from
+ * those moments: O(n²). Otherwise from the window's rows alone, never asking for an n×n moment
+ * matrix: the residuals are fitted in O(L n), CD, LM and LM_adj follow from sum
  * identities in O(L² n) and the sector means in O(L n + L s²) ({@link ResidualRows}); the
  * mean |ρ| and the largest pairs need every pair, O(L n²/2) in tiles ({@link PairScan}), and
  * are computed at the rebalances the {@link PairScanPlan} names.
@@ -68,7 +68,7 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         boolean scan = plan.scans(window.endRow(), window.assetCount());
         Found found;
         try {
-            found = window.length() >= window.assetCount() ? fromMoments(window, scan) : fromRows(window, scan);
+            found = readsMoments(window) ? fromMoments(window, scan) : fromRows(window, scan);
         } catch (IllegalArgumentException e) {
             // The guard applies the correlations' own rules, so this is a non-finite input only.
             found = new Found(Optional.empty(), List.of(), Optional.empty(),
@@ -76,6 +76,16 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         }
         return new WindowEvidence(window.date(), window.length(), found.diagnostics, found.largest, found.sectors,
                 found.notes, estimates);
+    }
+
+    /**
+     * The moment route when L ≥ n (declared in {@link #needsDenseMoments}) or when some model
+     * already had the dense S built for this window: reading it is O(n²), less than the rows
+     * route's O(L² n) sums and O(L n²) scan. Otherwise the rows, and S is never built for the
+     * evidence.
+     */
+    private static boolean readsMoments(EstimationWindow window) {
+        return window.length() >= window.assetCount() || window.moments().hasCovariance();
     }
 
     /** What one route found. */

@@ -29,9 +29,12 @@ class WindowEvidenceRoutesTest {
     private static final double SAME_TO_ROUNDING = 1e-12;
     private static final int L = 24;
 
-    /** L×n returns on a market and three sector shocks; asset 0 is 2 m exactly when asked. */
-    private static EstimationWindow window(int n, int endRow, boolean firstFollowsMarket, boolean countMoments,
-                                           int[] asked) {
+    /**
+     * L×n returns on a market and three sector shocks; asset 0 is 2 m exactly when asked. The
+     * window's moments are the cheap ones, with S built only if someone asks, as the walk-forward
+     * hands them to a window whose consumers do not need S.
+     */
+    private static EstimationWindow window(int n, int endRow, boolean firstFollowsMarket) {
         SplittableRandom rng = new SplittableRandom(17 + n);
         double[] m = new double[L];
         double[] x = new double[L * n];
@@ -47,15 +50,8 @@ class WindowEvidenceRoutesTest {
         for (int i = 0; i < n; i++) {
             ids.add("A" + i);
         }
-        EstimationWindow plain = new EstimationWindow(LocalDate.of(2020, 12, 31), endRow, ids,
-                IntStream.range(0, n).toArray(), x, m, 12, null);
-        if (!countMoments) {
-            return plain;
-        }
-        return new EstimationWindow(plain.date(), endRow, ids, IntStream.range(0, n).toArray(), x, m, 12, () -> {
-            asked[0]++;
-            return WindowMoments.of(plain);
-        });
+        return new EstimationWindow(LocalDate.of(2020, 12, 31), endRow, ids, IntStream.range(0, n).toArray(), x, m, 12,
+                () -> WindowMoments.withoutCovariance(x, m, n));
     }
 
     private static Map<String, String> sectors(int n) {
@@ -74,7 +70,7 @@ class WindowEvidenceRoutesTest {
     @Test
     void wideWindow_rowsRoute_equalsThePairByPairValues_andLeavesOutTheSameAsset() {
         int n = 60;
-        EstimationWindow w = window(n, 100, true, false, null);
+        EstimationWindow w = window(n, 100, true);
         WindowEvidence e = new WindowEvidenceProbe(sectors(n), 5).probe(w);
         assertEquals(List.of("asset 'A0' left out of the residual diagnostics: its market-model residual variance"
                 + " is zero (it moves exactly with the market)"), e.notes());
@@ -102,18 +98,33 @@ class WindowEvidenceRoutesTest {
         }
     }
 
-    /** The rows route reads the window's rows only: the residual evidence never asks for the moments. */
+    /**
+     * The rows route never has the window's dense S built; with L ≥ n the moment route builds it
+     * once (the probe declares that it needs it there), and where a model already had it built the
+     * moment route reads it even when L &lt; n, with the same evidence.
+     */
     @Test
-    void wideWindow_residualEvidence_neverAsksForTheMoments() {
-        int[] asked = {0};
-        EstimationWindow w = window(40, 100, false, true, asked);
-        WindowEvidence e = new WindowEvidenceProbe(sectors(40), 3).probe(w);
-        assertTrue(e.diagnostics().isPresent());
-        // The written α, β, d come from the moments (one request); the residual statistics add none.
-        assertEquals(1, asked[0], "moment requests");
-        EstimationWindow narrow = window(20, 100, false, true, asked);
-        new WindowEvidenceProbe(Map.of(), 3).probe(narrow);
-        assertEquals(2, asked[0], "L >= n reads the moments once, shared with the estimates");
+    void wideWindow_residualEvidence_neverBuildsTheDenseMoments() {
+        EstimationWindow wide = window(40, 100, false);
+        WindowEvidenceProbe probe = new WindowEvidenceProbe(sectors(40), 3);
+        WindowEvidence fromRows = probe.probe(wide);
+        assertTrue(fromRows.diagnostics().isPresent());
+        assertFalse(wide.moments().hasCovariance(), "S was not built for the evidence");
+        assertFalse(probe.needsDenseMoments(L, 40));
+        EstimationWindow narrow = window(20, 100, false);
+        probe.probe(narrow);
+        assertTrue(narrow.moments().hasCovariance(), "L >= n reads S");
+        assertTrue(probe.needsDenseMoments(L, 20));
+        EstimationWindow built = window(40, 100, false);
+        built.moments().covariance();
+        WindowEvidence fromMoments = probe.probe(built);
+        ResidualDiagnostics a = fromRows.diagnostics().orElseThrow();
+        ResidualDiagnostics b = fromMoments.diagnostics().orElseThrow();
+        assertEquals(a.meanAbsCorrelation(), b.meanAbsCorrelation(), SAME_TO_ROUNDING, "mean |rho|");
+        assertEquals(a.lmStatistic(), b.lmStatistic(), SAME_TO_ROUNDING * a.lmStatistic(), "LM");
+        assertEquals(a.cdStatistic(), b.cdStatistic(), SAME_TO_ROUNDING * 100, "CD");
+        assertEquals(fromRows.largestPairs().stream().map(p -> p.first() + p.second()).toList(),
+                fromMoments.largestPairs().stream().map(p -> p.first() + p.second()).toList());
     }
 
     @Test
@@ -128,7 +139,7 @@ class WindowEvidenceRoutesTest {
         }
         List<String> ids = IntStream.range(0, n).mapToObj(i -> "A" + i).toList();
         EstimationWindow w = new EstimationWindow(LocalDate.of(2020, 12, 31), 100, ids, IntStream.range(0, n).toArray(),
-                x, m, 12, null);
+                x, m, 12, () -> WindowMoments.withoutCovariance(x, m, n));
         WindowEvidence e = new WindowEvidenceProbe(Map.of(), 3).probe(w);
         assertTrue(e.diagnostics().isEmpty());
         assertEquals(List.of(ResidualGuard.CONSTANT_MARKET), e.notes());
@@ -146,8 +157,8 @@ class WindowEvidenceRoutesTest {
         PairScanPlan plan = PairScanPlan.of(schedule, 10, 3);
         for (int n : new int[] {40, 12}) {
             for (int row = 100; row <= 107; row++) {
-                WindowEvidence thinned = new WindowEvidenceProbe(Map.of(), 3, plan).probe(window(n, row, false, false, null));
-                WindowEvidence full = new WindowEvidenceProbe(Map.of(), 3).probe(window(n, row, false, false, null));
+                WindowEvidence thinned = new WindowEvidenceProbe(Map.of(), 3, plan).probe(window(n, row, false));
+                WindowEvidence full = new WindowEvidenceProbe(Map.of(), 3).probe(window(n, row, false));
                 ResidualDiagnostics d = thinned.diagnostics().orElseThrow();
                 boolean scanned = row == 100 || row == 103 || row == 106 || row == 107;
                 String label = "n = " + n + ", row " + row;
@@ -161,8 +172,39 @@ class WindowEvidenceRoutesTest {
                 }
             }
         }
-        WindowEvidence small = new WindowEvidenceProbe(Map.of(), 3, plan).probe(window(9, 101, false, false, null));
+        WindowEvidence small = new WindowEvidenceProbe(Map.of(), 3, plan).probe(window(9, 101, false));
         assertTrue(small.diagnostics().orElseThrow().hasMeanAbsCorrelation(), "below the size: every rebalance");
+    }
+
+    /**
+     * Both routes (n = 30 > L and n = 12 &lt; L) give the same notes when only one asset has a
+     * residual: every other asset named, then that no correlation is left, and no diagnostics.
+     */
+    @Test
+    void onlyOneAssetWithAResidual_givesNamedNotes_onBothRoutes() {
+        for (int n : new int[] {30, 12}) {
+            SplittableRandom rng = new SplittableRandom(n);
+            double[] m = new double[L];
+            double[] x = new double[L * n];
+            for (int t = 0; t < L; t++) {
+                m[t] = rng.nextDouble() - 0.5;
+                for (int i = 0; i < n; i++) {
+                    x[t * n + i] = i == n - 1 ? rng.nextDouble() : (i + 1) * m[t];
+                }
+            }
+            List<String> ids = IntStream.range(0, n).mapToObj(i -> "A" + i).toList();
+            WindowEvidence e = new WindowEvidenceProbe(Map.of(), 3).probe(new EstimationWindow(
+                    LocalDate.of(2020, 12, 31), 100, ids, IntStream.range(0, n).toArray(), x, m, 12,
+                    () -> WindowMoments.withoutCovariance(x, m, ids.size())));
+            assertTrue(e.diagnostics().isEmpty(), "n = " + n);
+            List<String> expected = new ArrayList<>();
+            for (int i = 0; i < n - 1; i++) {
+                expected.add("asset 'A" + i + "' left out of the residual diagnostics: its market-model residual"
+                        + " variance is zero (it moves exactly with the market)");
+            }
+            expected.add("fewer than two assets with a residual variance: no residual correlation");
+            assertEquals(expected, e.notes(), "n = " + n);
+        }
     }
 
     @Test

@@ -122,9 +122,15 @@ final class FactorLoop {
         long siLm = single.points().stream().filter(p -> p.diagnostics().hasLmAdj()
                 && p.diagnostics().lmAdjPValue() < LEVEL).count();
         residuals.put(SINGLE_INDEX, new String[] {Formats.ratio(siMean), share(siLm, n)});
+        // Like with like: where the single index's mean |ρ| was computed at some rebalances only
+        // (Method §8), the other models' means are averaged over the same rebalances.
+        Set<java.time.LocalDate> scannedDates = EvidenceSections.scanned(single).map(DiagnosticsPoint::date)
+                .collect(java.util.stream.Collectors.toSet());
+        boolean thinned = scannedDates.size() < n;
         for (String m : models) {
             List<FactorDiagnostics> mine = points.stream().filter(p -> p.model().equals(m)).toList();
-            double mean = mine.stream().mapToDouble(FactorDiagnostics::meanAbsCorrelation).average().orElseThrow();
+            OptionalDouble mean = mine.stream().filter(p -> !thinned || scannedDates.contains(p.date()))
+                    .mapToDouble(FactorDiagnostics::meanAbsCorrelation).average();
             long lm = mine.stream().filter(p -> p.lmAdj().isPresent() && p.lmAdj().get().pValue() < LEVEL).count();
             residuals.put(m, new String[] {Formats.ratio(mean), share(lm, mine.size())});
         }
