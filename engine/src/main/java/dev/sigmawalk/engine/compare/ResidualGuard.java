@@ -12,8 +12,9 @@ import java.util.Optional;
 /**
  * Decides what of one estimation window the residual diagnostics (Method §8) can use, so that a
  * degenerate window is reported instead of stopping the run: a market whose excess return does
- * not vary leaves no market-model residuals at all; an asset whose residual variance is zero
- * (it moves exactly with the market) has no residual correlation and is left out, by name.
+ * not vary leaves no market-model residuals at all; an asset whose excess return does not vary,
+ * or whose residual variance is zero (it moves exactly with the market), has no residual
+ * correlation and is left out, by name.
  *
  * <p>Two routes, the same decisions: {@link #of} reads the window's dense moments (the route
  * when L ≥ n, where any model needs them anyway), {@link #rows} fits the residuals from the
@@ -67,6 +68,10 @@ final class ResidualGuard {
         List<Integer> keep = new ArrayList<>();
         List<String> notes = new ArrayList<>();
         for (int i = 0; i < m.assets(); i++) {
+            if (constant(window, i)) {
+                notes.add(constantNote(window.assets().get(i)));
+                continue;
+            }
             double sii = m.covariance(i, i);
             double d = sii - m.marketCovariance()[i] * m.marketCovariance()[i] / smm;
             if (d > RELATIVE_ZERO_VARIANCE * sii && Double.isFinite(d)) {
@@ -108,7 +113,9 @@ final class ResidualGuard {
         int kept = 0;
         List<String> notes = new ArrayList<>();
         for (int i = 0; i < fit.assetCount(); i++) {
-            if (fit.hasResidual(i)) {
+            if (constant(window, i)) {
+                notes.add(constantNote(window.assets().get(i)));
+            } else if (fit.hasResidual(i)) {
                 keep[kept++] = i;
             } else {
                 notes.add(leftOut(window.assets().get(i)));
@@ -130,6 +137,29 @@ final class ResidualGuard {
             return Optional.of("a window of " + window.length() + " rows leaves no market-model residuals");
         }
         return window.marketVaries() ? Optional.empty() : Optional.of(CONSTANT_MARKET);
+    }
+
+    /**
+     * Whether asset i's excess return is the same number in every row, compared exactly: centring
+     * such a column leaves rounding dust (the mean of L copies of 0.1 is not 0.1), whose
+     * "residual" would pass the relative rule and give correlations of noise. The walk-forward
+     * never hands the probe such a column (the window builder leaves it out); a window built by
+     * hand may. O(1) for a column that varies, which exits at its first change.
+     */
+    private static boolean constant(EstimationWindow window, int i) {
+        int n = window.assetCount();
+        double[] x = window.excessReturns();
+        for (int t = 1; t < window.length(); t++) {
+            if (x[t * n + i] != x[i]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static String constantNote(String asset) {
+        return "asset '" + asset + "' left out of the residual diagnostics: its excess return does not vary in the"
+                + " window";
     }
 
     private static String leftOut(String asset) {

@@ -207,6 +207,33 @@ class WindowEvidenceRoutesTest {
         }
     }
 
+    /**
+     * A column that is 0.1 in every row (its computed mean is not exactly 0.1, so centring leaves
+     * rounding dust) is left out by name on both routes (n = 40 > L and n = 12 &lt; L), and the
+     * others give the diagnostics they give without it.
+     */
+    @Test
+    void constantColumn_isLeftOutByName_onBothRoutes() {
+        for (int n : new int[] {40, 12}) {
+            EstimationWindow base = window(n, 100, false);
+            double[] x = base.excessReturns().clone();
+            for (int t = 0; t < L; t++) {
+                x[t * n] = 0.1;
+            }
+            double[] m = base.marketExcess();
+            EstimationWindow w = new EstimationWindow(base.date(), 100, base.assets(), base.columns(), x, m, 12,
+                    () -> WindowMoments.withoutCovariance(x, m, n));
+            WindowEvidence e = new WindowEvidenceProbe(Map.of(), 3).probe(w);
+            assertEquals(List.of("asset 'A0' left out of the residual diagnostics: its excess return does not vary in"
+                    + " the window"), e.notes(), "n = " + n);
+            ResidualDiagnostics expected = ResidualCorrelations.of(withoutFirst(w)).diagnostics();
+            ResidualDiagnostics got = e.diagnostics().orElseThrow();
+            assertEquals(n - 1, got.assets());
+            assertEquals(expected.lmStatistic(), got.lmStatistic(), SAME_TO_ROUNDING * expected.lmStatistic(), "n = " + n);
+            assertEquals(expected.meanAbsCorrelation(), got.meanAbsCorrelation(), SAME_TO_ROUNDING, "n = " + n);
+        }
+    }
+
     @Test
     void plan_scansTheFirstEveryKthAndTheLast() {
         Schedule schedule = new Schedule(new int[] {10, 20, 30, 40, 50, 60, 70}, 80);

@@ -275,10 +275,11 @@ final class EvidenceSections {
             return Optional.empty();
         }
         return Optional.of("The mean absolute residual correlation and the most correlated pairs need every one of the "
-                + "n(n-1)/2 pairs of assets, so with more than " + (PairScanPlan.LARGE_FROM - 1) + " assets they were "
+                + "n(n-1)/2 pairs of assets, so with more than " + Formats.count(PairScanPlan.LARGE_FROM - 1)
+                + " assets they were "
                 + "computed only at the first rebalance, every " + PairScanPlan.EVERY + "th after it and the last ("
-                + String.join("; ", parts) + "). Their average and chart use those rebalances only; the tests and "
-                + "the sector means use every rebalance.");
+                + String.join("; ", parts) + "). Their average and chart use those rebalances only; the tests (and "
+                + "the sector means, where sectors are given) use every rebalance.");
     }
 
     private static String pValues(Optional<DifferenceTest> test, double family) {
