@@ -25,6 +25,9 @@ public final class AppliedDefaults {
         walkForward(keys(top, "walkforward"), out);
         strategies(top.get("strategies"), study.strategies(), out);
         evidence(keys(top, "evidence"), study.evidence(), out);
+        if (!keys(top, "report").containsKey("paper")) {
+            out.add("report.paper: " + study.report().paper().spelling());
+        }
         if (!top.containsKey("output")) {
             out.add("output: " + StudyDefaults.OUTPUT + " beside the study file");
         }

@@ -16,9 +16,10 @@ import java.util.Set;
  * @param strategies at least one, names unique
  * @param evidence settings of the significance tests
  * @param output output folder, resolved against the study file's folder
+ * @param report how the report is laid out
  */
 public record Study(Path file, String title, DataSpec data, WalkForwardSpec walkForward,
-                    List<StrategySpec> strategies, EvidenceSpec evidence, Path output) {
+                    List<StrategySpec> strategies, EvidenceSpec evidence, Path output, ReportSpec report) {
     public Study {
         Objects.requireNonNull(file, "file");
         Objects.requireNonNull(title, "title");
@@ -27,6 +28,7 @@ public record Study(Path file, String title, DataSpec data, WalkForwardSpec walk
         strategies = List.copyOf(strategies);
         Objects.requireNonNull(evidence, "evidence");
         Objects.requireNonNull(output, "output");
+        Objects.requireNonNull(report, "report");
         if (strategies.isEmpty()) {
             throw new IllegalArgumentException("strategies must list at least one strategy");
         }
@@ -39,5 +41,11 @@ public record Study(Path file, String title, DataSpec data, WalkForwardSpec walk
                 throw new IllegalArgumentException("strategy name 'market' is reserved for the benchmark");
             }
         }
+    }
+
+    /** A study whose report takes the default layout. */
+    public Study(Path file, String title, DataSpec data, WalkForwardSpec walkForward, List<StrategySpec> strategies,
+                 EvidenceSpec evidence, Path output) {
+        this(file, title, data, walkForward, strategies, evidence, output, ReportSpec.defaults());
     }
 }

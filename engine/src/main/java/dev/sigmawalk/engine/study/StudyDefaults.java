@@ -29,6 +29,8 @@ public final class StudyDefaults {
      * default: its {@code risk_aversion:} is required, because the weights depend on it entirely.
      */
     public static final double UNUSED_RISK_AVERSION = 1.0;
+    /** {@code report.paper:} when absent: ISO A4, the paper of most of the world. */
+    public static final Paper PAPER = Paper.A4;
 
     private StudyDefaults() {
     }
@@ -62,6 +64,7 @@ public final class StudyDefaults {
                 "evidence.resamples: " + evidence.resamples(),
                 "evidence.seed: " + evidence.seed(),
                 "evidence.block_length: chosen from the data",
+                "report.paper: " + PAPER.spelling(),
                 "output: " + OUTPUT + " beside the study file");
     }
 }

@@ -16,13 +16,15 @@ import java.util.Set;
  * rows) happen when the data are loaded.
  */
 public final class StudyReader {
-    private static final Set<String> ROOT = Set.of("title", "data", "walkforward", "strategies", "evidence", "output");
+    private static final Set<String> ROOT = Set.of("title", "data", "walkforward", "strategies", "evidence", "output",
+            "report");
     private static final Set<String> DATA = Set.of("assets", "layout", "values", "market", "riskfree", "periods_per_year",
             "sectors");
     private static final Set<String> WALK = Set.of("windows", "rebalance_every", "rebalance", "start", "end", "cost_bps");
     /** A cost of 10 000 bps takes the whole traded value; more is no longer a cost. */
     private static final double MAX_COST_BPS = 10_000;
     private static final Set<String> EVIDENCE = Set.of("resamples", "seed", "block_length");
+    private static final Set<String> REPORT = Set.of("paper");
 
     private StudyReader() {
     }
@@ -33,7 +35,7 @@ public final class StudyReader {
      */
     public static Study read(Path studyFile) {
         Path file = studyFile.toAbsolutePath().normalize();
-        return read(file, YamlTree.parse(file));
+        return readTree(file, YamlTree.parse(file));
     }
 
     /**
@@ -45,10 +47,22 @@ public final class StudyReader {
      */
     public static Study read(Path studyFile, String text) {
         Path file = studyFile.toAbsolutePath().normalize();
-        return read(file, YamlTree.parse(file, text));
+        return readTree(file, YamlTree.parse(file, text));
     }
 
-    private static Study read(Path file, YamlNode document) {
+    /**
+     * Reads a study given as a tree of nodes rather than as text, for a study built in code: the
+     * same keys, defaults and messages as a file. Messages name {@code studyFile} and the key path;
+     * a node's line and column are named when they are above 0. Relative paths resolve against
+     * the folder of {@code studyFile}, which need not exist.
+     *
+     * @throws InputException naming the key path and value of the first problem
+     */
+    public static Study read(Path studyFile, YamlNode document) {
+        return readTree(studyFile.toAbsolutePath().normalize(), document);
+    }
+
+    private static Study readTree(Path file, YamlNode document) {
         Section root = Section.of(file, "", document, ROOT);
         String title = root.has("title") ? root.text("title") : defaultTitle(file);
         DataSpec data = data(Section.of(file, "data", root.node("data"), DATA));
@@ -58,7 +72,10 @@ public final class StudyReader {
                 ? evidence(Section.of(file, "evidence", root.node("evidence"), EVIDENCE))
                 : EvidenceSpec.defaults();
         Path output = root.resolve(root.has("output") ? root.text("output") : StudyDefaults.OUTPUT);
-        return new Study(file, title, data, walk, strategies, evidence, output);
+        ReportSpec report = root.has("report")
+                ? report(Section.of(file, "report", root.node("report"), REPORT))
+                : ReportSpec.defaults();
+        return new Study(file, title, data, walk, strategies, evidence, output, report);
     }
 
     private static String defaultTitle(Path file) {
@@ -150,5 +167,9 @@ public final class StudyReader {
         long seed = s.has("seed") ? s.wholeNumber("seed") : d.seed();
         int block = s.has("block_length") ? s.integer("block_length", 0) : d.blockLength();
         return new EvidenceSpec(resamples, seed, block);
+    }
+
+    private static ReportSpec report(Section s) {
+        return new ReportSpec(s.has("paper") ? s.choice("paper", Paper.class) : StudyDefaults.PAPER);
     }
 }

@@ -65,6 +65,18 @@ class StudyReaderTest {
         assertEquals(Optional.of(new Bounds(0, 0.1)), s.strategies().get(0).bounds());
         assertEquals(EvidenceSpec.defaults(), s.evidence());
         assertEquals(dir.resolve(StudyDefaults.OUTPUT).toAbsolutePath().normalize(), s.output());
+        assertEquals(Paper.A4, s.report().paper(), "A4 unless the study says otherwise");
+    }
+
+    @Test
+    void reportPaper_isRead_andAnUnknownPaperListsTheChoices() throws IOException {
+        assertEquals(Paper.LETTER, read(BASE + "report:\n  paper: letter\n").report().paper());
+        assertEquals(Paper.A4, read(BASE + "report:\n  paper: a4\n").report().paper());
+        InputException e = fails(BASE + "report:\n  paper: legal\n");
+        assertEquals("demo.yaml line 19, column 10: report.paper: 'legal' is not one of the choices; expected a4 | letter",
+                e.getMessage());
+        InputException key = fails(BASE + "report:\n  papers: letter\n");
+        assertTrue(key.getMessage().contains("unknown key 'papers' in report; did you mean 'paper'?"), key.getMessage());
     }
 
     @Test

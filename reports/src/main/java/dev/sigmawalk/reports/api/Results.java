@@ -26,7 +26,10 @@ import tech.tablesaw.api.Table;
  * @param run every path's returns, rebalances and weights
  * @param summaries one per path in run order, then the market's
  * @param comparisons every strategy against its baseline, per window
- * @param warnings what the data reader warned about
+ * @param warnings every warning the command line prints for the same study, in the same words
+ *                 and order: the data's, the preview's (constant series, empty windows, bounds
+ *                 that cannot be met), then the results' (residual diagnostics left out, failed
+ *                 or noted rebalances)
  */
 public record Results(dev.sigmawalk.engine.study.Study study, RunResult<WindowEvidence> run, List<Summary> summaries,
                       List<Comparison> comparisons, List<String> warnings) {

@@ -3,6 +3,7 @@ package dev.sigmawalk.reports.api;
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.compare.Comparisons;
+import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.PairScanPlan;
 import dev.sigmawalk.engine.compare.ScannedPair;
 import dev.sigmawalk.engine.compare.WindowEvidence;
@@ -15,6 +16,7 @@ import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
 import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
+import dev.sigmawalk.engine.run.RebalanceRecord;
 import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.strategies.StrategyCatalog;
@@ -64,5 +66,41 @@ public final class Runs {
     public static List<Comparison> comparisons(dev.sigmawalk.engine.study.Study study, RunResult<?> run) {
         return Comparisons.of(run, Baselines.of(study.strategies()), study.walkForward().windows(),
                 new DifferenceTests(HacKernel.PARZEN, study.evidence()), ScannedPair.lowestVolatility(run));
+    }
+
+    /**
+     * The warnings known before the walk, the lines {@code check} prints too: those of the data
+     * (in the order found), then those of the preview (constant series, rebalances with no
+     * eligible asset, bounds that cannot be met).
+     */
+    public static List<String> warningsBeforeWalk(dev.sigmawalk.engine.study.Study study, StudyData data) {
+        List<String> out = new ArrayList<>(data.warnings());
+        out.addAll(RunPreview.of(study, data).warnings());
+        return out;
+    }
+
+    /**
+     * The warnings of the results: what the residual diagnostics left out, then one line per path
+     * whose allocation failed at some rebalance and one per path with rebalance notes.
+     */
+    public static List<String> warningsOfResults(RunResult<WindowEvidence> run) {
+        List<String> out = new ArrayList<>(EvidenceNotes.warnings(run.probes()));
+        for (PathResult p : run.paths()) {
+            List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
+            if (!failed.isEmpty()) {
+                RebalanceRecord first = failed.get(0);
+                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": no portfolio formed at "
+                        + failed.size() + " of " + p.rebalances().size() + " rebalances (first " + first.date() + ": "
+                        + first.failure().get() + "); at those rebalances the path kept its previous portfolio, or cash"
+                        + " before its first one");
+            }
+            long notes = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).count();
+            if (notes > 0) {
+                RebalanceRecord first = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).findFirst().get();
+                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": " + notes + " rebalances with notes"
+                        + " (first " + first.date() + ": " + String.join("; ", first.notes()) + ")");
+            }
+        }
+        return out;
     }
 }

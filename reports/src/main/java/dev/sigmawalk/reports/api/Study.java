@@ -1,13 +1,8 @@
 package dev.sigmawalk.reports.api;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.study.StudyReader;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -27,8 +22,10 @@ import java.util.Objects;
  * Table summary = results.summary();
  * }</pre>
  *
- * <p>A study built in code is checked by the same reader as a study file, so every key, default
- * and error message is the same as in the README's "A study file".
+ * <p>A study built in code is checked by the same reader as a study file, straight from the values
+ * given (no file is written), so every key, default and error message is the same as in the
+ * README's "A study file"; messages name {@link Builder#SOURCE_NAME} and the key path instead of
+ * a file, line and column.
  */
 public final class Study {
     private final dev.sigmawalk.engine.study.Study spec;
@@ -72,23 +69,29 @@ public final class Study {
         }
         StudyData data = StudyData.load(spec);
         var run = Runs.walk(spec, data, threads, ProgressListener.NONE);
-        return new Results(spec, run, Runs.summaries(run), Runs.comparisons(spec, run), data.warnings());
+        List<String> warnings = new ArrayList<>(Runs.warningsBeforeWalk(spec, data));
+        warnings.addAll(Runs.warningsOfResults(run));
+        return new Results(spec, run, Runs.summaries(run), Runs.comparisons(spec, run), warnings);
     }
 
     /**
      * Builds a study with the keys of a study file. Each section is a map of keys to values as
-     * they would be written in YAML (numbers, strings, lists); a {@link Path} value is written as
-     * its absolute path.
+     * they would be written in YAML (numbers, text, booleans, lists, maps); a {@link Path} value
+     * stands for its absolute path and a {@link java.time.LocalDate} for its ISO text.
      */
     public static final class Builder {
-        /** The name error messages give a study built in code (it is read from a short-lived file of that name). */
-        public static final String FILE_NAME = "study-from-code.yaml";
+        /**
+         * What error messages call a study built in code, in place of a file name. Relative paths
+         * resolve against the working folder, as if the study were a file of that name there.
+         */
+        public static final String SOURCE_NAME = "study built in code";
 
         private String title = "study";
         private final Map<String, Object> data = new LinkedHashMap<>();
         private final Map<String, Object> walkForward = new LinkedHashMap<>();
         private final List<Map<String, Object>> strategies = new ArrayList<>();
         private final Map<String, Object> evidence = new LinkedHashMap<>();
+        private final Map<String, Object> report = new LinkedHashMap<>();
 
         private Builder() {
         }
@@ -101,7 +104,7 @@ public final class Study {
 
         /** One key of {@code data:}, for example {@code data("assets", Path.of("assets.csv"))}. */
         public Builder data(String key, Object value) {
-            data.put(key, yaml(value));
+            data.put(key, checked("data." + key, value));
             return this;
         }
 
@@ -113,7 +116,7 @@ public final class Study {
 
         /** One key of {@code walkforward:}, for example {@code walkForward("cost_bps", 10)}. */
         public Builder walkForward(String key, Object value) {
-            walkForward.put(key, yaml(value));
+            walkForward.put(key, checked("walkforward." + key, value));
             return this;
         }
 
@@ -126,21 +129,29 @@ public final class Study {
         public Builder strategy(String name, Map<String, ?> settings) {
             Map<String, Object> s = new LinkedHashMap<>();
             s.put("name", Objects.requireNonNull(name, "name"));
-            settings.forEach((k, v) -> s.put(k, yaml(v)));
+            settings.forEach((k, v) -> s.put(k, checked("strategy " + name + ": " + k, v)));
             strategies.add(s);
             return this;
         }
 
         /** One key of {@code evidence:}, for example {@code evidence("resamples", 500)}. */
         public Builder evidence(String key, Object value) {
-            evidence.put(key, yaml(value));
+            evidence.put(key, checked("evidence." + key, value));
+            return this;
+        }
+
+        /** One key of {@code report:}, for example {@code report("paper", "letter")}. */
+        public Builder report(String key, Object value) {
+            report.put(key, checked("report." + key, value));
             return this;
         }
 
         /**
-         * Validates the study exactly as a study file is validated.
+         * Validates the study exactly as a study file is validated, with the same messages; they
+         * name {@link #SOURCE_NAME} and the key path.
          *
          * @throws dev.sigmawalk.engine.data.InputException when a key or value is not valid
+         * @throws IllegalArgumentException when a value is null or of a type a study file cannot hold
          */
         public Study build() {
             Map<String, Object> root = new LinkedHashMap<>();
@@ -151,37 +162,15 @@ public final class Study {
             if (!evidence.isEmpty()) {
                 root.put("evidence", evidence);
             }
-            Path folder = null;
-            try {
-                folder = Files.createTempDirectory("sigmawalk-study-");
-                Path file = folder.resolve(FILE_NAME);
-                new ObjectMapper(new YAMLFactory()).writeValue(file.toFile(), root);
-                return new Study(StudyReader.read(file));
-            } catch (IOException e) {
-                throw new UncheckedIOException("cannot stage the study for reading", e);
-            } finally {
-                deleteQuietly(folder);
+            if (!report.isEmpty()) {
+                root.put("report", report);
             }
+            return new Study(StudyReader.read(Path.of(SOURCE_NAME), StudyTree.node("", root)));
         }
 
-        private static Object yaml(Object value) {
-            Objects.requireNonNull(value, "value");
-            if (value instanceof Path p) {
-                return p.toAbsolutePath().normalize().toString();
-            }
+        private static Object checked(String key, Object value) {
+            Objects.requireNonNull(value, key);
             return value;
-        }
-
-        private static void deleteQuietly(Path folder) {
-            if (folder == null) {
-                return;
-            }
-            try {
-                Files.deleteIfExists(folder.resolve(FILE_NAME));
-                Files.deleteIfExists(folder);
-            } catch (IOException e) {
-                // A leftover empty temporary folder is harmless; the study was already read.
-            }
         }
     }
 }

@@ -8,6 +8,7 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.text.TextUtils;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.HorizontalAlignment;
@@ -31,6 +32,17 @@ final class ChartLook {
     static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 15);
     static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
     static final Font TICK = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
+
+    static {
+        /*
+         * The library draws rotated text (the vertical axis's label) through a text layout by
+         * default, a workaround for rotated-text bugs of early Java releases; an SVG or PDF canvas
+         * then receives glyph outlines instead of text. Plain drawString keeps the label as text
+         * that can be selected, searched and read aloud. The switch is the library's own and is
+         * set once, to the same value, before any chart of this program is drawn.
+         */
+        TextUtils.setUseDrawRotatedStringWorkaround(false);
+    }
 
     private ChartLook() {
     }

@@ -70,7 +70,7 @@ public final class LineCharts {
         DateAxis x = new DateAxis("Date", TimeZone.getTimeZone("UTC"), Locale.ROOT);
         x.setLowerMargin(0.01);
         x.setUpperMargin(0.01);
-        LogAxis y = new LogAxis(yLabel);
+        LogAxis y = new PlainLogAxis(yLabel);
         y.setBase(2);
         y.setNumberFormatOverride(plainAxis());
         y.setSmallestValue(1e-6);

@@ -16,6 +16,7 @@ import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.engine.timeline.Schedule;
+import dev.sigmawalk.reports.api.RunPreview;
 import dev.sigmawalk.reports.sweep.SweepCheck;
 import dev.sigmawalk.reports.sweep.SweepReader;
 import java.io.PrintWriter;

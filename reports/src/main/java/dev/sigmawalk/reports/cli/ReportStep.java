@@ -63,13 +63,13 @@ final class ReportStep {
     }
 
     /** Per window, every rebalance's factor diagnostics in one list. */
-    private static Map<Integer, List<FactorDiagnostics>> flatten(Map<Integer, List<List<FactorDiagnostics>>> byWindow) {
+    static Map<Integer, List<FactorDiagnostics>> flatten(Map<Integer, List<List<FactorDiagnostics>>> byWindow) {
         Map<Integer, List<FactorDiagnostics>> out = new LinkedHashMap<>();
         byWindow.forEach((w, rebalances) -> out.put(w, rebalances.stream().flatMap(List::stream).toList()));
         return out;
     }
 
-    private static List<WindowDiagnostics> diagnostics(RunResult<WindowEvidence> run, List<Integer> windows) {
+    static List<WindowDiagnostics> diagnostics(RunResult<WindowEvidence> run, List<Integer> windows) {
         List<WindowDiagnostics> out = new ArrayList<>();
         for (int w : windows) {
             List<DiagnosticsPoint> points = new ArrayList<>();

@@ -2,16 +2,13 @@ package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.compare.Baselines;
 import dev.sigmawalk.engine.compare.Comparison;
-import dev.sigmawalk.engine.compare.EvidenceNotes;
 import dev.sigmawalk.engine.compare.PairScanPlan;
 import dev.sigmawalk.engine.compare.WindowEvidence;
 import dev.sigmawalk.engine.compare.WindowEvidenceProbe;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
-import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.ProgressListener;
-import dev.sigmawalk.engine.run.RebalanceRecord;
 import dev.sigmawalk.engine.run.RunResult;
 import dev.sigmawalk.engine.run.WalkForward;
 import dev.sigmawalk.engine.study.Study;
@@ -22,6 +19,8 @@ import dev.sigmawalk.reports.files.FactorDiagnosticsFile;
 import dev.sigmawalk.reports.files.Manifest;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.ResultFiles;
+import dev.sigmawalk.reports.files.SectorCorrelationsFile;
+import dev.sigmawalk.reports.html.SectorGrids;
 import dev.sigmawalk.strategies.FactorDiagnosticsProbe;
 import dev.sigmawalk.strategies.StrategyCatalog;
 import dev.sigmawalk.strategies.risk.FactorDiagnostics;
@@ -99,8 +98,7 @@ public final class StudyRun {
     public static Written writeInto(Path dir, Study study, StudyData data, int threads, ProgressListener progress,
                                     Consumer<String> warn, Instant started, long begin) {
         List<StrategyDefinition> strategies = StrategyCatalog.build(study, data);
-        List<String> warnings = new ArrayList<>(data.warnings());
-        warnings.addAll(RunPreview.of(study, data).warnings());
+        List<String> warnings = new ArrayList<>(Runs.warningsBeforeWalk(study, data));
         warnings.forEach(warn);
         long loaded = System.nanoTime();
         RunResult<WindowFindings> probed = new WalkForward<>(data.panel(), data.schedule(), strategies,
@@ -125,11 +123,13 @@ public final class StudyRun {
                         study.walkForward().windows());
                 FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
                         study.walkForward().windows());
+                SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
+                        ReportStep.diagnostics(run, study.walkForward().windows()), ReportStep.flatten(factorDiagnostics)));
                 EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
             });
             summaries = Runs.summaries(run);
             comparisons = Runs.comparisons(study, run);
-            List<String> found = warnings(run);
+            List<String> found = Runs.warningsOfResults(run);
             found.forEach(warn);
             warnings.addAll(found);
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
@@ -156,32 +156,6 @@ public final class StudyRun {
         List<Path> out = new ArrayList<>();
         out.add(study.file());
         data.fingerprints().forEach(f -> out.add(f.path()));
-        return out;
-    }
-
-    /**
-     * The warnings of the results: what the residual diagnostics left out, then one line per path
-     * whose allocation failed at some rebalance. (Those of the data and of the preview, the same
-     * lines {@code check} prints, come before the walk.)
-     */
-    private static List<String> warnings(RunResult<WindowEvidence> run) {
-        List<String> out = new ArrayList<>(EvidenceNotes.warnings(run.probes()));
-        for (PathResult p : run.paths()) {
-            List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();
-            if (!failed.isEmpty()) {
-                RebalanceRecord first = failed.get(0);
-                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": no portfolio formed at "
-                        + failed.size() + " of " + p.rebalances().size() + " rebalances (first " + first.date() + ": "
-                        + first.failure().get() + "); at those rebalances the path kept its previous portfolio, or cash"
-                        + " before its first one");
-            }
-            long notes = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).count();
-            if (notes > 0) {
-                RebalanceRecord first = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).findFirst().get();
-                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": " + notes + " rebalances with notes"
-                        + " (first " + first.date() + ": " + String.join("; ", first.notes()) + ")");
-            }
-        }
         return out;
     }
 

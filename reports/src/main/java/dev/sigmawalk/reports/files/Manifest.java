@@ -128,6 +128,7 @@ public final class Manifest {
         ObjectNode ev = n.putObject("evidence");
         ev.put("resamples", s.evidence().resamples()).put("seed", s.evidence().seed())
                 .put("block_length", s.evidence().blockLength());
+        n.putObject("report").put("paper", s.report().paper().spelling());
         n.put("output", s.output().toString());
         return n;
     }

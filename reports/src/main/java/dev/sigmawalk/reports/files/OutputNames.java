@@ -9,7 +9,7 @@ import java.util.Set;
  */
 public final class OutputNames {
     private static final Set<String> FILES = Set.of("returns.csv", "rebalances.csv", "weights.csv", "summary.csv",
-            "diagnostics.csv", "factor_diagnostics.csv", "estimates.csv", "tests.csv", "manifest.json", "report.html",
+            "diagnostics.csv", "factor_diagnostics.csv", "sector_correlations.csv", "estimates.csv", "tests.csv", "manifest.json", "report.html",
             "report.pdf", OutputFolder.MARKER);
     private static final Set<String> FOLDERS = Set.of("charts");
 

@@ -1,24 +1,36 @@
 package dev.sigmawalk.reports.html;
 
+import dev.sigmawalk.engine.study.Paper;
 import java.util.List;
 
 /**
  * What the template shows, already formatted as text. Every string is plain text that the
  * template escapes, except {@link Figure#svg()}, which this program generated itself.
- * Sections that do not apply are empty lists, so the template leaves them out.
+ * Sections that do not apply are empty lists, so the template leaves them out. {@code paper} is
+ * the CSS page size keyword of the print style sheet ({@code a4} or {@code letter}).
  */
 public record ReportView(String title, String subtitle, List<Swatch> palette, List<LegendEntry> legend,
                          Headline headline, Setup setup,
                          Table table, Cost cost, Honesty honesty, Concentration concentration,
                          List<Shrinkage> shrinkage, Windows windows, List<WindowCharts> overTime,
-                         List<EvidenceBlock> evidence, List<Matrix> sectorMap, Record record,
-                         List<FactorLoopSection> factorLoop) {
+                         List<EvidenceBlock> evidence, List<SectorMaps> sectorMap, Record record,
+                         List<FactorLoopSection> factorLoop, String paper) {
+
+    /** A view printed on A4. */
+    public ReportView(String title, String subtitle, List<Swatch> palette, List<LegendEntry> legend,
+                      Headline headline, Setup setup, Table table, Cost cost, Honesty honesty,
+                      Concentration concentration, List<Shrinkage> shrinkage, Windows windows,
+                      List<WindowCharts> overTime, List<EvidenceBlock> evidence, List<SectorMaps> sectorMap,
+                      Record record, List<FactorLoopSection> factorLoop) {
+        this(title, subtitle, palette, legend, headline, setup, table, cost, honesty, concentration, shrinkage, windows,
+                overTime, evidence, sectorMap, record, factorLoop, Paper.A4.spelling());
+    }
 
     /** A view without the factor-model section. */
     public ReportView(String title, String subtitle, List<Swatch> palette, List<LegendEntry> legend,
                       Headline headline, Setup setup, Table table, Cost cost, Honesty honesty,
                       Concentration concentration, List<Shrinkage> shrinkage, Windows windows,
-                      List<WindowCharts> overTime, List<EvidenceBlock> evidence, List<Matrix> sectorMap,
+                      List<WindowCharts> overTime, List<EvidenceBlock> evidence, List<SectorMaps> sectorMap,
                       Record record) {
         this(title, subtitle, palette, legend, headline, setup, table, cost, honesty, concentration, shrinkage, windows,
                 overTime, evidence, sectorMap, record, List.of());
@@ -46,6 +58,20 @@ public record ReportView(String title, String subtitle, List<Swatch> palette, Li
      * @param headers one per window
      */
     public record Matrix(String id, String title, List<String> headers, List<MatrixRow> rows) {
+    }
+
+    /**
+     * The sector x sector maps of residual correlation, all on one colour scale.
+     *
+     * @param several whether a factor model's map stands beside the single index's
+     * @param maps the single index's map first
+     * @param key the colour scale the maps share
+     */
+    public record SectorMaps(boolean several, List<Matrix> maps, List<ScaleStep> key) {
+    }
+
+    /** One step of a colour key: a value and its shade. */
+    public record ScaleStep(String label, String colour) {
     }
 
     /** One strategy's row of a heat map; the benchmark's row is unshaded. */

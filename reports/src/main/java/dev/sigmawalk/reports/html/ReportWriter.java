@@ -107,7 +107,7 @@ public final class ReportWriter {
                 legend(data, styles), headline, StudySetup.of(data), HeadlineTable.of(data, styles), cost, honesty,
                 concentration, shrinkage, windows, overTime(data, charts, focus),
                 new EvidenceSections(data, maker).all(), SectorMap.of(data).stream().toList(), RunFacts.of(data),
-                new FactorLoop(data, styles).section().stream().toList());
+                new FactorLoop(data, styles).section().stream().toList(), data.study().report().paper().spelling());
     }
 
     /**

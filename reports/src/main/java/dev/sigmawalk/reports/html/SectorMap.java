@@ -1,22 +1,17 @@
 package dev.sigmawalk.reports.html;
 
-import dev.sigmawalk.engine.evidence.SectorCoMovement;
-import dev.sigmawalk.engine.evidence.SectorCorrelation;
-import dev.sigmawalk.engine.evidence.SectorPairMean;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.Optional;
-import java.util.TreeMap;
-import java.util.TreeSet;
 
 /**
- * The sector x sector map of single-index residual correlation for the longest window: each cell
- * the mean correlation of the residuals of one sector's assets with another's (the diagonal:
- * within the sector), averaged over every rebalance where both sectors had assets. A sector
- * factor the single index misses shows as a warm diagonal cell; warm cells off the diagonal show
- * sectors that move together. Cells are shaded warm for positive and cool for negative means.
+ * The sector x sector maps of residual correlation for the longest window: the single index's
+ * first, then one per factor model whose residuals were grouped by sector, all of the same
+ * sectors and on one colour scale, so that a sector factor the single index misses shows as a
+ * warm diagonal cell that fades on the map of a model that takes it up. Warm cells off the
+ * diagonal show sectors that move together; cells are shaded warm for positive and cool for
+ * negative means.
  */
 final class SectorMap {
     private static final int[] PAPER = {0xF7, 0xF8, 0xF9};
@@ -24,71 +19,73 @@ final class SectorMap {
     private static final int[] WARM = {0xE0, 0xA4, 0x58};
     private static final int[] COOL = {0x8F, 0xB3, 0xD9};
     /** The shade reaches its darkest at this absolute mean correlation or above. */
-    private static final double FULL_SHADE = 0.3;
+    static final double FULL_SHADE = 0.3;
+    /** The values the colour key shows. */
+    private static final double[] KEY = {-FULL_SHADE, -FULL_SHADE / 2, 0, FULL_SHADE / 2, FULL_SHADE};
 
     private SectorMap() {
     }
 
-    /** The map of the longest window with sector information, or empty when sectors were not given. */
-    static Optional<ReportView.Matrix> of(ReportData data) {
-        Optional<WindowDiagnostics> longest = data.evidence().diagnostics().stream()
-                .filter(w -> w.points().stream().anyMatch(p -> p.sectors().isPresent()))
-                .max((a, b) -> Integer.compare(a.window(), b.window()));
-        if (longest.isEmpty()) {
+    /** The maps of the longest window with a single-index map, or empty when sectors were not given. */
+    static Optional<ReportView.SectorMaps> of(ReportData data) {
+        List<SectorGrid> shown = SectorGrids.shown(SectorGrids.of(data.evidence().diagnostics(),
+                data.evidence().factorDiagnostics()));
+        if (shown.isEmpty()) {
             return Optional.empty();
         }
-        Map<String, Mean> cells = new TreeMap<>();
-        TreeSet<String> sectors = new TreeSet<>();
-        for (DiagnosticsPoint p : longest.get().points()) {
-            if (p.sectors().isEmpty()) {
-                continue;
-            }
-            SectorCoMovement s = p.sectors().get();
-            for (SectorCorrelation c : s.withinSectors()) {
-                sectors.add(c.sector());
-                add(cells, key(c.sector(), c.sector()), c.meanCorrelation());
-            }
-            for (SectorPairMean c : s.betweenSectors()) {
-                sectors.add(c.first());
-                sectors.add(c.second());
-                add(cells, key(c.first(), c.second()), c.meanCorrelation());
-            }
+        List<String> names = shown.get(0).sectors();
+        List<ReportView.Matrix> maps = new ArrayList<>();
+        for (SectorGrid g : shown) {
+            maps.add(matrix(g, names));
         }
-        List<String> names = new ArrayList<>(sectors);
+        List<ReportView.ScaleStep> key = new ArrayList<>();
+        for (double v : KEY) {
+            key.add(new ReportView.ScaleStep((v > 0 ? "+" : "") + Formats.ratio(v) + (Math.abs(v) == FULL_SHADE
+                    ? (v > 0 ? " or more" : " or less") : ""), shade(v)));
+        }
+        return Optional.of(new ReportView.SectorMaps(maps.size() > 1, maps, key));
+    }
+
+    /** One map on the sectors of the single index's map (a factor model sees the same assets' sectors). */
+    private static ReportView.Matrix matrix(SectorGrid g, List<String> names) {
         List<ReportView.MatrixRow> rows = new ArrayList<>();
         for (String a : names) {
             List<ReportView.MatrixCell> row = new ArrayList<>();
             for (String b : names) {
-                Mean sum = cells.get(a.compareTo(b) <= 0 ? key(a, b) : key(b, a));
-                if (sum == null) {
+                Optional<SectorGrid.Cell> cell = g.cell(a, b);
+                if (cell.isEmpty()) {
                     row.add(new ReportView.MatrixCell(Formats.NOT_APPLICABLE, "", "", a.equals(b)
                             ? a + " never had two assets in one window" : a + " and " + b + " never shared a window"));
                 } else {
-                    double mean = sum.total / sum.count;
+                    double mean = cell.get().mean();
                     row.add(new ReportView.MatrixCell(Formats.ratio(mean), "", shade(mean), (a.equals(b) ? "within " + a
-                            : a + " with " + b) + ": mean residual correlation " + Formats.ratio(mean)));
+                            : a + " with " + b) + ": mean residual correlation " + Formats.ratio(mean) + " ("
+                            + residualsOf(g.model()) + ")"));
                 }
             }
             rows.add(new ReportView.MatrixRow(a, "", false, row));
         }
-        return Optional.of(new ReportView.Matrix("sector-map", "Mean residual correlation after the market, by sector ("
-                + longest.get().window() + "-period window, averaged over its rebalances)", names, rows));
+        return new ReportView.Matrix(id(g.model()), "Mean residual correlation " + after(g.model()) + ", by sector ("
+                + g.window() + "-period window, averaged over its rebalances)", names, rows);
     }
 
-    private static String key(String a, String b) {
-        return a + "\u0000" + b;
+    private static String id(String model) {
+        return model.equals(SectorGrid.SINGLE_INDEX) ? "sector-map"
+                : "sector-map-" + model.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-");
     }
 
-    /** A running mean of one cell over the rebalances. */
-    private static final class Mean {
-        private double total;
-        private int count;
+    private static String after(String model) {
+        if (model.equals(SectorGrid.SINGLE_INDEX)) {
+            return "after the market (single index)";
+        }
+        if (model.equals("multi-index:sectors")) {
+            return "after the market and the sector indices (" + model + ")";
+        }
+        return "after the factors of " + model;
     }
 
-    private static void add(Map<String, Mean> cells, String key, double value) {
-        Mean m = cells.computeIfAbsent(key, k -> new Mean());
-        m.total += value;
-        m.count++;
+    private static String residualsOf(String model) {
+        return model.equals(SectorGrid.SINGLE_INDEX) ? "single-index residuals" : model + " residuals";
     }
 
     /** Warm for positive, cool for negative, paper at 0; as CSS hex. */

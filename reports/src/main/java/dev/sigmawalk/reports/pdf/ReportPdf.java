@@ -21,8 +21,9 @@ import org.jsoup.nodes.Document;
 import org.jsoup.nodes.Element;
 
 /**
- * Writes {@code report.pdf} from {@code report.html}: the same content, laid out for A4 paper by
- * the report's own print style sheet, with the charts drawn as vector graphics, every folded
+ * Writes {@code report.pdf} from {@code report.html}: the same content, laid out by the report's
+ * own print style sheet on the paper its {@code @page} rule names (the study's
+ * {@code report.paper}, A4 or Letter), with the charts drawn as vector graphics, every folded
  * section unfolded and every page numbered. The fonts (DejaVu Sans, under the Bitstream Vera
  * licence shipped beside them) are packed in the jar, so the PDF looks the same on every machine
  * and shows the Greek letters and marks the report uses.
@@ -31,7 +32,7 @@ public final class ReportPdf {
     private static final String FONT_FAMILY = "DejaVu Sans";
     private static final String REGULAR = "DejaVuSans.ttf";
     private static final String BOLD = "DejaVuSans-Bold.ttf";
-    /** Width of a chart on the page: two charts side by side fill the A4 text width of the style sheet. */
+    /** Width of a chart on the page: two charts side by side fill the text width on A4 and on Letter. */
     private static final double CHART_MM = 88;
     private static final Pattern VIEW_BOX = Pattern.compile("\\s*[-0-9.]+\\s+[-0-9.]+\\s+([0-9.]+)\\s+([0-9.]+)\\s*");
 
@@ -42,8 +43,7 @@ public final class ReportPdf {
     private static final String PDF_STYLE = "body { font-family: '" + FONT_FAMILY + "', sans-serif; }\n"
             + "details, summary { display: block; }\n"
             + ".matrices, .figures { display: block; }\n"
-            + ".figures figure { display: inline-block; width: 49%; vertical-align: top; margin: 0 0 3mm; }\n"
-            + "@page { size: A4 portrait; }\n";
+            + ".figures figure { display: inline-block; width: 49%; vertical-align: top; margin: 0 0 3mm; }\n";
 
     private ReportPdf() {
     }

@@ -78,6 +78,26 @@ class PrintedReportTest {
         }
     }
 
+    /**
+     * The charts' words are text in the PDF, not outlines: every {@code <text>} of every chart's
+     * SVG (titles, axis labels including the rotated vertical ones, tick labels, legends) is found
+     * by the text extraction. Spaces are ignored on both sides, since a rotated label comes back
+     * a few letters to a line.
+     */
+    @Test
+    void pdf_holdsEveryChartWord_asText() {
+        String flat = text.replace(" ", "");
+        java.util.Set<String> words = new java.util.LinkedHashSet<>();
+        for (Element t : html.select("figure svg text")) {
+            words.add(t.text().replace(" ", ""));
+        }
+        assertTrue(words.contains("Valueof1invested(logscale)"), "the growth chart's vertical axis label: " + words);
+        assertTrue(words.contains("Date"), "the horizontal axis label");
+        for (String w : words) {
+            assertTrue(flat.contains(w), "chart text in the PDF: " + w);
+        }
+    }
+
     @Test
     void pdf_holdsEverySectionHeadingAndAnswer() {
         for (Element h2 : html.select("section > h2")) {
@@ -168,6 +188,6 @@ class PrintedReportTest {
         assertTrue(style.contains("figure { margin: 1rem 0 1.2rem; break-inside: avoid;"), "no chart is split");
         assertTrue(style.contains("@bottom-right { content: \"Page \" counter(page) \" of \" counter(pages);"),
                 "pages are numbered");
-        assertTrue(style.contains("@page {\n  size: auto;"), "A4 or Letter, as the printer is set");
+        assertTrue(style.contains("@page {\n  size: a4 portrait;"), "the study's paper, A4 by default, as in the PDF");
     }
 }

@@ -16,7 +16,9 @@ import dev.sigmawalk.engine.study.DataSpec;
 import dev.sigmawalk.engine.study.EvidenceSpec;
 import dev.sigmawalk.engine.study.ExpectedReturnKind;
 import dev.sigmawalk.engine.study.Objective;
+import dev.sigmawalk.engine.study.Paper;
 import dev.sigmawalk.engine.study.RebalanceRule;
+import dev.sigmawalk.engine.study.ReportSpec;
 import dev.sigmawalk.engine.study.RiskKind;
 import dev.sigmawalk.engine.study.SeriesSource;
 import dev.sigmawalk.engine.study.ShrinkageTarget;
@@ -61,6 +63,15 @@ final class ReportFixture {
     /** The default run: strategies "diag", "pulled" and "equal". */
     static ReportData data() {
         return data("Invented universe, monthly", "diag", "pulled", "equal");
+    }
+
+    /** The default run, its report laid out for {@code paper}. */
+    static ReportData data(Paper paper) {
+        ReportData d = data();
+        Study s = d.study();
+        Study onPaper = new Study(s.file(), s.title(), s.data(), s.walkForward(), s.strategies(), s.evidence(), s.output(),
+                new ReportSpec(paper));
+        return new ReportData(onPaper, d.run(), d.summaries(), d.record(), d.evidence());
     }
 
     /** A run without any shrinkage strategy. */

@@ -1,6 +1,7 @@
 package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.evidence.BiasAdjustedLm;
+import dev.sigmawalk.engine.evidence.SectorCoMovement;
 
 import java.time.LocalDate;
 import java.util.Collections;
@@ -23,17 +24,17 @@ import java.util.TreeMap;
  *              moments; empty when the window is too short for the regressors (L - k ≤ 4)
  * @param cdStatistic Pesaran (2004) CD = √(2L/(n(n-1))) Σ ρ_ij
  * @param cdPValue its two-sided normal p-value
- * @param withinSector mean residual correlation over the pairs inside each sector with at least
- *                     two of those assets, by sector name (empty without sectors)
+ * @param sectors mean residual correlation over the pairs of those assets inside each sector with
+ *                at least two of them and across each pair of sectors (empty without sectors)
  */
 public record FactorDiagnostics(String model, LocalDate date, int window, int assets, double meanAbsCorrelation,
                                 Optional<BiasAdjustedLm> lmAdj, double cdStatistic, double cdPValue,
-                                Map<String, Double> withinSector) {
+                                Optional<SectorCoMovement> sectors) {
     public FactorDiagnostics {
         Objects.requireNonNull(model, "model");
         Objects.requireNonNull(date, "date");
         Objects.requireNonNull(lmAdj, "lmAdj");
-        withinSector = Collections.unmodifiableMap(new TreeMap<>(withinSector));
+        Objects.requireNonNull(sectors, "sectors");
         if (!(assets >= 2)) {
             throw new IllegalArgumentException("assets (" + assets + ") must be >= 2");
         }
@@ -43,5 +44,12 @@ public record FactorDiagnostics(String model, LocalDate date, int window, int as
         if (!Double.isFinite(cdStatistic) || !(cdPValue >= 0 && cdPValue <= 1)) {
             throw new IllegalArgumentException("CD (" + cdStatistic + ", p " + cdPValue + ") must be finite, p in [0, 1]");
         }
+    }
+
+    /** The within-sector means of {@link #sectors()} by sector name; empty without sectors. */
+    public Map<String, Double> withinSector() {
+        Map<String, Double> out = new TreeMap<>();
+        sectors.ifPresent(s -> s.withinSectors().forEach(c -> out.put(c.sector(), c.meanCorrelation())));
+        return Collections.unmodifiableMap(out);
     }
 }

@@ -3,16 +3,22 @@ package dev.sigmawalk.strategies.risk;
 import dev.sigmawalk.engine.evidence.BiasAdjustedLm;
 import dev.sigmawalk.engine.evidence.ExactPairMoments;
 import dev.sigmawalk.engine.evidence.RegressorSpace;
+import dev.sigmawalk.engine.evidence.SectorCoMovement;
+import dev.sigmawalk.engine.evidence.SectorCorrelation;
+import dev.sigmawalk.engine.evidence.SectorPairMean;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import dev.sigmawalk.engine.model.WindowMoments;
 import org.apache.commons.math3.special.Erf;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.TreeMap;
 
 /**
  * The residual diagnostics of a factor model (Method §11 last item): the residual correlations
@@ -170,25 +176,62 @@ public final class FactorResiduals {
         }
         double meanAbs = Math.min(1.0, sumAbs / (n * (n - 1) / 2.0));
         return Optional.of(new FactorDiagnostics(name, window.date(), len, n, meanAbs, lm, cd, cdP,
-                withinSector(window, sectors, kept, rho)));
+                sectors(window, sectors, kept, rho)));
     }
 
-    private static Map<String, Double> withinSector(EstimationWindow window, Map<String, String> sectors,
-                                                    List<Integer> kept, double[] rho) {
+    /**
+     * The residual correlations of the kept assets grouped by sector (Method §8's sector sums on
+     * the factor model's residuals): the mean over the pairs inside each sector with two or more
+     * kept assets, over the pairs across each two sectors, and over all pairs across sectors.
+     * Assets without a sector take no part; empty when no kept asset has one.
+     */
+    private static Optional<SectorCoMovement> sectors(EstimationWindow window, Map<String, String> sectors,
+                                                      List<Integer> kept, double[] rho) {
         int n = kept.size();
-        Map<String, double[]> sums = new HashMap<>();
+        TreeMap<String, Integer> members = new TreeMap<>();
+        String[] sectorOf = new String[n];
         for (int a = 0; a < n; a++) {
-            String sa = sectors.get(window.assets().get(kept.get(a)));
-            for (int b = a + 1; b < n && sa != null; b++) {
-                if (sa.equals(sectors.get(window.assets().get(kept.get(b))))) {
-                    double[] s = sums.computeIfAbsent(sa, x -> new double[2]);
-                    s[0] += rho[a * n + b];
-                    s[1]++;
+            sectorOf[a] = sectors.get(window.assets().get(kept.get(a)));
+            if (sectorOf[a] != null) {
+                members.merge(sectorOf[a], 1, Integer::sum);
+            }
+        }
+        if (members.isEmpty()) {
+            return Optional.empty();
+        }
+        Map<List<String>, double[]> sums = new TreeMap<>(Comparator.comparing((List<String> k) -> k.get(0))
+                .thenComparing(k -> k.get(1)));
+        double across = 0;
+        int acrossPairs = 0;
+        for (int a = 0; a < n; a++) {
+            for (int b = a + 1; b < n && sectorOf[a] != null; b++) {
+                if (sectorOf[b] == null) {
+                    continue;
+                }
+                String first = sectorOf[a].compareTo(sectorOf[b]) <= 0 ? sectorOf[a] : sectorOf[b];
+                String second = first.equals(sectorOf[a]) ? sectorOf[b] : sectorOf[a];
+                double[] s = sums.computeIfAbsent(List.of(first, second), x -> new double[2]);
+                s[0] += rho[a * n + b];
+                s[1]++;
+                if (!first.equals(second)) {
+                    across += rho[a * n + b];
+                    acrossPairs++;
                 }
             }
         }
-        Map<String, Double> out = new HashMap<>();
-        sums.forEach((sector, s) -> out.put(sector, Math.max(-1.0, Math.min(1.0, s[0] / s[1]))));
-        return out;
+        List<SectorCorrelation> within = new ArrayList<>();
+        List<SectorPairMean> between = new ArrayList<>();
+        sums.forEach((pair, s) -> {
+            double mean = Math.max(-1.0, Math.min(1.0, s[0] / s[1]));
+            if (pair.get(0).equals(pair.get(1))) {
+                int m = members.get(pair.get(0));
+                within.add(new SectorCorrelation(pair.get(0), m, m * (m - 1) / 2, mean));
+            } else {
+                between.add(new SectorPairMean(pair.get(0), pair.get(1), (int) s[1], mean));
+            }
+        });
+        OptionalDouble acrossMean = acrossPairs == 0 ? OptionalDouble.empty()
+                : OptionalDouble.of(Math.max(-1.0, Math.min(1.0, across / acrossPairs)));
+        return Optional.of(new SectorCoMovement(within, acrossPairs, acrossMean, between));
     }
 }

@@ -1,6 +1,7 @@
 package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.data.FactorTable;
+import dev.sigmawalk.engine.evidence.SectorPairMean;
 import dev.sigmawalk.engine.model.EstimationWindow;
 import org.junit.jupiter.api.Test;
 
@@ -44,7 +45,8 @@ class FactorResidualsTest {
      * Sector multi-index and two principal components against factor_diagnostics_reference.csv,
      * written by this folder's factor_diagnostics_check.py (numpy 2.4: explicit residuals by
      * {@code numpy.linalg.lstsq} and {@code numpy.linalg.eigh}, {@code numpy.corrcoef}, and the
-     * exact pair moments from the explicit L×L residual makers). With four assets per sector and
+     * exact pair moments from the explicit L×L residual makers), including the means of the
+     * correlations within each sector and across each two sectors. With four assets per sector and
      * the asset inside its own sector mean, within-sector correlations sit near -1/3.
      */
     @Test
@@ -71,6 +73,18 @@ class FactorResidualsTest {
         Close.relative(Double.parseDouble(expected[4]), d.withinSector().get("first"), REFERENCE_TOL, d.model() + " first");
         Close.relative(Double.parseDouble(expected[5]), d.withinSector().get("second"), REFERENCE_TOL, d.model() + " second");
         Close.relative(Double.parseDouble(expected[6]), d.withinSector().get("third"), REFERENCE_TOL, d.model() + " third");
+        String[][] pairs = {{"first", "second"}, {"first", "third"}, {"second", "third"}};
+        for (int k = 0; k < pairs.length; k++) {
+            String a = pairs[k][0];
+            String b = pairs[k][1];
+            SectorPairMean cell = d.sectors().orElseThrow().betweenSectors().stream()
+                    .filter(c -> c.first().equals(a) && c.second().equals(b)).findFirst().orElseThrow();
+            assertEquals(16, cell.pairs(), d.model() + " " + a + " x " + b + ": four assets times four");
+            // Absolute: the sector model's cross-sector means are near 0, where relative error means nothing.
+            assertEquals(Double.parseDouble(expected[7 + k]), cell.meanCorrelation(), REFERENCE_TOL,
+                    d.model() + " " + a + " x " + b);
+        }
+        assertEquals(48, d.sectors().orElseThrow().acrossPairs(), d.model() + " pairs across sectors");
     }
 
     private static String text(String file) throws IOException {

@@ -43,7 +43,9 @@ def diagnostics(e, makers, ks):
         total += (d * rho[i, j] ** 2 - mu) / v
     lm = math.sqrt(2 / (n * (n - 1))) * total
     within = [np.mean([rho[i, j] for i, j in zip(*iu) if sector[i] == sector[j] == s]) for s in range(3)]
-    return [np.abs(r).mean(), lm, cd] + within
+    between = [np.mean([rho[i, j] for i, j in zip(*iu) if {sector[i], sector[j]} == {a, b}])
+               for a, b in ((0, 1), (0, 2), (1, 2))]
+    return [np.abs(r).mean(), lm, cd] + within + between
 
 
 rows = []
@@ -67,6 +69,7 @@ maker = np.eye(L) - z @ np.linalg.pinv(z)
 rows.append(["principal-components:2"] + diagnostics(e, [maker] * n, [k + 1] * n))
 
 with open("factor_diagnostics_reference.csv", "w") as fh:
-    fh.write("model,mean_abs_residual_corr,lm_adj_stat,cd_stat,within_first,within_second,within_third\n")
+    fh.write("model,mean_abs_residual_corr,lm_adj_stat,cd_stat,within_first,within_second,within_third,"
+             "between_first_second,between_first_third,between_second_third\n")
     for r in rows:
         fh.write(",".join([r[0]] + [repr(float(v)) for v in r[1:]]) + "\n")

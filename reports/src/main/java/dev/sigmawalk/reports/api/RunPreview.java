@@ -1,4 +1,4 @@
-package dev.sigmawalk.reports.cli;
+package dev.sigmawalk.reports.api;
 
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.run.ConstantSpan;
@@ -17,14 +17,14 @@ import java.util.Optional;
  * eligible assets cannot meet (Method §5: n·lower ≤ 1 ≤ n·upper). {@code check} prints it and
  * {@code run} puts the same warnings in its warning list, so the two agree.
  */
-final class RunPreview {
+public final class RunPreview {
     private final List<String> feasibility = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
 
     private RunPreview() {
     }
 
-    static RunPreview of(Study study, StudyData data) {
+    public static RunPreview of(Study study, StudyData data) {
         List<Integer> windows = study.walkForward().windows();
         WindowScan scan = WindowScan.of(data.panel(), data.schedule(), windows);
         RunPreview p = new RunPreview();
@@ -43,12 +43,12 @@ final class RunPreview {
     }
 
     /** One line per strategy with bounds and window: met everywhere, or where first not. */
-    List<String> feasibility() {
+    public List<String> feasibility() {
         return List.copyOf(feasibility);
     }
 
     /** The warnings, identical in check and run. */
-    List<String> warnings() {
+    public List<String> warnings() {
         return List.copyOf(warnings);
     }
 
