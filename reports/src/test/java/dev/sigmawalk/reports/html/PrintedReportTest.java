@@ -4,20 +4,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sigmawalk.engine.study.StrategySpec;
+import dev.sigmawalk.reports.pdf.PdfStrokes;
 import dev.sigmawalk.reports.pdf.ReportPdf;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.apache.pdfbox.Loader;
-import org.apache.pdfbox.contentstream.PDContentStream;
-import org.apache.pdfbox.contentstream.operator.Operator;
-import org.apache.pdfbox.cos.COSName;
-import org.apache.pdfbox.pdfparser.PDFStreamParser;
 import org.apache.pdfbox.pdmodel.PDDocument;
-import org.apache.pdfbox.pdmodel.PDPage;
-import org.apache.pdfbox.pdmodel.PDResources;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
-import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.jsoup.Jsoup;
 import org.jsoup.nodes.Document;
@@ -62,9 +56,7 @@ class PrintedReportTest {
             pages = doc.getNumberOfPages();
             firstPage = doc.getPage(0).getMediaBox();
             text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
-            for (PDPage page : doc.getPages()) {
-                strokes += strokes(page, page.getResources(), 0);
-            }
+            strokes = PdfStrokes.of(doc);
         }
     }
 
@@ -149,24 +141,6 @@ class PrintedReportTest {
         }
         assertTrue(strokes >= lines, "stroked paths " + strokes + " for " + lines
                 + " SVG paths in " + html.select("figure").size() + " charts");
-    }
-
-    /** Stroke operators in a content stream and in the form XObjects it draws (the charts are forms). */
-    private static int strokes(PDContentStream content, PDResources resources, int depth) throws java.io.IOException {
-        int n = 0;
-        for (Object token : new PDFStreamParser(content).parse()) {
-            if (token instanceof Operator op && op.getName().equals("S")) {
-                n++;
-            }
-        }
-        if (resources != null && depth < 4) {
-            for (COSName name : resources.getXObjectNames()) {
-                if (resources.getXObject(name) instanceof PDFormXObject form) {
-                    n += strokes(form, form.getResources(), depth + 1);
-                }
-            }
-        }
-        return n;
     }
 
     private static long occurrences(String haystack, String needle) {

@@ -11,17 +11,10 @@ import dev.sigmawalk.reports.charts.LineOptions;
 import dev.sigmawalk.reports.charts.ModelFamily;
 import dev.sigmawalk.reports.charts.RenderedChart;
 import dev.sigmawalk.reports.charts.SeriesStyle;
-import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 import org.apache.pdfbox.Loader;
-import org.apache.pdfbox.contentstream.PDContentStream;
-import org.apache.pdfbox.contentstream.operator.Operator;
-import org.apache.pdfbox.cos.COSName;
-import org.apache.pdfbox.pdfparser.PDFStreamParser;
 import org.apache.pdfbox.pdmodel.PDDocument;
-import org.apache.pdfbox.pdmodel.PDResources;
-import org.apache.pdfbox.pdmodel.graphics.form.PDFormXObject;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.jfree.chart.JFreeChart;
 import org.junit.jupiter.api.Test;
@@ -57,7 +50,7 @@ class ChartPainterTest {
             String text = new PDFTextStripper().getText(pdf).replaceAll("\\s+", " ");
             assertTrue(text.contains(TITLE), "chart title printed as text: " + text);
             assertTrue(text.contains("Window (periods)"), "axis label printed as text: " + text);
-            assertTrue(strokes(pdf) > 3, "the line and the axes are stroked: " + strokes(pdf));
+            assertTrue(PdfStrokes.of(pdf) > 3, "the line and the axes are stroked: " + PdfStrokes.of(pdf));
         }
     }
 
@@ -67,34 +60,8 @@ class ChartPainterTest {
                 + " fill='none'/></svg>";
         ReportPdf.write(page(svg), dir, List.of(), dir.resolve("b.pdf"));
         try (PDDocument pdf = Loader.loadPDF(dir.resolve("b.pdf").toFile())) {
-            assertTrue(strokes(pdf) >= 1, "the SVG's one path is stroked");
+            assertTrue(PdfStrokes.of(pdf) >= 1, "the SVG's one path is stroked");
             assertFalse(new PDFTextStripper().getText(pdf).contains(TITLE), "no chart was drawn");
         }
-    }
-
-    private static int strokes(PDDocument pdf) throws IOException {
-        int n = 0;
-        for (var page : pdf.getPages()) {
-            n += strokes(page, page.getResources(), 0);
-        }
-        return n;
-    }
-
-    /** Stroke operators in a content stream and in the form XObjects it draws (a chart is a form). */
-    private static int strokes(PDContentStream content, PDResources resources, int depth) throws IOException {
-        int n = 0;
-        for (Object token : new PDFStreamParser(content).parse()) {
-            if (token instanceof Operator op && op.getName().equals("S")) {
-                n++;
-            }
-        }
-        if (resources != null && depth < 4) {
-            for (COSName name : resources.getXObjectNames()) {
-                if (resources.getXObject(name) instanceof PDFormXObject form) {
-                    n += strokes(form, form.getResources(), depth + 1);
-                }
-            }
-        }
-        return n;
     }
 }

@@ -161,6 +161,53 @@ class SweepCommandTest {
         }
     }
 
+    /**
+     * Points over other years: the sample's assets file whole (2012-2019 out of sample), cut to
+     * rows before 2014 and to rows from 2015. The lowest volatility is the late universe's
+     * (2017-2019); the whole file shares those 36 dates and joins the family, the early one
+     * shares none and is left out, with its reason in {@code sweep.csv}, on the page and in the
+     * manifest, while Holm's value still covers it.
+     */
+    @Test
+    void pointOverOtherYears_isLeftOutOfTheFamily_withItsReason() throws IOException {
+        List<String> all = Files.readAllLines(data.resolve("assets-monthly.csv"), StandardCharsets.UTF_8);
+        Files.write(data.resolve("assets-early.csv"), all.stream().filter(l -> l.startsWith("date")
+                || l.compareTo("2014-01-01") < 0).toList(), StandardCharsets.UTF_8);
+        Files.write(data.resolve("assets-late.csv"), all.stream().filter(l -> l.startsWith("date")
+                || l.compareTo("2015-01-01") >= 0).toList(), StandardCharsets.UTF_8);
+        String base = Files.readString(data.resolve("base.yaml"), StandardCharsets.UTF_8)
+                .replace("windows: [24, 36]", "windows: [24]").replace("start: 2016-01-01", "start: 2012-01-01");
+        Files.writeString(data.resolve("base-years.yaml"), base, StandardCharsets.UTF_8);
+        Path sweep = data.resolve("years.yaml");
+        Files.writeString(sweep, "title: Universes over other years\nstudy: base-years.yaml\nvary:\n"
+                + "  data.assets: [assets-monthly.csv, assets-early.csv, assets-late.csv]\n", StandardCharsets.UTF_8);
+        Path target = data.resolve("years-out");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet");
+        assertEquals(0, r.code(), r.err());
+
+        List<String> lines = SweepFixture.lines(target.resolve("sweep.csv"));
+        String[] head = lines.get(0).split(",");
+        String early = lines.stream().filter(l -> l.startsWith("002,assets-early.csv,index-model,")).findFirst().orElseThrow();
+        String[] f = early.split(",", indexOf(head, "family_note") + 1);
+        assertEquals("", f[indexOf(head, "family_pvalue")], "no family p-value for the early universe");
+        assertFalse(f[indexOf(head, "holm_pvalue")].isEmpty(), "Holm still covers it");
+        assertTrue(f[indexOf(head, "family_note")].contains("left out of the grid family: its out-of-sample period (2012-02-29"
+                + " to 2013-12-31) does not overlap the best comparison's (2017-01-31 to 2019-12-31)"), early);
+        for (String member : List.of("001,assets-monthly.csv,index-model,", "003,assets-late.csv,index-model,")) {
+            String[] m = lines.stream().filter(l -> l.startsWith(member)).findFirst().orElseThrow().split(",", -1);
+            assertFalse(m[indexOf(head, "family_pvalue")].isEmpty(), member + " is in the family");
+        }
+        String html = Files.readString(target.resolve("sweep.html"), StandardCharsets.UTF_8);
+        assertTrue(html.contains("on their 36 common dates (2017-01-31 to 2019-12-31)"), "common dates stated");
+        assertTrue(html.contains("Left out of the grid family") && html.contains("Point 002, index-model against plain"),
+                "left-out comparison listed");
+        var best = SweepFixture.manifestWithoutClock(target).get("best_point");
+        assertEquals("003", best.get("point").asText());
+        assertEquals(1, best.get("left_out").size());
+        assertEquals(2, best.get("family_size").asInt());
+        assertEquals(3, best.get("comparisons").asInt());
+    }
+
     @Test
     void sweepPage_isSelfContained_withAHeatMapPerStrategyAndMeasure() throws IOException {
         String html = Files.readString(out.resolve("sweep.html"), StandardCharsets.UTF_8);

@@ -47,10 +47,16 @@ public record QuadraticProblem(int size, double[] quadratic, double[] linear, do
      * One tiled pass over the pairs (Q_ij, Q_ji): true when every entry is finite and every pair
      * agrees within the symmetry tolerance, which is all the two checks below can say of a good
      * matrix; only a bad one is walked again, by them, to name the offending entry.
+     *
+     * <p>The maxima are taken by plain comparisons and finiteness is gathered as a flag, without
+     * branches: {@link Math#max} orders NaN and −0.0 on every call, which costs a branch each;
+     * here a NaN or an infinity clears the flag and decides the answer by itself, and an absolute
+     * value is never −0.0.
      */
     private static boolean quadraticPasses(int n, double[] q) {
         double largest = 0;
         double widest = 0;
+        boolean finite = true;
         for (int i0 = 0; i0 < n; i0 += SYMMETRY_TILE) {
             int i1 = Math.min(n, i0 + SYMMETRY_TILE);
             for (int j0 = i0; j0 < n; j0 += SYMMETRY_TILE) {
@@ -58,15 +64,18 @@ public record QuadraticProblem(int size, double[] quadratic, double[] linear, do
                 for (int i = i0; i < i1; i++) {
                     int row = i * n;
                     for (int j = Math.max(j0, i); j < j1; j++) {
-                        double a = q[row + j];
-                        double b = q[j * n + i];
-                        largest = Math.max(largest, Math.max(Math.abs(a), Math.abs(b)));
-                        widest = Math.max(widest, Math.abs(a - b));
+                        double a = Math.abs(q[row + j]);
+                        double b = Math.abs(q[j * n + i]);
+                        double gap = Math.abs(q[row + j] - q[j * n + i]);
+                        finite &= a <= Double.MAX_VALUE & b <= Double.MAX_VALUE;
+                        double larger = a > b ? a : b;
+                        largest = larger > largest ? larger : largest;
+                        widest = gap > widest ? gap : widest;
                     }
                 }
             }
         }
-        return Double.isFinite(largest) && widest <= SYMMETRY_TOLERANCE * largest;
+        return finite && widest <= SYMMETRY_TOLERANCE * largest;
     }
 
     /** A problem with the same bound on every weight. */
