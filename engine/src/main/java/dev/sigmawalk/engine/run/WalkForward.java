@@ -143,7 +143,7 @@ public final class WalkForward<T> {
         // date order, so the moments do not depend on the number of threads; kept only when a
         // consumer of this window length needs the dense S (DenseMomentPlan).
         DenseMomentPlan plan = new DenseMomentPlan(strategies, probe);
-        RunningMoments running = plan.needs(length, panel.assetCount())
+        RunningMoments running = plan.anyWindowNeeds(builder, schedule, length)
                 ? new RunningMoments(panel, length, RunningMoments.DEFAULT_REFRESH_EVERY) : null;
         int firstHeld = schedule.firstRebalance() + 1;
         for (int j = 0; j < schedule.count(); j++) {

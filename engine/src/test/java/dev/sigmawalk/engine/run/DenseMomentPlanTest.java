@@ -16,6 +16,7 @@ import dev.sigmawalk.engine.timeline.Schedule;
 import dev.sigmawalk.engine.timeline.Timeline;
 import java.util.List;
 import java.util.Optional;
+import java.util.function.BiPredicate;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -27,8 +28,13 @@ class DenseMomentPlanTest {
     private static final double RELATIVE = 1e-13;
     private static final List<Integer> WINDOWS = List.of(12, 30);
 
-    /** A strategy that declares it needs S only when n ≤ L, and records what it was handed. */
+    /** The inverse-variance test strategy, declaring that it needs S only when n ≤ L. */
     private static StrategyDefinition declaring(String name) {
+        return declaring(name, (window, assets) -> assets <= window);
+    }
+
+    /** The inverse-variance test strategy with the given declaration. */
+    private static StrategyDefinition declaring(String name, BiPredicate<Integer, Integer> needs) {
         InverseVarianceStrategy inner = new InverseVarianceStrategy(name, -1);
         return new StrategyDefinition() {
             @Override
@@ -48,7 +54,7 @@ class DenseMomentPlanTest {
 
             @Override
             public boolean needsDenseMoments(int window, int assets) {
-                return assets <= window;
+                return needs.test(window, assets);
             }
         };
     }
@@ -79,6 +85,39 @@ class DenseMomentPlanTest {
                 .run(1, ProgressListener.NONE);
         assertTrue(run.probes().get(12).stream().noneMatch(b -> b), "L = 12 windows built S");
         assertTrue(run.probes().get(30).stream().allMatch(b -> b), "L = 30 windows lacked S");
+    }
+
+    /**
+     * A window length keeps running sums when any of its rebalances needs S, even if a window
+     * with every column eligible would not: here five of 20 assets list only at row 50, so the
+     * early windows of 12 rows have 15 assets and need S (n ≤ 15), the later ones do not.
+     */
+    @Test
+    void runningSums_keptWhenSomeRebalanceNeedsS() {
+        ReturnPanel base = TestPanels.random(90, 20, 13);
+        double[] r = base.rawReturns().clone();
+        for (int t = 0; t < 50; t++) {
+            for (int i = 15; i < 20; i++) {
+                r[t * 20 + i] = Double.NaN;
+            }
+        }
+        double[] m = new double[base.rows()];
+        double[] rf = new double[base.rows()];
+        for (int t = 0; t < base.rows(); t++) {
+            m[t] = base.market(t);
+            rf[t] = base.riskFree(t);
+        }
+        ReturnPanel panel = new ReturnPanel(base.dates(), base.assets(), r, m, rf, "index", base.periodsPerYear());
+        Schedule schedule = Timeline.plan(panel, new WalkForwardSpec(List.of(12), new RebalanceRule.EveryRows(3),
+                Optional.empty(), Optional.empty(), 0));
+        StrategyDefinition fewAssets = declaring("iv", (window, assets) -> assets <= 15);
+        DenseMomentPlan plan = new DenseMomentPlan(List.of(fewAssets), null);
+        WindowBuilder builder = new WindowBuilder(panel);
+        assertFalse(plan.needs(12, panel.assetCount()), "with every column eligible");
+        assertTrue(plan.anyWindowNeeds(builder, schedule, 12), "some early window needs S");
+        Schedule late = Timeline.plan(panel, new WalkForwardSpec(List.of(12), new RebalanceRule.EveryRows(3),
+                Optional.of(panel.date(70)), Optional.empty(), 0));
+        assertFalse(plan.anyWindowNeeds(builder, late, 12), "no late window needs S");
     }
 
     /**

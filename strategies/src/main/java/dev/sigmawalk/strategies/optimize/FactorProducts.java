@@ -25,48 +25,11 @@ final class FactorProducts {
             throw new IllegalArgumentException("factor form (n = " + n + ", K = " + k + ") has loadings of "
                     + b.length + " and a factor covariance of " + sf.length + " values");
         }
-        this.c = loadingsTimesFactors(b, sf, n, k);
+        this.c = FactorForm.loadingsTimesFactors(b, sf, n, k);
         this.absFactor = new double[k * k];
         for (int e = 0; e < k * k; e++) {
             absFactor[e] = Math.abs(sf[e]);
         }
-    }
-
-    /**
-     * C = B Σ_F: O(nK²), or O(nK) when Σ_F is diagonal (as for a sample matrix or shrinkage
-     * handed on as its centred rows, where K is the window length).
-     */
-    private static double[] loadingsTimesFactors(double[] b, double[] sf, int n, int k) {
-        double[] c = new double[n * k];
-        if (diagonal(sf, k)) {
-            for (int i = 0; i < n; i++) {
-                for (int a = 0; a < k; a++) {
-                    c[i * k + a] = b[i * k + a] * sf[a * k + a];
-                }
-            }
-            return c;
-        }
-        for (int i = 0; i < n; i++) {
-            for (int a = 0; a < k; a++) {
-                double v = 0;
-                for (int e = 0; e < k; e++) {
-                    v += b[i * k + e] * sf[e * k + a];
-                }
-                c[i * k + a] = v;
-            }
-        }
-        return c;
-    }
-
-    private static boolean diagonal(double[] m, int k) {
-        for (int a = 0; a < k; a++) {
-            for (int e = 0; e < k; e++) {
-                if (a != e && m[a * k + e] != 0) {
-                    return false;
-                }
-            }
-        }
-        return true;
     }
 
     /** n. */

@@ -329,18 +329,21 @@ public final class ZeroVarianceProjection {
                 trace += hessian[a * m + a];
             }
             double tau = trace > 0 ? 1e-12 * trace / m : 1.0;
-            double[] a = new double[m * m];
+            CholeskyFactor factor = new CholeskyFactor(m);
+            double[] column = new double[m];
             for (int p = 0; p < m; p++) {
-                for (int q = p; q < m; q++) {
-                    a[p * m + q] = hessian[p * m + q];
+                for (int q = 0; q < p; q++) {
+                    column[q] = hessian[q * m + p];
                 }
-                a[p * m + p] += tau;
+                if (!factor.append(column, hessian[p * m + p] + tau, 0.0)) {
+                    throw new ArithmeticException("Newton system is not positive definite at pivot " + p);
+                }
             }
             double[] rhs = new double[m];
             for (int p = 0; p < m; p++) {
                 rhs[p] = -r[p];
             }
-            solveUpper(a, m, rhs);
+            factor.solveInPlace(rhs);
             return rhs;
         }
 
@@ -398,45 +401,6 @@ public final class ZeroVarianceProjection {
             }
             double scale = uncorrelatedVariance();
             return new SolveOutcome.Optimal(w.clone(), sides, steps, 0.0, scale > 0 ? variance / scale : 0.0);
-        }
-    }
-
-    /**
-     * Solves A x = rhs in place for a symmetric positive definite A given by its upper triangle
-     * (m×m row-major; overwritten by its Cholesky factor R with A = R'R).
-     */
-    static void solveUpper(double[] a, int m, double[] rhs) {
-        for (int p = 0; p < m; p++) {
-            double d = a[p * m + p];
-            for (int k = 0; k < p; k++) {
-                d -= a[k * m + p] * a[k * m + p];
-            }
-            if (!(d > 0)) {
-                throw new ArithmeticException("Newton system is not positive definite at pivot " + p + " (" + d + ")");
-            }
-            double root = Math.sqrt(d);
-            a[p * m + p] = root;
-            for (int q = p + 1; q < m; q++) {
-                double v = a[p * m + q];
-                for (int k = 0; k < p; k++) {
-                    v -= a[k * m + p] * a[k * m + q];
-                }
-                a[p * m + q] = v / root;
-            }
-        }
-        for (int p = 0; p < m; p++) {
-            double v = rhs[p];
-            for (int k = 0; k < p; k++) {
-                v -= a[k * m + p] * rhs[k];
-            }
-            rhs[p] = v / a[p * m + p];
-        }
-        for (int p = m - 1; p >= 0; p--) {
-            double v = rhs[p];
-            for (int k = p + 1; k < m; k++) {
-                v -= a[p * m + k] * rhs[k];
-            }
-            rhs[p] = v / a[p * m + p];
         }
     }
 }

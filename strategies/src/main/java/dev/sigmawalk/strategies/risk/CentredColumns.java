@@ -78,18 +78,52 @@ final class CentredColumns {
 
     /** ‖UU'‖²_F = Σ_ij (u_i'u_j)² for U stored n×L like {@link #columns()}: the L×L Gram through the blocked kernel. */
     static double gramNormSquared(double[] u, int n, int len) {
+        return normSquared(gram(u, n, len), len);
+    }
+
+    /** The upper triangle of UU' (L×L row-major) for U stored n×L, O(L² n). */
+    static double[] gram(double[] u, int n, int len) {
         double[] gram = new double[len * len];
         CrossProducts.accumulate(u, u, n, len, gram);
+        return gram;
+    }
+
+    /** ‖G‖²_F of a symmetric L×L matrix given by its upper triangle. */
+    static double normSquared(double[] upper, int len) {
         double diagonal = 0;
-        double upper = 0;
+        double off = 0;
         for (int s = 0; s < len; s++) {
             int row = s * len;
-            diagonal += gram[row + s] * gram[row + s];
+            diagonal += upper[row + s] * upper[row + s];
             for (int t = s + 1; t < len; t++) {
-                upper += gram[row + t] * gram[row + t];
+                off += upper[row + t] * upper[row + t];
             }
         }
-        return diagonal + 2 * upper;
+        return diagonal + 2 * off;
+    }
+
+    /**
+     * The upper triangle of X̃X̃' from that of EE' for X̃ = E + ỹβ' (E the residuals of
+     * {@link #residuals}): EE' + vỹ' + ỹv' + (β'β)ỹỹ' with v = Eβ, in O(L n + L²).
+     */
+    static double[] withMarket(double[] residualGram, double[] e, double[] slope, double[] market, int n, int len) {
+        double[] v = new double[len];
+        double bb = 0;
+        for (int i = 0; i < n; i++) {
+            double b = slope[i];
+            bb += b * b;
+            int base = i * len;
+            for (int t = 0; t < len; t++) {
+                v[t] += e[base + t] * b;
+            }
+        }
+        double[] g = residualGram.clone();
+        for (int s = 0; s < len; s++) {
+            for (int t = s; t < len; t++) {
+                g[s * len + t] += v[s] * market[t] + market[s] * v[t] + bb * market[s] * market[t];
+            }
+        }
+        return g;
     }
 
     /** Σ_i (u_i'u_i)² for U stored n×L: the squared diagonal of U'U, O(L n). */

@@ -41,19 +41,8 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
         this.loadings = loadings;
         this.factorCovariance = factorCovariance;
         this.specific = specific;
-        this.diagonalFactors = isDiagonal(factorCovariance, k);
+        this.diagonalFactors = FactorForm.isDiagonal(factorCovariance, k);
         this.shrinkage = shrinkage;
-    }
-
-    private static boolean isDiagonal(double[] m, int k) {
-        for (int a = 0; a < k; a++) {
-            for (int b = 0; b < k; b++) {
-                if (a != b && m[a * k + b] != 0) {
-                    return false;
-                }
-            }
-        }
-        return true;
     }
 
     /**
@@ -178,7 +167,7 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
     @Override
     public double[] dense() {
         if (dense == null) {
-            double[] c = loadingsTimesFactorCovariance();
+            double[] c = FactorForm.loadingsTimesFactors(loadings, factorCovariance, n, k);
             double[] m = new double[n * n];
             for (int i = 0; i < n; i++) {
                 for (int j = i; j < n; j++) {
@@ -253,28 +242,6 @@ public final class FactorCovariance implements CovarianceEstimate, FactorForm {
             }
         }
         return e;
-    }
-
-    private double[] loadingsTimesFactorCovariance() {
-        double[] c = new double[n * k];
-        if (diagonalFactors) {
-            for (int i = 0; i < n; i++) {
-                for (int a = 0; a < k; a++) {
-                    c[i * k + a] = loadings[i * k + a] * factorCovariance[a * k + a];
-                }
-            }
-            return c;
-        }
-        for (int i = 0; i < n; i++) {
-            for (int b = 0; b < k; b++) {
-                double s = 0;
-                for (int a = 0; a < k; a++) {
-                    s += loadings[i * k + a] * factorCovariance[a * k + b];
-                }
-                c[i * k + b] = s;
-            }
-        }
-        return c;
     }
 
     private void checkLength(String role, double[] v) {

@@ -16,20 +16,25 @@ public record SampleRiskModel() implements RiskModel {
 
     @Override
     public CovarianceEstimate estimate(EstimationWindow window) {
-        int len = window.length();
-        if (SampleRank.lowRank(len, window.assetCount())) {
-            CentredColumns rows = CentredColumns.of(new CentredWindow(window));
-            double[] factor = new double[len * len];
-            for (int a = 0; a < len; a++) {
-                factor[a * len + a] = 1.0 / (len - 1.0);
-            }
-            return FactorCovariance.of(rows.columns(), factor, new double[window.assetCount()]);
+        if (SampleRank.lowRank(window.length(), window.assetCount())) {
+            return lowRank(window);
         }
         var moments = window.moments();
         return new DenseCovariance(moments.assets(), moments.covariance(), OptionalDouble.empty());
     }
 
-    /** Only with at least as many rows as assets; otherwise the estimate is the centred rows. */
+    /** S as its centred rows: B = X̃' (n×L), Σ_F = I/(L−1), no specific variance, whatever the shape. */
+    static FactorCovariance lowRank(EstimationWindow window) {
+        int len = window.length();
+        CentredColumns rows = CentredColumns.of(new CentredWindow(window));
+        double[] factor = new double[len * len];
+        for (int a = 0; a < len; a++) {
+            factor[a * len + a] = 1.0 / (len - 1.0);
+        }
+        return FactorCovariance.of(rows.columns(), factor, new double[window.assetCount()]);
+    }
+
+    /** Except on the low-rank path ({@link SampleRank#lowRank}), where the estimate is the centred rows. */
     @Override
     public boolean needsDenseMoments(int window, int assets) {
         return !SampleRank.lowRank(window, assets);

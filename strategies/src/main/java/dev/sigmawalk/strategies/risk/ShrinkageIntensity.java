@@ -208,7 +208,9 @@ final class ShrinkageIntensity {
      *   <li>the target with its diagonal, aa'/s_00, equals X̃'PX̃/L with P = ỹỹ'/ỹ'ỹ, so
      *       S − aa'/s_00 = E'E/L with E = (I − P)X̃ the market-model residuals, and
      *       γ̂ = Σ_{i≠j} (e_i'e_j)²/L² = (‖EE'‖² − Σ_i (e_i'e_i)²)/L², a sum of squares of small
-     *       numbers rather than a difference of large ones.</li>
+     *       numbers rather than a difference of large ones;</li>
+     *   <li>X̃ = E + ỹβ' gives X̃X̃' = EE' + vỹ' + ỹv' + (β'β)ỹỹ' with v = Eβ, so one L×L Gram
+     *       matrix serves both norms.</li>
      * </ul>
      */
     static double singleIndexGram(CentredWindow w, CentredColumns x) {
@@ -223,13 +225,15 @@ final class ShrinkageIntensity {
             slope[i] = si0[i] / s00;
         }
         RowSums rows = RowSums.of(w, si0);
-        double normS = CentredColumns.gramNormSquared(x.columns(), n, len) / ((double) len * len);
+        double[] e = x.residuals(slope);
+        double[] h = CentredColumns.gram(e, n, len);
+        double normS = CentredColumns.normSquared(CentredColumns.withMarket(h, e, slope, x.market(), n, len), len)
+                / ((double) len * len);
         double pi = rows.squaredNorms / len - normS;
         double piDiagonal = rows.fourthPowers / len - rows.ownVarianceSquares(len);
         double rhoOff = 2.0 / s00 * rows.cross / len - rows.market / (s00 * s00 * len)
                 - rows.targetTimesSample / (s00 * len);
-        double[] e = x.residuals(slope);
-        double gamma = (CentredColumns.gramNormSquared(e, n, len) - CentredColumns.ownNormsSquared(e, n, len))
+        double gamma = (CentredColumns.normSquared(h, len) - CentredColumns.ownNormsSquared(e, n, len))
                 / ((double) len * len);
         return fromKappa(pi, piDiagonal + rhoOff, gamma, normS, len);
     }

@@ -19,8 +19,8 @@ import java.util.OptionalDouble;
  *   <li>identity: F = (tr S / n) I (Ledoit &amp; Wolf 2004, J. Multivariate Analysis).</li>
  * </ul>
  * The estimate reports δ through {@link CovarianceEstimate#shrinkage()}. Cost O(L n + n²) on top
- * of the window's moments; with fewer rows than assets the single-index and identity targets
- * give Σ as diagonal plus low rank instead, in O(L² n) without any n×n matrix
+ * of the window's moments; with far fewer rows than assets ({@link SampleRank#lowRank}) the
+ * single-index and identity targets give Σ as diagonal plus low rank instead, in O(L² n) without any n×n matrix
  * ({@link LowRankShrinkage}).
  *
  * @param target the structured matrix shrunk toward
@@ -68,7 +68,7 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
 
     /**
      * Not when the estimate is handed on as diagonal plus low rank ({@link LowRankShrinkage}:
-     * the single-index and identity targets with L &lt; n).
+     * the single-index and identity targets with 4L &lt; n, {@link SampleRank#lowRank}).
      */
     @Override
     public boolean needsDenseMoments(int window, int assets) {

@@ -54,12 +54,12 @@ class LowRankShrinkageTest {
     @Test
     void lowRankEstimate_equalsDenseEstimate_entryByEntry() {
         for (ShrinkageTarget target : new ShrinkageTarget[] {ShrinkageTarget.SINGLE_INDEX, ShrinkageTarget.IDENTITY}) {
-            EstimationWindow w = Windows.simulated(7, 24, 90);
+            EstimationWindow w = Windows.simulated(7, 20, 90);
             ShrinkageRiskModel model = new ShrinkageRiskModel(target);
-            assertFalse(model.needsDenseMoments(24, 90), target + " declared it needs S");
+            assertFalse(model.needsDenseMoments(20, 90), target + " declared it needs S");
             CovarianceEstimate low = model.estimate(w);
             assertInstanceOf(FactorCovariance.class, low, target + " estimate form");
-            CovarianceEstimate dense = model.dense(Windows.simulated(7, 24, 90));
+            CovarianceEstimate dense = model.dense(Windows.simulated(7, 20, 90));
             Close.relative(dense.shrinkage().orElseThrow(), low.shrinkage().orElseThrow(), INTENSITY_TOL, target + " δ");
             int n = w.assetCount();
             for (int i = 0; i < n; i++) {
@@ -74,7 +74,7 @@ class LowRankShrinkageTest {
     }
 
     /**
-     * On a window of 20 rows and 60 assets, the low-rank path's δ against lowrank_values.json,
+     * On a window of 20 rows and 60 assets, the low-rank form's δ against lowrank_values.json,
      * written by lowrank_shrinkage_check.py beside it: numpy, pair by pair from the definitions of
      * Ledoit &amp; Wolf (2003, appendix) for the single-index target and Ledoit &amp; Wolf (2004,
      * JMVA, section 3) for the scaled identity.
@@ -83,8 +83,7 @@ class LowRankShrinkageTest {
     void lowRankIntensity_matchesPairwiseNumpyReference() {
         for (ShrinkageTarget target : new ShrinkageTarget[] {ShrinkageTarget.SINGLE_INDEX, ShrinkageTarget.IDENTITY}) {
             EstimationWindow w = ReferenceData.window("lowrank_window.csv");
-            CovarianceEstimate sigma = new ShrinkageRiskModel(target).estimate(w);
-            assertInstanceOf(FactorCovariance.class, sigma, target + " form");
+            CovarianceEstimate sigma = LowRankShrinkage.estimate(target, new CentredWindow(w));
             String key = target == ShrinkageTarget.SINGLE_INDEX ? "ledoit_wolf_single_index_delta_pairwise"
                     : "ledoit_wolf_identity_delta_pairwise";
             Close.relative(ReferenceData.value("lowrank_values.json", key), sigma.shrinkage().orElseThrow(),
@@ -92,11 +91,16 @@ class LowRankShrinkageTest {
         }
     }
 
-    /** With at least as many rows as assets, or the constant-correlation target, the estimate stays dense. */
+    /**
+     * With more than n/4 rows (where the Gram matrix would cost more than the dense path), or
+     * the constant-correlation target, the estimate stays dense.
+     */
     @Test
     void denseWhereTheAlgebraOrTheShapeSaysSo() {
         EstimationWindow tall = Windows.simulated(3, 50, 20);
         assertInstanceOf(DenseCovariance.class, new ShrinkageRiskModel(ShrinkageTarget.SINGLE_INDEX).estimate(tall));
+        EstimationWindow middle = Windows.simulated(3, 30, 100);
+        assertInstanceOf(DenseCovariance.class, new ShrinkageRiskModel(ShrinkageTarget.SINGLE_INDEX).estimate(middle));
         EstimationWindow wide = Windows.simulated(3, 20, 50);
         ShrinkageRiskModel cc = new ShrinkageRiskModel(ShrinkageTarget.CONSTANT_CORRELATION);
         assertTrue(cc.needsDenseMoments(20, 50), "constant correlation must ask for S");

@@ -103,7 +103,8 @@ public final class ReferenceData {
         return rows;
     }
 
-    private static String text(String file) {
+    /** A test resource beside this class, as text. */
+    static String text(String file) {
         try (InputStream in = ReferenceData.class.getResourceAsStream(file)) {
             if (in == null) {
                 throw new IllegalStateException("missing test resource " + file);

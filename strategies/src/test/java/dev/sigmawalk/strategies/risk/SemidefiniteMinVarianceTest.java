@@ -17,10 +17,6 @@ import dev.sigmawalk.strategies.rules.MinVariance;
 import dev.sigmawalk.strategies.rules.RuleInput;
 import dev.sigmawalk.strategies.rules.RuleOutcome;
 import dev.sigmawalk.strategies.rules.WarmStart;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.Arrays;
 import java.util.Optional;
 import org.junit.jupiter.api.Test;
@@ -46,7 +42,7 @@ class SemidefiniteMinVarianceTest {
     @Test
     void zeroVarianceOptimum_isTheMinimumNormOne() {
         EstimationWindow w = ReferenceData.window("zero_variance_window.csv");
-        CovarianceEstimate sigma = new SampleRiskModel().estimate(w);
+        CovarianceEstimate sigma = SampleRiskModel.lowRank(w);
         assertInstanceOf(FactorCovariance.class, sigma);
         double[] got = solve(w, sigma, 0.05);
         double[] want = column("zero_variance_min_norm.csv");
@@ -68,7 +64,7 @@ class SemidefiniteMinVarianceTest {
     @Test
     void positiveVarianceOptimum_matchesScipyAndTheDenseSolver() {
         EstimationWindow w = ReferenceData.window("positive_variance_window.csv");
-        CovarianceEstimate sigma = new SampleRiskModel().estimate(w);
+        CovarianceEstimate sigma = SampleRiskModel.lowRank(w);
         double[] got = solve(w, sigma, 0.1);
         double value = sigma.portfolioVariance(got);
         Close.relative(Double.parseDouble(text("positive_variance_value.txt").trim()), value, 1e-9, "scipy objective");
@@ -88,9 +84,9 @@ class SemidefiniteMinVarianceTest {
      */
     @Test
     void seededWideWindows_objectiveEqualsDense_andAnswerIsRepeatable() {
-        for (int[] shape : new int[][] {{20, 120}, {40, 400}, {30, 31}}) {
+        for (int[] shape : new int[][] {{20, 120}, {40, 400}, {30, 31}, {12, 12}}) {
             EstimationWindow w = Windows.simulated(shape[0] * 7L + shape[1], shape[0], shape[1]);
-            CovarianceEstimate sigma = new SampleRiskModel().estimate(w);
+            CovarianceEstimate sigma = SampleRiskModel.lowRank(w);
             double cap = 4.0 / shape[1];
             double[] got = solve(w, sigma, cap);
             double[] dense = denseOptimum(sigma, cap);
@@ -133,13 +129,6 @@ class SemidefiniteMinVarianceTest {
     }
 
     private static String text(String file) {
-        try (InputStream in = SemidefiniteMinVarianceTest.class.getResourceAsStream(file)) {
-            if (in == null) {
-                throw new IllegalStateException("missing test resource " + file);
-            }
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return ReferenceData.text(file);
     }
 }
