@@ -5,6 +5,10 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.SplittableRandom;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.Future;
 
 /**
  * Family-wise adjusted p-values for a family of two-sided difference tests, by the studentised
@@ -40,6 +44,25 @@ public final class RomanoWolfStepdown {
      * @return the adjusted p-values in the family's order, each in (0, 1]
      */
     public static double[] adjust(List<FamilyContrast> family, int resamples, long seed) {
+        return adjust(family, resamples, seed, 1);
+    }
+
+    /**
+     * The same adjusted p-values, the resamples shared out over {@code threads} threads: the
+     * block starts of every resample are drawn first, in the one fixed order, and each resample's
+     * statistics depend on its own starts alone, so the values are bit for bit those of one
+     * thread whatever the count.
+     *
+     * @param family S >= 1 contrasts over the same T periods
+     * @param resamples M >= 1
+     * @param seed the bootstrap seed
+     * @param threads >= 1
+     * @return the adjusted p-values in the family's order, each in (0, 1]
+     */
+    public static double[] adjust(List<FamilyContrast> family, int resamples, long seed, int threads) {
+        if (!(threads >= 1)) {
+            throw new IllegalArgumentException("threads (" + threads + ") must be >= 1");
+        }
         if (family.isEmpty()) {
             return new double[0];
         }
@@ -75,29 +98,71 @@ public final class RomanoWolfStepdown {
             secondOf[s] = indexOf(distinct, family.get(s).second());
         }
         int drawn = blocks * block;
+        int[][] starts = new int[resamples][blocks];
+        SplittableRandom random = new SplittableRandom(seed);
+        for (int m = 0; m < resamples; m++) {
+            for (int j = 0; j < blocks; j++) {
+                starts[m][j] = random.nextInt(length);
+            }
+        }
+        double[][] resampled = new double[resamples][];
+        int shared = block;
+        int parts = Math.min(threads, resamples);
+        if (parts == 1) {
+            resampleRange(family, distinct, firstOf, secondOf, starts, block, drawn, 0, resamples, resampled);
+        } else {
+            List<Callable<Void>> tasks = new ArrayList<>(parts);
+            for (int k = 0; k < parts; k++) {
+                int from = (int) ((long) resamples * k / parts);
+                int to = (int) ((long) resamples * (k + 1) / parts);
+                tasks.add(() -> {
+                    resampleRange(family, distinct, firstOf, secondOf, starts, shared, drawn, from, to, resampled);
+                    return null;
+                });
+            }
+            ForkJoinPool pool = new ForkJoinPool(parts);
+            try {
+                for (Future<Void> f : pool.invokeAll(tasks)) {
+                    f.get();
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("interrupted while resampling the family", e);
+            } catch (ExecutionException e) {
+                Throwable cause = e.getCause();
+                if (cause instanceof RuntimeException r) {
+                    throw r;
+                }
+                throw new IllegalStateException(cause);
+            } finally {
+                pool.shutdownNow();
+            }
+        }
+        return fromResamples(observed, resampled);
+    }
+
+    /** d*_{s,m} of resamples {@code from} to {@code to} - 1, with buffers of this range's own. */
+    private static void resampleRange(List<FamilyContrast> family, List<double[]> distinct, int[] firstOf, int[] secondOf,
+                                      int[][] starts, int block, int drawn, int from, int to, double[][] resampled) {
+        int size = family.size();
         CircularResample[] draws = new CircularResample[distinct.size()];
         for (int d = 0; d < draws.length; d++) {
             draws[d] = new CircularResample(drawn);
         }
-        double[][] resampled = new double[resamples][size];
-        int[] starts = new int[blocks];
-        SplittableRandom random = new SplittableRandom(seed);
-        for (int m = 0; m < resamples; m++) {
-            for (int j = 0; j < blocks; j++) {
-                starts[j] = random.nextInt(length);
-            }
+        for (int m = from; m < to; m++) {
             for (int d = 0; d < draws.length; d++) {
-                draws[d].draw(distinct.get(d), starts, block);
+                draws[d].draw(distinct.get(d), starts[m], block);
             }
+            double[] row = new double[size];
             for (int s = 0; s < size; s++) {
                 FamilyContrast c = family.get(s);
                 CircularResample ra = draws[firstOf[s]];
                 CircularResample rb = draws[secondOf[s]];
-                resampled[m][s] = StudentisedBlockBootstrap.studentised(c.measure(), ra.values(), rb.values(),
+                row[s] = StudentisedBlockBootstrap.studentised(c.measure(), ra.values(), rb.values(),
                         CircularResample.moments(ra, rb), block, c.test().difference());
             }
+            resampled[m] = row;
         }
-        return fromResamples(observed, resampled);
     }
 
     /**

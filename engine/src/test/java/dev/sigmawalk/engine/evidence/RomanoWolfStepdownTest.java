@@ -6,6 +6,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -118,6 +119,31 @@ class RomanoWolfStepdownTest {
         }
         assertArrayEquals(plainDefinition(family, spec.resamples(), spec.seed()),
                 RomanoWolfStepdown.adjust(family, spec.resamples(), spec.seed()), 0.0);
+    }
+
+    /**
+     * Sharing the resamples out over threads changes no bit: the plain definition (one thread,
+     * one draw after another) against 1, 2, 3 and 8 threads, with a resample count (101) that the
+     * thread counts do not divide, so the ranges are uneven.
+     */
+    @Test
+    void threads_giveTheSameBitsAsOneThread() {
+        EvidenceSpec spec = new EvidenceSpec(101, 29L, 5);
+        DifferenceTests tests = new DifferenceTests(HacKernel.PARZEN, spec);
+        SimulatedPair p = SimulatedPair.normal(81, 120, 0.02, 0.0, 1, 1.2, 0.6, 0.3);
+        SimulatedPair q = SimulatedPair.normal(82, 120, 0.0, 0.01, 1.1, 1, 0.3, 0.2);
+        List<FamilyContrast> family = new ArrayList<>();
+        for (double[][] pair : new double[][][] {{p.first(), p.second()}, {q.first(), q.second()}, {q.second(), p.first()}}) {
+            for (DifferenceMeasure m : DifferenceMeasure.values()) {
+                family.add(new FamilyContrast(m, pair[0], pair[1], tests.compare(m, pair[0], pair[1])));
+            }
+        }
+        double[] expected = plainDefinition(family, spec.resamples(), spec.seed());
+        for (int threads : new int[] {1, 2, 3, 8}) {
+            assertArrayEquals(expected, RomanoWolfStepdown.adjust(family, spec.resamples(), spec.seed(), threads), 0.0,
+                    threads + " threads");
+        }
+        assertThrows(IllegalArgumentException.class, () -> RomanoWolfStepdown.adjust(family, 10, 1L, 0));
     }
 
     /** The adjusted p-values computed straight from the definition (class Javadoc), one contrast at a time. */

@@ -48,6 +48,11 @@ public record GridEvidence(Optional<PointRow> best, Optional<PointRow> baseline,
      * @param tests the difference tests the family is run again with (the base study's settings)
      */
     static GridEvidence of(List<PointRow> rows, List<ContrastReturns> candidates, DifferenceTests tests) {
+        return of(rows, candidates, tests, 1);
+    }
+
+    /** The same evidence, the grid family's resamples shared out over {@code threads} threads. */
+    static GridEvidence of(List<PointRow> rows, List<ContrastReturns> candidates, DifferenceTests tests, int threads) {
         List<PointComparison> comparisons = candidates.stream().map(ContrastReturns::comparison).toList();
         double[] holm = HolmAdjustment.adjust(comparisons.stream().mapToDouble(PointComparison::pValue).toArray());
         PointRow best = null;
@@ -64,7 +69,7 @@ public record GridEvidence(Optional<PointRow> best, Optional<PointRow> baseline,
                     holm, GridFamily.none("no point has a strategy compared with another"));
         }
         PointComparison test = comparisons.get(bestTest);
-        GridFamily family = GridFamily.of(candidates, bestTest, tests);
+        GridFamily family = GridFamily.of(candidates, bestTest, tests, threads);
         double familyP = family.member(test).map(GridFamily.Member::adjusted).orElse(Double.NaN);
         return new GridEvidence(Optional.of(best), baselineOf(rows, test), test.pValue(), familyP, holm[bestTest],
                 comparisons, holm, family);

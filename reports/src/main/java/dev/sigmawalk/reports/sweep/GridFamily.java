@@ -70,6 +70,14 @@ record GridFamily(List<Member> members, List<LeftOut> leftOut, Optional<LocalDat
      * @param tests the difference tests (kernel, resamples, seed, block length)
      */
     static GridFamily of(List<ContrastReturns> candidates, int anchor, DifferenceTests tests) {
+        return of(candidates, anchor, tests, 1);
+    }
+
+    /**
+     * The same family, its resamples shared out over {@code threads} threads (the values do not
+     * depend on the count: {@link RomanoWolfStepdown#adjust(List, int, long, int)}).
+     */
+    static GridFamily of(List<ContrastReturns> candidates, int anchor, DifferenceTests tests, int threads) {
         ContrastReturns best = candidates.get(anchor);
         int minimum = Math.max(DifferenceTests.MIN_PERIODS, (int) Math.ceil(MIN_SHARE * best.periods()));
         if (best.periods() < minimum) {
@@ -89,7 +97,7 @@ record GridFamily(List<Member> members, List<LeftOut> leftOut, Optional<LocalDat
                 reasons[i] = reason(candidates.get(i), best, next.length, minimum);
             }
         }
-        return tested(candidates, joined, reasons, common, anchor, tests);
+        return tested(candidates, joined, reasons, common, anchor, tests, threads);
     }
 
     /** Indexes other than the anchor, most dates shared with the anchor first, ties in grid order. */
@@ -122,7 +130,7 @@ record GridFamily(List<Member> members, List<LeftOut> leftOut, Optional<LocalDat
 
     /** Runs each member's test on the common dates, then the stepdown over those that ran. */
     private static GridFamily tested(List<ContrastReturns> candidates, boolean[] joined, String[] reasons, int[] common,
-                                     int anchor, DifferenceTests tests) {
+                                     int anchor, DifferenceTests tests, int threads) {
         List<PointComparison> inFamily = new ArrayList<>();
         List<FamilyContrast> contrasts = new ArrayList<>();
         for (int i = 0; i < candidates.size(); i++) {
@@ -141,7 +149,8 @@ record GridFamily(List<Member> members, List<LeftOut> leftOut, Optional<LocalDat
                 reasons[i] = "its variance test on the common dates did not run: " + e.getMessage();
             }
         }
-        double[] adjusted = RomanoWolfStepdown.adjust(contrasts, tests.evidence().resamples(), tests.evidence().seed());
+        double[] adjusted = RomanoWolfStepdown.adjust(contrasts, tests.evidence().resamples(), tests.evidence().seed(),
+                threads);
         List<Member> members = new ArrayList<>();
         for (int k = 0; k < contrasts.size(); k++) {
             members.add(new Member(inFamily.get(k), contrasts.get(k).test(), adjusted[k]));

@@ -57,6 +57,11 @@ public final class InProcessEngine implements SweepEngine {
     }
 
     @Override
+    public int driverThreads() {
+        return threads;
+    }
+
+    @Override
     public String describe() {
         return IN_PROCESS + ", " + threads + (threads == 1 ? " thread" : " threads");
     }

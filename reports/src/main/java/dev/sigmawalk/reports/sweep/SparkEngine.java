@@ -50,6 +50,11 @@ public final class SparkEngine implements SweepEngine {
     }
 
     @Override
+    public int driverThreads() {
+        return Runtime.getRuntime().availableProcessors();
+    }
+
+    @Override
     public String describe() {
         return given != null ? SPARK + " " + given.master()
                 : SPARK + " " + System.getProperty(SPARK_MASTER_PROPERTY, "local[*]");

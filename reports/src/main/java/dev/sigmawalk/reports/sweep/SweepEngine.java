@@ -30,6 +30,12 @@ public sealed interface SweepEngine permits InProcessEngine, SparkEngine {
     String describe();
 
     /**
+     * Threads of this process for the grid's own evidence, computed here after the points: the
+     * in-process engine's thread count, or every processor of a Spark driver.
+     */
+    int driverThreads();
+
+    /**
      * The engine asked for, or by default Spark when launched through spark-submit and this
      * process otherwise. The Spark engine is loaded by name only when chosen, so that
      * {@code java -jar} runs without Spark on the class path.

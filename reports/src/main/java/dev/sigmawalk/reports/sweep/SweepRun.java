@@ -60,7 +60,7 @@ public final class SweepRun {
         Consumer<PointOutcome> progress = options.quiet() ? o -> { } : progress(err, plan, tasks.size());
         outcomes.addAll(engine.run(tasks, options.force(), progress));
         outcomes.sort(Comparator.comparingInt(PointOutcome::number));
-        return publish(plan, outcomes, engine.describe(), started, options.force(), inputs);
+        return publish(plan, outcomes, engine, started, options.force(), inputs);
     }
 
     /** One line per summary row of every finished point, one per failed point, in grid order. */
@@ -112,7 +112,7 @@ public final class SweepRun {
         };
     }
 
-    private static Outcome publish(SweepPlan plan, List<PointOutcome> outcomes, String engine, Instant started,
+    private static Outcome publish(SweepPlan plan, List<PointOutcome> outcomes, SweepEngine engine, Instant started,
                                    boolean force, List<Path> inputs) {
         List<PointRow> rows = new ArrayList<>();
         List<ContrastReturns> candidates = new ArrayList<>();
@@ -126,7 +126,7 @@ public final class SweepRun {
         // The grid's evidence is computed here, on the driver, from the published files alone,
         // so it is the same whichever engine ran the points and in whatever order they finished.
         GridEvidence evidence = GridEvidence.of(rows, candidates,
-                new DifferenceTests(HacKernel.PARZEN, plan.base().evidence()));
+                new DifferenceTests(HacKernel.PARZEN, plan.base().evidence()), engine.driverThreads());
         List<SweepFiles.Line> lines = lines(plan, outcomes, rows, evidence);
         List<HeatMap> maps = HeatMap.of(plan.sweep(), rows);
         try (OutputFolder folder = OutputFolder.prepare(plan.out(), force, inputs)) {
@@ -134,9 +134,9 @@ public final class SweepRun {
             SweepFiles.writeSweep(dir.resolve("sweep.csv"), plan.keys(), lines);
             Instant finished = Instant.now();
             new SweepPage().write(dir.resolve("sweep.html"),
-                    new SweepPage.Content(plan, outcomes, maps, evidence, engine, started, finished));
+                    new SweepPage.Content(plan, outcomes, maps, evidence, engine.describe(), started, finished));
             SweepManifest.write(dir.resolve("manifest.json"), new SweepManifest.Content(VersionProvider.version(), plan,
-                    outcomes, evidence, engine, started, finished));
+                    outcomes, evidence, engine.describe(), started, finished));
             folder.commit();
             return new Outcome(folder.target(), outcomes, evidence);
         }
