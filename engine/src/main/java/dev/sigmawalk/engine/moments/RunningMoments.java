@@ -17,9 +17,24 @@ import java.util.Arrays;
  * Σx x' − L x̄ x̄' does when means are large against standard deviations.
  *
  * <p>Rounding error grows with each move, so the sums are rebuilt from the window's rows (with a
- * fresh shift) after {@code refreshEvery} moves, when a move is longer than half the window, and
- * when a column's mean has wandered so far from its shift that s_i²/L exceeds half of D_ii (the
- * point where the subtraction starts to lose more than one bit).
+ * fresh shift) once the rows slid since the last rebuild would exceed a budget of R rows (by
+ * default R = L), when a move is longer than half the window (then the rebuild's L rows cost less
+ * than the move's 2·k), and when a column's mean has wandered so far from its shift that s_i²/L
+ * exceeds half of D_ii (the point where the subtraction starts to lose more than one bit).
+ *
+ * <p>Why R = L is enough: every update of D_ij is one fused multiply-add (see
+ * {@link CrossProducts}), which adds a rounding error of at most u·|result| with u = 2⁻⁵³. Let
+ * B_ij = Σ_t |d_ti d_tj| over the window. A fresh build sums L terms, error at most about
+ * L·u·B_ij (the recursive-summation bound, Higham, Accuracy and Stability of Numerical
+ * Algorithms, 2nd ed., §4.2, from memory). A move of k rows makes 2k updates whose partial sums
+ * stay below B_ij plus the move's own rows, about (1 + 2k/L)·B_ij for rows of one scale, so R slid
+ * rows add at most 2R·u·(1 + 2k/L)·B_ij. With R ≤ L and 2k ≤ L the sums carry at most about
+ * three (never more than five) times the bound of a fresh build, two or three bits of 53; the
+ * shift keeps B_ii of the order of D_ii, so the bound is relative to the entry's own size.
+ * Rebuilding costs L rows of kernel work against the 2R rows of the slides before it, at most half
+ * their cost, where a rebuild every 20 moves of 21 rows cost 2.4 times the slides at L = 2,000.
+ * The rule counts rows only, so the rebuild points, and with them every bit of the sums, depend
+ * on the schedule alone, not on threads or timing.
  *
  * <p>A missing return counts as 0 in the sums. An asset is only handed to a model when it has a
  * return in every row of the window, and then its sums are exactly those of its returns.
@@ -28,8 +43,6 @@ import java.util.Arrays;
  * moments. Not thread-safe: one instance belongs to one walk-forward thread.
  */
 public final class RunningMoments {
-    /** The rebuild interval the walk-forward loop uses. */
-    public static final int DEFAULT_REFRESH_EVERY = 20;
     /** Rebuild when s_i²/L exceeds this fraction of D_ii (see the class comment). */
     private static final double CANCELLATION_LIMIT = 0.5;
     /** Side of the square tiles in which the snapshot mirrors its upper triangle. */
@@ -37,30 +50,42 @@ public final class RunningMoments {
 
     private final ShiftedRows rows;
     private final int length;
-    private final int refreshEvery;
+    private final int refreshRows;
     private final int width;
     private double[] shift;
     private final double[] sum;
     private final double[] cross;
     private int endRow = -1;
-    private int movesSinceRefresh;
+    private int rowsSinceRefresh;
     private int refreshes;
+
+    /**
+     * Sums rebuilt once the rows slid since the last rebuild would exceed the window length (the
+     * budget the class comment justifies).
+     *
+     * @param panel the returns
+     * @param length L, the window length (≥ 2)
+     */
+    public RunningMoments(ReturnPanel panel, int length) {
+        this(panel, length, length);
+    }
 
     /**
      * @param panel the returns
      * @param length L, the window length (≥ 2)
-     * @param refreshEvery rebuild the sums from the rows after this many incremental moves (≥ 1)
+     * @param refreshRows rebuild the sums from the rows instead of a move that would take the rows
+     *     slid since the last rebuild above this many (≥ 1)
      */
-    public RunningMoments(ReturnPanel panel, int length, int refreshEvery) {
+    public RunningMoments(ReturnPanel panel, int length, int refreshRows) {
         if (!(length >= 2)) {
             throw new IllegalArgumentException("window length (" + length + ") must be >= 2");
         }
-        if (!(refreshEvery >= 1)) {
-            throw new IllegalArgumentException("refreshEvery (" + refreshEvery + ") must be >= 1");
+        if (!(refreshRows >= 1)) {
+            throw new IllegalArgumentException("refreshRows (" + refreshRows + ") must be >= 1");
         }
         this.rows = new ShiftedRows(panel);
         this.length = length;
-        this.refreshEvery = refreshEvery;
+        this.refreshRows = refreshRows;
         this.width = rows.width();
         this.sum = new double[width];
         this.cross = new double[width * width];
@@ -99,7 +124,7 @@ public final class RunningMoments {
             return;
         }
         int step = tau - endRow;
-        if (endRow < 0 || movesSinceRefresh >= refreshEvery || 2 * step > length) {
+        if (endRow < 0 || step > refreshRows - rowsSinceRefresh || 2 * step > length) {
             refresh(tau);
         } else {
             slide(tau, step);
@@ -120,7 +145,7 @@ public final class RunningMoments {
         Arrays.fill(cross, 0.0);
         CrossProducts.accumulate(d, d, length, width, cross);
         endRow = tau;
-        movesSinceRefresh = 0;
+        rowsSinceRefresh = 0;
         refreshes++;
     }
 
@@ -140,7 +165,7 @@ public final class RunningMoments {
         }
         CrossProducts.accumulate(left, right, 2 * step, width, cross);
         endRow = tau;
-        movesSinceRefresh++;
+        rowsSinceRefresh += step;
     }
 
     private boolean cancelling() {
