@@ -36,11 +36,13 @@ public final class ResidualCorrelations {
     private final List<String> assets;
     private final int length;
     private final double[] correlation;
+    private final PairSums sums;
 
-    private ResidualCorrelations(List<String> assets, int length, double[] correlation) {
+    private ResidualCorrelations(List<String> assets, int length, double[] correlation, PairSums sums) {
         this.assets = assets;
         this.length = length;
         this.correlation = correlation;
+        this.sums = sums;
     }
 
     /** The residual correlations of a window, from its shared {@link EstimationWindow#moments()}. */
@@ -55,6 +57,28 @@ public final class ResidualCorrelations {
      * @param assets asset ids in the moments' order
      */
     public static ResidualCorrelations of(WindowMoments moments, List<String> assets) {
+        double[] residualSd = residualDeviations(moments, assets);
+        int n = moments.assets();
+        // The strict upper triangle, row by row: half the memory of the full matrix, written and
+        // read in order.
+        double[] rho = new double[n * (n - 1) / 2];
+        PairSums sums = PairSums.of(moments, residualSd, rho);
+        return new ResidualCorrelations(List.copyOf(assets), moments.length(), rho, sums);
+    }
+
+    /**
+     * The statistics of {@link #diagnostics()} (with the mean |ρ|) in the same single pass over the
+     * upper triangle of S, without storing the n(n-1)/2 correlations: for the rebalances that
+     * need neither the largest pairs nor the sector means. The sums are taken in the same order,
+     * so the result equals {@code of(moments, assets).diagnostics()} exactly.
+     */
+    public static ResidualDiagnostics diagnostics(WindowMoments moments, List<String> assets) {
+        PairSums sums = PairSums.of(moments, residualDeviations(moments, assets), null);
+        return sums.diagnostics(moments.assets(), moments.length());
+    }
+
+    /** √d_i for every asset, after the checks of the class comment. */
+    private static double[] residualDeviations(WindowMoments moments, List<String> assets) {
         int n = moments.assets();
         if (assets.size() != n) {
             throw new IllegalArgumentException("asset ids (" + assets.size() + ") must match the moments' n (" + n + ")");
@@ -80,21 +104,53 @@ public final class ResidualCorrelations {
             }
             residualSd[i] = Math.sqrt(d);
         }
-        // The strict upper triangle, row by row: half the memory of the full matrix, written and
-        // read in order.
-        double[] rho = new double[n * (n - 1) / 2];
-        double[] s = moments.covariance();
-        int at = 0;
-        for (int i = 0; i < n; i++) {
-            int row = i * n;
-            double si = sim[i];
-            double sdi = residualSd[i];
-            for (int j = i + 1; j < n; j++) {
-                double cov = s[row + j] - si * sim[j] / smm;
-                rho[at++] = Math.max(-1.0, Math.min(1.0, cov / (sdi * residualSd[j])));
+        return residualSd;
+    }
+
+    /**
+     * Σ ρ_ij, Σ |ρ_ij| and Σ ρ_ij² over the pairs i &lt; j, summed in the order (i, j) ascending while
+     * the correlations are made, so that the statistics cost no second pass over them.
+     */
+    private record PairSums(double sum, double sumAbs, double sumSquares) {
+
+        /** @param packed where to store the strict upper triangle row by row, or null not to keep it */
+        static PairSums of(WindowMoments moments, double[] residualSd, double[] packed) {
+            int n = moments.assets();
+            double smm = moments.marketVariance();
+            double[] sim = moments.marketCovariance();
+            double[] s = moments.covariance();
+            double[] scratch = packed == null ? new double[n] : null;
+            double sum = 0;
+            double sumAbs = 0;
+            double sumSquares = 0;
+            int at = 0;
+            for (int i = 0; i < n; i++) {
+                int row = i * n;
+                double si = sim[i];
+                double sdi = residualSd[i];
+                double[] out = packed == null ? scratch : packed;
+                int k = packed == null ? 0 : at;
+                // Two loops, so that the first (divisions and clamps) is unit stride without a
+                // dependency between iterations, and the second only adds.
+                for (int j = i + 1; j < n; j++) {
+                    double cov = s[row + j] - si * sim[j] / smm;
+                    out[k + j - i - 1] = Math.max(-1.0, Math.min(1.0, cov / (sdi * residualSd[j])));
+                }
+                int end = k + n - i - 1;
+                for (int m = k; m < end; m++) {
+                    double r = out[m];
+                    sum += r;
+                    sumAbs += Math.abs(r);
+                    sumSquares += r * r;
+                }
+                at += n - i - 1;
             }
+            return new PairSums(sum, sumAbs, sumSquares);
         }
-        return new ResidualCorrelations(List.copyOf(assets), moments.length(), rho);
+
+        ResidualDiagnostics diagnostics(int n, int length) {
+            return ResidualDiagnostics.fromSums(n, length, sum, sumSquares, sumAbs / (n * (n - 1) / 2));
+        }
     }
 
     /** Asset ids, in the order of the indices used here. */
@@ -132,7 +188,7 @@ public final class ResidualCorrelations {
 
     /** The adequacy statistics of Method §8 (mean |ρ|, Breusch-Pagan LM, Pesaran CD). */
     public ResidualDiagnostics diagnostics() {
-        return ResidualDiagnostics.of(this);
+        return sums.diagnostics(assets.size(), length);
     }
 
     /**

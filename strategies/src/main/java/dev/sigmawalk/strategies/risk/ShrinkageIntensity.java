@@ -33,47 +33,30 @@ final class ShrinkageIntensity {
      * c_t = Σ_j s_j0 x̃_tj:
      * Σ_{i≠j} ρ̂_ij = (2/s_00) 1/L Σ_t ỹ_t Σ_i x̃_ti² (c_t - s_i0 x̃_ti)
      * - (1/s_00²) 1/L Σ_t ỹ_t² (c_t² - Σ_i s_i0² x̃_ti²) - Σ_{i≠j} f_ij s_ij, which is O(L n + n²).
+     * π̂ comes from the same sweep of the rows and the same sums over S as in
+     * {@link ProductVariances}: π̂ = 1/L Σ_t (Σ_i x̃_ti²)² - Σ_ij s_ij². One pass over the rows
+     * ({@link RowSums}) and one over the upper triangle of S ({@link SingleIndexTargetSums}) give
+     * every term.
      *
-     * @param target F with divisor L-1 and F_ii = S_ii
+     * @param sums the sums over S and the target F (F_ii = S_ii), divisor L-1
      */
-    static double singleIndex(CentredWindow w, double[] target, ProductVariances pi) {
-        int n = w.assets();
+    static double singleIndex(CentredWindow w, SingleIndexTargetSums sums) {
         int len = w.length();
         double c = w.toPopulationDivisor();
-        double[] s = w.moments().covariance();
+        double cc = c * c;
         double s00 = c * w.moments().marketVariance();
-        double[] si0 = new double[n];
-        for (int i = 0; i < n; i++) {
-            si0[i] = c * w.moments().marketCovariance()[i];
+        double[] sim = w.moments().marketCovariance();
+        double[] si0 = new double[sim.length];
+        for (int i = 0; i < si0.length; i++) {
+            si0[i] = c * sim[i];
         }
-        double[] x = new double[n];
-        double cross = 0;
-        double market = 0;
-        for (int t = 0; t < len; t++) {
-            double y = w.row(t, x);
-            double ct = 0;
-            double ownSq = 0;
-            for (int i = 0; i < n; i++) {
-                ct += si0[i] * x[i];
-                ownSq += si0[i] * si0[i] * x[i] * x[i];
-            }
-            double rowCross = 0;
-            for (int i = 0; i < n; i++) {
-                rowCross += x[i] * x[i] * (ct - si0[i] * x[i]);
-            }
-            cross += y * rowCross;
-            market += y * y * (ct * ct - ownSq);
-        }
-        double targetTimesSample = 0;
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                if (i != j) {
-                    targetTimesSample += c * target[i * n + j] * c * s[i * n + j];
-                }
-            }
-        }
-        double rhoOff = 2.0 / s00 * cross / len - market / (s00 * s00 * len) - targetTimesSample;
-        return fromKappa(w, pi.total(), pi.diagonal() + rhoOff, gamma(w, target));
+        RowSums rows = RowSums.of(w, si0);
+        double normS = cc * sums.sampleSquares();
+        double pi = rows.squaredNorms / len - normS;
+        double piDiagonal = rows.fourthPowers / len - cc * sums.diagonalSquares();
+        double rhoOff = 2.0 / s00 * rows.cross / len - rows.market / (s00 * s00 * len)
+                - cc * sums.targetTimesSample();
+        return fromKappa(pi, piDiagonal + rhoOff, finiteDistance(cc * sums.distance()), normS, len);
     }
 
     /**
@@ -152,11 +135,16 @@ final class ShrinkageIntensity {
             double diff = c * (target[k] - s[k]);
             sum += diff * diff;
         }
-        if (!Double.isFinite(sum)) {
-            throw new ArithmeticException("distance between shrinkage target and sample matrix (" + sum
+        return finiteDistance(sum);
+    }
+
+    /** γ̂ itself, or an ArithmeticException when it is not finite. */
+    private static double finiteDistance(double gamma) {
+        if (!Double.isFinite(gamma)) {
+            throw new ArithmeticException("distance between shrinkage target and sample matrix (" + gamma
                     + ") must be finite");
         }
-        return sum;
+        return gamma;
     }
 
     /** True when γ̂ ≤ {@link #SAME_AS_SAMPLE} Σ_ij s_ij² (divisor-L moments throughout). */
