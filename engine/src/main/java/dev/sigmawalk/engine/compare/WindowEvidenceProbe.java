@@ -98,6 +98,12 @@ public final class WindowEvidenceProbe implements WindowProbe<WindowEvidence> {
         if (usable.moments().isEmpty()) {
             return new Found(Optional.empty(), List.of(), Optional.empty(), usable.notes());
         }
+        if (!scan && sectors.isEmpty()) {
+            // Nothing reads single pairs: the sums alone, without storing n(n-1)/2 correlations.
+            ResidualDiagnostics d = ResidualCorrelations.diagnostics(usable.moments().get(), usable.assets());
+            return new Found(Optional.of(d.withMeanAbsCorrelation(Double.NaN)), List.of(), Optional.empty(),
+                    usable.notes());
+        }
         ResidualCorrelations rho = ResidualCorrelations.of(usable.moments().get(), usable.assets());
         ResidualDiagnostics d = rho.diagnostics();
         return new Found(Optional.of(scan ? d : d.withMeanAbsCorrelation(Double.NaN)),

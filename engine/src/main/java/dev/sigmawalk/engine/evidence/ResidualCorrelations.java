@@ -36,11 +36,13 @@ public final class ResidualCorrelations {
     private final List<String> assets;
     private final int length;
     private final double[] correlation;
+    private final PairSums sums;
 
-    private ResidualCorrelations(List<String> assets, int length, double[] correlation) {
+    private ResidualCorrelations(List<String> assets, int length, double[] correlation, PairSums sums) {
         this.assets = assets;
         this.length = length;
         this.correlation = correlation;
+        this.sums = sums;
     }
 
     /** The residual correlations of a window, from its shared {@link EstimationWindow#moments()}. */
@@ -55,6 +57,28 @@ public final class ResidualCorrelations {
      * @param assets asset ids in the moments' order
      */
     public static ResidualCorrelations of(WindowMoments moments, List<String> assets) {
+        double[] residualSd = residualDeviations(moments, assets);
+        int n = moments.assets();
+        // The strict upper triangle, row by row: half the memory of the full matrix, written and
+        // read in order.
+        double[] rho = new double[n * (n - 1) / 2];
+        PairSums sums = PairSums.of(moments, residualSd, rho);
+        return new ResidualCorrelations(List.copyOf(assets), moments.length(), rho, sums);
+    }
+
+    /**
+     * The statistics of {@link #diagnostics()} (with the mean |ρ|) in the same single pass over the
+     * upper triangle of S, without storing the n(n-1)/2 correlations: for the rebalances that
+     * need neither the largest pairs nor the sector means. The sums are taken in the same order,
+     * so the result equals {@code of(moments, assets).diagnostics()} exactly.
+     */
+    public static ResidualDiagnostics diagnostics(WindowMoments moments, List<String> assets) {
+        PairSums sums = PairSums.of(moments, residualDeviations(moments, assets), null);
+        return sums.diagnostics(moments.assets(), moments.length());
+    }
+
+    /** √d_i for every asset, after the checks of the class comment. */
+    private static double[] residualDeviations(WindowMoments moments, List<String> assets) {
         int n = moments.assets();
         if (assets.size() != n) {
             throw new IllegalArgumentException("asset ids (" + assets.size() + ") must match the moments' n (" + n + ")");
@@ -80,21 +104,112 @@ public final class ResidualCorrelations {
             }
             residualSd[i] = Math.sqrt(d);
         }
-        // The strict upper triangle, row by row: half the memory of the full matrix, written and
-        // read in order.
-        double[] rho = new double[n * (n - 1) / 2];
-        double[] s = moments.covariance();
-        int at = 0;
-        for (int i = 0; i < n; i++) {
-            int row = i * n;
-            double si = sim[i];
-            double sdi = residualSd[i];
-            for (int j = i + 1; j < n; j++) {
-                double cov = s[row + j] - si * sim[j] / smm;
-                rho[at++] = Math.max(-1.0, Math.min(1.0, cov / (sdi * residualSd[j])));
+        return residualSd;
+    }
+
+    /**
+     * Σ ρ_ij, Σ |ρ_ij| and Σ ρ_ij² over the pairs i &lt; j, summed while the correlations are made,
+     * so that the statistics cost no second pass over them. Per pair
+     * ρ_ij = (S_ij − s_im β_j) · (1/√d_i)(1/√d_j) with β_j = s_jm / s_mm: multiplications only,
+     * unit stride along row i of S, in four interleaved partial sums so that the additions
+     * pipeline. The order is fixed, so the result is the same on every run.
+     */
+    private record PairSums(double sum, double sumAbs, double sumSquares) {
+
+        /** @param packed where to store the strict upper triangle row by row, or null not to keep it */
+        static PairSums of(WindowMoments moments, double[] residualSd, double[] packed) {
+            int n = moments.assets();
+            double smm = moments.marketVariance();
+            double[] sim = moments.marketCovariance();
+            double[] s = moments.covariance();
+            double[] beta = new double[n];
+            double[] scale = new double[n];
+            for (int i = 0; i < n; i++) {
+                beta[i] = sim[i] / smm;
+                scale[i] = 1.0 / residualSd[i];
             }
+            double[] scratch = packed == null ? new double[n] : null;
+            double[] row = new double[3];
+            double sum = 0;
+            double sumAbs = 0;
+            double sumSquares = 0;
+            int at = 0;
+            for (int i = 0; i < n; i++) {
+                // Row i's pairs go to the packed triangle, or to a scratch row that is overwritten.
+                double[] out = packed == null ? scratch : packed;
+                int base = (packed == null ? 0 : at) - (i + 1);
+                row(s, i, n, sim[i], scale, beta, out, base, row);
+                sum += row[0];
+                sumAbs += row[1];
+                sumSquares += row[2];
+                at += n - i - 1;
+            }
+            return new PairSums(sum, sumAbs, sumSquares);
         }
-        return new ResidualCorrelations(List.copyOf(assets), moments.length(), rho);
+
+        /**
+         * ρ_ij for i &lt; j into out[base + j], clamped to [−1, 1]; their sum, absolute sum and sum of
+         * squares into sums[0..2].
+         */
+        private static void row(double[] s, int i, int n, double si, double[] scale, double[] beta, double[] out,
+                                int base, double[] sums) {
+            int at = i * n;
+            double ui = scale[i];
+            double r0 = 0;
+            double r1 = 0;
+            double r2 = 0;
+            double r3 = 0;
+            double a0 = 0;
+            double a1 = 0;
+            double a2 = 0;
+            double a3 = 0;
+            double q0 = 0;
+            double q1 = 0;
+            double q2 = 0;
+            double q3 = 0;
+            int j = i + 1;
+            for (; j + 4 <= n; j += 4) {
+                double p0 = clamp((s[at + j] - si * beta[j]) * (ui * scale[j]));
+                double p1 = clamp((s[at + j + 1] - si * beta[j + 1]) * (ui * scale[j + 1]));
+                double p2 = clamp((s[at + j + 2] - si * beta[j + 2]) * (ui * scale[j + 2]));
+                double p3 = clamp((s[at + j + 3] - si * beta[j + 3]) * (ui * scale[j + 3]));
+                out[base + j] = p0;
+                out[base + j + 1] = p1;
+                out[base + j + 2] = p2;
+                out[base + j + 3] = p3;
+                r0 += p0;
+                r1 += p1;
+                r2 += p2;
+                r3 += p3;
+                a0 += Math.abs(p0);
+                a1 += Math.abs(p1);
+                a2 += Math.abs(p2);
+                a3 += Math.abs(p3);
+                q0 += p0 * p0;
+                q1 += p1 * p1;
+                q2 += p2 * p2;
+                q3 += p3 * p3;
+            }
+            for (; j < n; j++) {
+                double p = clamp((s[at + j] - si * beta[j]) * (ui * scale[j]));
+                out[base + j] = p;
+                r0 += p;
+                a0 += Math.abs(p);
+                q0 += p * p;
+            }
+            sums[0] = (r0 + r1) + (r2 + r3);
+            sums[1] = (a0 + a1) + (a2 + a3);
+            sums[2] = (q0 + q1) + (q2 + q3);
+        }
+
+        /** Rounding can push |ρ| a hair past 1. */
+        private static double clamp(double rho) {
+            return Math.max(-1.0, Math.min(1.0, rho));
+        }
+
+        ResidualDiagnostics diagnostics(int n, int length) {
+            return ResidualDiagnostics.fromSums(n, length, sum, sumSquares, sumAbs / (n * (n - 1) / 2));
+        }
     }
 
     /** Asset ids, in the order of the indices used here. */
@@ -132,7 +247,7 @@ public final class ResidualCorrelations {
 
     /** The adequacy statistics of Method §8 (mean |ρ|, Breusch-Pagan LM, Pesaran CD). */
     public ResidualDiagnostics diagnostics() {
-        return ResidualDiagnostics.of(this);
+        return sums.diagnostics(assets.size(), length);
     }
 
     /**

@@ -87,23 +87,6 @@ public record ResidualDiagnostics(int assets, int length, double meanAbsCorrelat
     /** Intercept and market. */
     private static final int SINGLE_INDEX_REGRESSORS = 2;
 
-    /** The statistics of a window's residual correlations, summed pair by pair. */
-    static ResidualDiagnostics of(ResidualCorrelations rho) {
-        int n = rho.assetCount();
-        double sum = 0;
-        double sumAbs = 0;
-        double sumSquares = 0;
-        for (int i = 0; i < n; i++) {
-            for (int j = i + 1; j < n; j++) {
-                double r = rho.correlation(i, j);
-                sum += r;
-                sumAbs += Math.abs(r);
-                sumSquares += r * r;
-            }
-        }
-        return fromSums(n, rho.length(), sum, sumSquares, sumAbs / (n * (n - 1) / 2));
-    }
-
     /**
      * The statistics from the two sums over pairs i &lt; j, for single-index residuals (every asset
      * regressed on the same intercept and market, k = 2):

@@ -33,47 +33,30 @@ final class ShrinkageIntensity {
      * c_t = Σ_j s_j0 x̃_tj:
      * Σ_{i≠j} ρ̂_ij = (2/s_00) 1/L Σ_t ỹ_t Σ_i x̃_ti² (c_t - s_i0 x̃_ti)
      * - (1/s_00²) 1/L Σ_t ỹ_t² (c_t² - Σ_i s_i0² x̃_ti²) - Σ_{i≠j} f_ij s_ij, which is O(L n + n²).
+     * π̂ comes from the same sweep of the rows and the same sums over S as in
+     * {@link ProductVariances}: π̂ = 1/L Σ_t (Σ_i x̃_ti²)² - Σ_ij s_ij². One pass over the rows
+     * ({@link CentredRowSums}) and one over the upper triangle of S ({@link SingleIndexTargetSums}) give
+     * every term.
      *
-     * @param target F with divisor L-1 and F_ii = S_ii
+     * @param sums the sums over S and the target F (F_ii = S_ii), divisor L-1
      */
-    static double singleIndex(CentredWindow w, double[] target, ProductVariances pi) {
-        int n = w.assets();
+    static double singleIndex(CentredWindow w, SingleIndexTargetSums sums) {
         int len = w.length();
         double c = w.toPopulationDivisor();
-        double[] s = w.moments().covariance();
+        double cc = c * c;
         double s00 = c * w.moments().marketVariance();
-        double[] si0 = new double[n];
-        for (int i = 0; i < n; i++) {
-            si0[i] = c * w.moments().marketCovariance()[i];
+        double[] sim = w.moments().marketCovariance();
+        double[] si0 = new double[sim.length];
+        for (int i = 0; i < si0.length; i++) {
+            si0[i] = c * sim[i];
         }
-        double[] x = new double[n];
-        double cross = 0;
-        double market = 0;
-        for (int t = 0; t < len; t++) {
-            double y = w.row(t, x);
-            double ct = 0;
-            double ownSq = 0;
-            for (int i = 0; i < n; i++) {
-                ct += si0[i] * x[i];
-                ownSq += si0[i] * si0[i] * x[i] * x[i];
-            }
-            double rowCross = 0;
-            for (int i = 0; i < n; i++) {
-                rowCross += x[i] * x[i] * (ct - si0[i] * x[i]);
-            }
-            cross += y * rowCross;
-            market += y * y * (ct * ct - ownSq);
-        }
-        double targetTimesSample = 0;
-        for (int i = 0; i < n; i++) {
-            for (int j = 0; j < n; j++) {
-                if (i != j) {
-                    targetTimesSample += c * target[i * n + j] * c * s[i * n + j];
-                }
-            }
-        }
-        double rhoOff = 2.0 / s00 * cross / len - market / (s00 * s00 * len) - targetTimesSample;
-        return fromKappa(w, pi.total(), pi.diagonal() + rhoOff, gamma(w, target));
+        CentredRowSums rows = CentredRowSums.of(w, si0);
+        double normS = cc * sums.sampleSquares();
+        double pi = rows.squaredNorms() / len - normS;
+        double piDiagonal = rows.fourthPowers() / len - cc * sums.diagonalSquares();
+        double rhoOff = 2.0 / s00 * rows.cross() / len - rows.market() / (s00 * s00 * len)
+                - cc * sums.targetTimesSample();
+        return fromKappa(pi, piDiagonal + rhoOff, finiteDistance(cc * sums.distance()), normS, len);
     }
 
     /**
@@ -152,11 +135,16 @@ final class ShrinkageIntensity {
             double diff = c * (target[k] - s[k]);
             sum += diff * diff;
         }
-        if (!Double.isFinite(sum)) {
-            throw new ArithmeticException("distance between shrinkage target and sample matrix (" + sum
+        return finiteDistance(sum);
+    }
+
+    /** γ̂ itself, or an ArithmeticException when it is not finite. */
+    private static double finiteDistance(double gamma) {
+        if (!Double.isFinite(gamma)) {
+            throw new ArithmeticException("distance between shrinkage target and sample matrix (" + gamma
                     + ") must be finite");
         }
-        return sum;
+        return gamma;
     }
 
     /** True when γ̂ ≤ {@link #SAME_AS_SAMPLE} Σ_ij s_ij² (divisor-L moments throughout). */
@@ -224,15 +212,15 @@ final class ShrinkageIntensity {
             si0[i] = c * w.moments().marketCovariance()[i];
             slope[i] = si0[i] / s00;
         }
-        RowSums rows = RowSums.of(w, si0);
+        CentredRowSums rows = CentredRowSums.of(w, si0);
         double[] e = x.residuals(slope);
         double[] h = CentredColumns.gram(e, n, len);
         double normS = CentredColumns.normSquared(CentredColumns.withMarket(h, e, slope, x.market(), n, len), len)
                 / ((double) len * len);
-        double pi = rows.squaredNorms / len - normS;
-        double piDiagonal = rows.fourthPowers / len - rows.ownVarianceSquares(len);
-        double rhoOff = 2.0 / s00 * rows.cross / len - rows.market / (s00 * s00 * len)
-                - rows.targetTimesSample / (s00 * len);
+        double pi = rows.squaredNorms() / len - normS;
+        double piDiagonal = rows.fourthPowers() / len - rows.ownVarianceSquares(len);
+        double rhoOff = 2.0 / s00 * rows.cross() / len - rows.market() / (s00 * s00 * len)
+                - rows.targetTimesSample() / (s00 * len);
         double gamma = (CentredColumns.normSquared(h, len) - CentredColumns.ownNormsSquared(e, n, len))
                 / ((double) len * len);
         return fromKappa(pi, piDiagonal + rhoOff, gamma, normS, len);
@@ -245,74 +233,19 @@ final class ShrinkageIntensity {
     static double identityGram(CentredWindow w, CentredColumns x) {
         int n = w.assets();
         int len = w.length();
-        RowSums rows = RowSums.of(w, new double[n]);
+        CentredRowSums rows = CentredRowSums.of(w, new double[n]);
         double normS = CentredColumns.gramNormSquared(x.columns(), n, len) / ((double) len * len);
         double trace = 0;
         for (int i = 0; i < n; i++) {
-            trace += rows.ownSquares[i] / len;
+            trace += rows.ownSquares()[i] / len;
         }
         double gamma = Math.max(0.0, normS - trace * trace / n);
         if (sameAsSample(gamma, normS)) {
             return 0.0;
         }
-        double pi = rows.squaredNorms / len - normS;
+        double pi = rows.squaredNorms() / len - normS;
         double dSquared = gamma / n;
         double bBarSquared = Math.max(0.0, pi) / ((double) n * len);
         return Math.min(bBarSquared, dSquared) / dSquared;
-    }
-
-    /**
-     * The O(L n) sums over the window's rows that the Gram forms share, for weights a_i: with
-     * c_t = Σ_i a_i x̃_ti, the single-index terms Σ_t ỹ_t Σ_i x̃_ti²(c_t − a_i x̃_ti),
-     * Σ_t ỹ_t²(c_t² − Σ_i a_i² x̃_ti²) and Σ_t (c_t² − Σ_i a_i² x̃_ti²); and Σ_t (Σ_i x̃_ti²)²,
-     * Σ_t Σ_i x̃_ti⁴ and each Σ_t x̃_ti².
-     */
-    private static final class RowSums {
-        double cross;
-        double market;
-        double targetTimesSample;
-        double squaredNorms;
-        double fourthPowers;
-        double[] ownSquares;
-
-        static RowSums of(CentredWindow w, double[] a) {
-            int n = w.assets();
-            RowSums r = new RowSums();
-            r.ownSquares = new double[n];
-            double[] x = new double[n];
-            for (int t = 0; t < w.length(); t++) {
-                double y = w.row(t, x);
-                double ct = 0;
-                double ownSq = 0;
-                double norm = 0;
-                for (int i = 0; i < n; i++) {
-                    double sq = x[i] * x[i];
-                    ct += a[i] * x[i];
-                    ownSq += a[i] * a[i] * sq;
-                    norm += sq;
-                    r.fourthPowers += sq * sq;
-                    r.ownSquares[i] += sq;
-                }
-                double rowCross = 0;
-                for (int i = 0; i < n; i++) {
-                    rowCross += x[i] * x[i] * (ct - a[i] * x[i]);
-                }
-                r.cross += y * rowCross;
-                r.market += y * y * (ct * ct - ownSq);
-                r.targetTimesSample += ct * ct - ownSq;
-                r.squaredNorms += norm * norm;
-            }
-            return r;
-        }
-
-        /** Σ_i s_ii² with divisor-L variances from the rows. */
-        double ownVarianceSquares(int len) {
-            double sum = 0;
-            for (double v : ownSquares) {
-                double sii = v / len;
-                sum += sii * sii;
-            }
-            return sum;
-        }
     }
 }

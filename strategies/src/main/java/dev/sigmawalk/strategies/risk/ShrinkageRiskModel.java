@@ -49,13 +49,13 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
         CentredWindow centred = new CentredWindow(window);
         WindowMoments moments = centred.moments();
         int n = moments.assets();
+        if (target == ShrinkageTarget.SINGLE_INDEX) {
+            return singleIndexDense(centred);
+        }
         ProductVariances pi = ProductVariances.of(centred);
         double[] f;
         double delta;
-        if (target == ShrinkageTarget.SINGLE_INDEX) {
-            f = singleIndexTarget(moments);
-            delta = ShrinkageIntensity.singleIndex(centred, f, pi);
-        } else if (target == ShrinkageTarget.CONSTANT_CORRELATION) {
+        if (target == ShrinkageTarget.CONSTANT_CORRELATION) {
             ConstantCorrelationTarget cc = ConstantCorrelationTarget.of(moments.covariance(), n);
             f = cc.matrix();
             delta = ShrinkageIntensity.constantCorrelation(centred, cc.meanCorrelation(), f, pi);
@@ -64,6 +64,35 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
             delta = ShrinkageIntensity.identity(centred, f, pi);
         }
         return new DenseCovariance(n, combine(delta, f, moments.covariance()), OptionalDouble.of(delta));
+    }
+
+    /**
+     * Toward the single index without storing the target F: one read of half of S for the
+     * intensity's sums ({@link SingleIndexTargetSums}), one sweep of the rows, and one pass that
+     * writes δF + (1-δ)S with F_ij = s_mm β_i β_j (i ≠ j) and F_ii = S_ii made on the fly. The
+     * paper's target has the sample variances on its diagonal; taking them from S directly keeps
+     * rounding in d_i out of γ̂.
+     */
+    private static CovarianceEstimate singleIndexDense(CentredWindow centred) {
+        WindowMoments moments = centred.moments();
+        int n = moments.assets();
+        SingleIndexCovariance si = SingleIndexCovariance.fit(moments);
+        double[] s = moments.covariance();
+        double smm = si.marketVariance();
+        double[] beta = si.betas();
+        double delta = ShrinkageIntensity.singleIndex(centred, SingleIndexTargetSums.of(s, n, smm, beta));
+        double keep = 1.0 - delta;
+        double[] out = new double[n * n];
+        for (int i = 0; i < n; i++) {
+            int row = i * n;
+            double bi = beta[i];
+            for (int j = 0; j < n; j++) {
+                // δ (s_mm (β_i β_j)) rounds the same for (i, j) and (j, i), so Σ stays exactly symmetric.
+                out[row + j] = delta * (smm * (bi * beta[j])) + keep * s[row + j];
+            }
+            out[row + i] = delta * s[row + i] + keep * s[row + i];
+        }
+        return new DenseCovariance(n, out, OptionalDouble.of(delta));
     }
 
     /**
@@ -82,19 +111,6 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
     @Override
     public String label() {
         return "shrinkage to " + target.spelling();
-    }
-
-    /**
-     * Σ_SI off the diagonal and S_ii on it: the paper's target has the sample variances on its
-     * diagonal, and taking them from S directly keeps rounding in d_i out of γ̂.
-     */
-    private static double[] singleIndexTarget(WindowMoments moments) {
-        double[] f = SingleIndexCovariance.fit(moments).dense().clone();
-        int n = moments.assets();
-        for (int i = 0; i < n; i++) {
-            f[i * n + i] = moments.covariance(i, i);
-        }
-        return f;
     }
 
     /** (tr S / n) I. */

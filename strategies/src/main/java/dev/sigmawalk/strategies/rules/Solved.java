@@ -105,19 +105,13 @@ final class Solved {
         return unusableEntry(rule, input);
     }
 
-    private static boolean finite(double[] values) {
-        for (double v : values) {
-            if (!Double.isFinite(v)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
     /** NotFormed naming the first non-finite entry of the dense Σ; null when there is none. */
     private static RuleOutcome unusableEntry(String rule, RuleInput input) {
         int n = input.size();
         double[] sigma = input.covariance().dense();
+        if (finite(sigma)) {
+            return null;
+        }
         for (int k = 0; k < sigma.length; k++) {
             if (!Double.isFinite(sigma[k])) {
                 return new RuleOutcome.NotFormed(rule + ": covariance entry (" + input.assets().get(k / n) + ", "
@@ -125,5 +119,28 @@ final class Solved {
             }
         }
         return null;
+    }
+
+    /**
+     * v − v is +0 for a finite v and NaN for ±∞ and NaN, so the sum of the differences is 0
+     * exactly when every entry is finite: no branch per entry, and four partial sums so that the
+     * additions pipeline. O(n²) for a dense Σ all the same, at a fraction of a test per entry.
+     */
+    private static boolean finite(double[] values) {
+        double z0 = 0;
+        double z1 = 0;
+        double z2 = 0;
+        double z3 = 0;
+        int k = 0;
+        for (; k + 4 <= values.length; k += 4) {
+            z0 += values[k] - values[k];
+            z1 += values[k + 1] - values[k + 1];
+            z2 += values[k + 2] - values[k + 2];
+            z3 += values[k + 3] - values[k + 3];
+        }
+        for (; k < values.length; k++) {
+            z0 += values[k] - values[k];
+        }
+        return (z0 + z1) + (z2 + z3) == 0;
     }
 }

@@ -118,6 +118,25 @@ class MinVarianceRuleTest {
         assertTrue(failed.reason().contains("(P, Q) is NaN"), failed.reason());
     }
 
+    /**
+     * An infinite or NaN entry anywhere in a 3×3 Σ (the four-at-a-time check and its remainder)
+     * is named by its position: the solvers take finite matrices only (IEEE 754: ∞ − ∞ is NaN).
+     */
+    @Test
+    void nonFiniteEntryAtAnyPosition_isNotFormedNamingIt() {
+        List<String> names = List.of("P", "Q", "R");
+        double[] bad = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NaN};
+        for (int k = 0; k < 9; k++) {
+            double[] sigma = {0.04, 0.01, 0.0, 0.01, 0.05, 0.01, 0.0, 0.01, 0.06};
+            sigma[k] = bad[k % 3];
+            RuleOutcome out = rule.apply(new RuleInput(names, TestCovariances.dense(sigma), null, Optional.empty()),
+                    new WarmStart());
+            RuleOutcome.NotFormed failed = assertInstanceOf(RuleOutcome.NotFormed.class, out, "entry " + k);
+            String entry = "(" + names.get(k / 3) + ", " + names.get(k % 3) + ") is " + bad[k % 3];
+            assertTrue(failed.reason().contains(entry), failed.reason());
+        }
+    }
+
     /** A covariance whose (0, 1) and (1, 0) entries differ is refused by the solver: NotFormed, not an exception. */
     @Test
     void asymmetricCovariance_isNotFormedNamingSymmetry() {
