@@ -17,9 +17,24 @@ import java.util.Arrays;
  * Σx x' − L x̄ x̄' does when means are large against standard deviations.
  *
  * <p>Rounding error grows with each move, so the sums are rebuilt from the window's rows (with a
- * fresh shift) after {@code refreshEvery} moves, when a move is longer than half the window, and
- * when a column's mean has wandered so far from its shift that s_i²/L exceeds half of D_ii (the
- * point where the subtraction starts to lose more than one bit).
+ * fresh shift) once the rows slid since the last rebuild would exceed a budget of R rows (by
+ * default R = L), when a move is longer than half the window (then the rebuild's L rows cost less
+ * than the move's 2·k), and when a column's mean has wandered so far from its shift that s_i²/L
+ * exceeds half of D_ii (the point where the subtraction starts to lose more than one bit).
+ *
+ * <p>Why R = L is enough: every update of D_ij is one fused multiply-add (see
+ * {@link CrossProducts}), which adds a rounding error of at most u·|result| with u = 2⁻⁵³. Let
+ * B_ij = Σ_t |d_ti d_tj| over the window. A fresh build sums L terms, error at most about
+ * L·u·B_ij (the recursive-summation bound, Higham, Accuracy and Stability of Numerical
+ * Algorithms, 2nd ed., §4.2, from memory). A move of k rows makes 2k updates whose partial sums
+ * stay below B_ij plus the move's own rows, about (1 + 2k/L)·B_ij for rows of one scale, so R slid
+ * rows add at most 2R·u·(1 + 2k/L)·B_ij. With R ≤ L and 2k ≤ L the sums carry at most about
+ * three (never more than five) times the bound of a fresh build, two or three bits of 53; the
+ * shift keeps B_ii of the order of D_ii, so the bound is relative to the entry's own size.
+ * Rebuilding costs L rows of kernel work against the 2R rows of the slides before it, at most half
+ * their cost, where a rebuild every 20 moves of 21 rows cost 2.4 times the slides at L = 2,000.
+ * The rule counts rows only, so the rebuild points, and with them every bit of the sums, depend
+ * on the schedule alone, not on threads or timing.
  *
  * <p>A missing return counts as 0 in the sums. An asset is only handed to a model when it has a
  * return in every row of the window, and then its sums are exactly those of its returns.
@@ -28,39 +43,49 @@ import java.util.Arrays;
  * moments. Not thread-safe: one instance belongs to one walk-forward thread.
  */
 public final class RunningMoments {
-    /** The rebuild interval the walk-forward loop uses. */
-    public static final int DEFAULT_REFRESH_EVERY = 20;
     /** Rebuild when s_i²/L exceeds this fraction of D_ii (see the class comment). */
     private static final double CANCELLATION_LIMIT = 0.5;
-    /** Side of the square tiles in which the snapshot mirrors its upper triangle. */
-    private static final int MIRROR_TILE = 64;
+    /** Side of the square tiles in which the snapshot fills both triangles. */
+    private static final int SNAPSHOT_TILE = 64;
 
     private final ShiftedRows rows;
     private final int length;
-    private final int refreshEvery;
+    private final int refreshRows;
     private final int width;
     private double[] shift;
     private final double[] sum;
     private final double[] cross;
     private int endRow = -1;
-    private int movesSinceRefresh;
+    private int rowsSinceRefresh;
     private int refreshes;
+
+    /**
+     * Sums rebuilt once the rows slid since the last rebuild would exceed the window length (the
+     * budget the class comment justifies).
+     *
+     * @param panel the returns
+     * @param length L, the window length (≥ 2)
+     */
+    public RunningMoments(ReturnPanel panel, int length) {
+        this(panel, length, length);
+    }
 
     /**
      * @param panel the returns
      * @param length L, the window length (≥ 2)
-     * @param refreshEvery rebuild the sums from the rows after this many incremental moves (≥ 1)
+     * @param refreshRows rebuild the sums from the rows instead of a move that would take the rows
+     *     slid since the last rebuild above this many (≥ 1)
      */
-    public RunningMoments(ReturnPanel panel, int length, int refreshEvery) {
+    public RunningMoments(ReturnPanel panel, int length, int refreshRows) {
         if (!(length >= 2)) {
             throw new IllegalArgumentException("window length (" + length + ") must be >= 2");
         }
-        if (!(refreshEvery >= 1)) {
-            throw new IllegalArgumentException("refreshEvery (" + refreshEvery + ") must be >= 1");
+        if (!(refreshRows >= 1)) {
+            throw new IllegalArgumentException("refreshRows (" + refreshRows + ") must be >= 1");
         }
         this.rows = new ShiftedRows(panel);
         this.length = length;
-        this.refreshEvery = refreshEvery;
+        this.refreshRows = refreshRows;
         this.width = rows.width();
         this.sum = new double[width];
         this.cross = new double[width * width];
@@ -99,7 +124,7 @@ public final class RunningMoments {
             return;
         }
         int step = tau - endRow;
-        if (endRow < 0 || movesSinceRefresh >= refreshEvery || 2 * step > length) {
+        if (endRow < 0 || step > refreshRows - rowsSinceRefresh || 2 * step > length) {
             refresh(tau);
         } else {
             slide(tau, step);
@@ -120,7 +145,7 @@ public final class RunningMoments {
         Arrays.fill(cross, 0.0);
         CrossProducts.accumulate(d, d, length, width, cross);
         endRow = tau;
-        movesSinceRefresh = 0;
+        rowsSinceRefresh = 0;
         refreshes++;
     }
 
@@ -140,7 +165,7 @@ public final class RunningMoments {
         }
         CrossProducts.accumulate(left, right, 2 * step, width, cross);
         endRow = tau;
-        movesSinceRefresh++;
+        rowsSinceRefresh += step;
     }
 
     private boolean cancelling() {
@@ -153,16 +178,29 @@ public final class RunningMoments {
         return false;
     }
 
-    /** Copies the upper triangle onto the lower one in square tiles, so the column writes stay in the cache. */
-    static void mirrorUpper(double[] s, int n) {
-        for (int i0 = 0; i0 < n; i0 += MIRROR_TILE) {
-            int i1 = Math.min(n, i0 + MIRROR_TILE);
-            for (int j0 = i0; j0 < n; j0 += MIRROR_TILE) {
-                int j1 = Math.min(n, j0 + MIRROR_TILE);
-                for (int i = i0; i < i1; i++) {
-                    int row = i * n;
-                    for (int j = Math.max(j0, i + 1); j < j1; j++) {
-                        s[j * n + i] = s[row + j];
+    /**
+     * S_ab = (D_ij − s_i s_j / L)/(L − 1) for the panel columns i = columns[a], j = columns[b],
+     * written to both triangles in one pass over square tiles: each upper entry is computed once
+     * and stored at (a, b) and (b, a), and a tile's column writes stay in the cache (a separate
+     * mirror pass, which read the upper triangle a second time, cost a third more at n = 2,000).
+     */
+    private void fillCovariance(int[] columns, double[] s) {
+        double len = length;
+        double div = length - 1.0;
+        int n = columns.length;
+        for (int a0 = 0; a0 < n; a0 += SNAPSHOT_TILE) {
+            int a1 = Math.min(n, a0 + SNAPSHOT_TILE);
+            for (int b0 = a0; b0 < n; b0 += SNAPSHOT_TILE) {
+                int b1 = Math.min(n, b0 + SNAPSHOT_TILE);
+                for (int a = a0; a < a1; a++) {
+                    int rowBase = columns[a] * width;
+                    double si = sum[columns[a]];
+                    int row = a * n;
+                    for (int b = Math.max(b0, a); b < b1; b++) {
+                        int cj = columns[b];
+                        double value = (cross[rowBase + cj] - si * sum[cj] / len) / div;
+                        s[row + b] = value;
+                        s[b * n + a] = value;
                     }
                 }
             }
@@ -192,21 +230,18 @@ public final class RunningMoments {
         double div = length - 1.0;
         double[] mean = new double[n];
         double[] sim = new double[n];
-        double[] s = new double[n * n];
         double sm = sum[mk];
         for (int a = 0; a < n; a++) {
             int ci = columns[a];
             double si = sum[ci];
             mean[a] = shift[ci] + si / len;
             sim[a] = (cross[ci * width + mk] - si * sm / len) / div;
-            int rowBase = ci * width;
-            for (int b = a; b < n; b++) {
-                int cj = columns[b];
-                s[a * n + b] = (cross[rowBase + cj] - si * sum[cj] / len) / div;
-            }
+        }
+        double[] s = new double[n * n];
+        fillCovariance(columns, s);
+        for (int a = 0; a < n; a++) {
             s[a * n + a] = Math.max(0.0, s[a * n + a]);
         }
-        mirrorUpper(s, n);
         double smm = Math.max(0.0, (cross[mk * width + mk] - sm * sm / len) / div);
         return new WindowMoments(n, length, mean, shift[mk] + sm / len, smm, sim, s);
     }

@@ -144,7 +144,7 @@ public final class WalkForward<T> {
         // consumer of this window length needs the dense S (DenseMomentPlan).
         DenseMomentPlan plan = new DenseMomentPlan(strategies, probe);
         RunningMoments running = plan.anyWindowNeeds(builder, schedule, length)
-                ? new RunningMoments(panel, length, RunningMoments.DEFAULT_REFRESH_EVERY) : null;
+                ? new RunningMoments(panel, length) : null;
         int firstHeld = schedule.firstRebalance() + 1;
         for (int j = 0; j < schedule.count(); j++) {
             int tau = schedule.rebalanceRow(j);

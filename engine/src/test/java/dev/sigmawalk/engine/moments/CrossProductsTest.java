@@ -30,6 +30,7 @@ class CrossProductsTest {
     /**
      * Against the definition C_ij = Σ_t U_ti V_tj written as a plain loop, for shapes that cross
      * the tile edges (n above {@value CrossProducts#TILE_COLUMNS}, rows not a multiple of four).
+     * The fused order keeps every entry within a few units of rounding of the plain sum.
      */
     @Test
     void shapesAcrossTileEdges_matchPlainDefinition() {
@@ -51,6 +52,40 @@ class CrossProductsTest {
                         scale += Math.abs(u[t * n + i] * v[t * n + j]);
                     }
                     assertEquals(expected, c[i * n + j], RELATIVE * scale,
+                            "C(" + i + "," + j + ") for " + rows + "x" + n);
+                }
+            }
+        }
+    }
+
+    /**
+     * The documented summation order, bit for bit: every entry equals the plain triple loop
+     * c ← Math.fma(U_ti, V_tj, c) over t in order (IEEE 754 fusedMultiplyAdd, one rounding a term),
+     * starting from a non-zero C, for shapes on both sides of the tile edges
+     * ({@value CrossProducts#TILE_ROWS} rows, {@value CrossProducts#TILE_COLUMNS} columns) and
+     * every row count modulo four. So the tiling can never change a result.
+     */
+    @Test
+    void anyShape_equalsPlainFusedLoopBitForBit() {
+        int[][] shapes = {{1, 1}, {2, 3}, {3, 64}, {4, 65}, {5, 255}, {6, 257}, {7, 300}, {42, 70}, {11, 513}};
+        SplittableRandom rng = new SplittableRandom(2_718_281L);
+        for (int[] shape : shapes) {
+            int rows = shape[0];
+            int n = shape[1];
+            double[] u = random(rng, rows * n);
+            double[] v = random(rng, rows * n);
+            double[] start = random(rng, n * n);
+            double[] c = start.clone();
+            CrossProducts.accumulate(u, v, rows, n, c);
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    double expected = start[i * n + j];
+                    if (j >= i) {
+                        for (int t = 0; t < rows; t++) {
+                            expected = Math.fma(u[t * n + i], v[t * n + j], expected);
+                        }
+                    }
+                    assertEquals(Double.doubleToRawLongBits(expected), Double.doubleToRawLongBits(c[i * n + j]),
                             "C(" + i + "," + j + ") for " + rows + "x" + n);
                 }
             }

@@ -22,18 +22,19 @@ class RunningMomentsTest {
 
     /**
      * Long run, 470 moves of three rows over a 1,500-row panel of 40 assets with a late listing,
-     * a gap and a delisting, window 120, rebuilt every 20 moves: at every move the moments of the
+     * a gap and a delisting, window 120, rebuilt once 120 rows have slid (the default budget): at
+     * every move the moments of the
      * eligible assets match the Method §3 definitions computed in two passes (means, then
      * centred products) by a plain loop in this test.
      */
     @Test
     void hundredsOfMoves_matchTwoPassDefinition() {
         ReturnPanel panel = panel(1500, 40, 0.0004, 11L);
-        assertMovesAgree(panel, 120, 3, RunningMoments.DEFAULT_REFRESH_EVERY, 400);
+        assertMovesAgree(panel, 120, 3, 120, 400);
     }
 
     /**
-     * Without the periodic rebuild (every 10^9 moves) the shifted sums still agree over hundreds
+     * Without the periodic rebuild (a budget of 10^9 rows) the shifted sums still agree over hundreds
      * of moves: the shift keeps the subtraction from cancelling, so drift stays near machine
      * precision.
      */
@@ -50,7 +51,7 @@ class RunningMomentsTest {
     @Test
     void largeLevelSmallSpread_matchesTwoPassDefinition() {
         ReturnPanel panel = levelPanel(900, 12, 1.5, 0.001, 5L);
-        assertMovesAgree(panel, 60, 5, RunningMoments.DEFAULT_REFRESH_EVERY, 150);
+        assertMovesAgree(panel, 60, 5, 60, 150);
     }
 
     /**
@@ -76,7 +77,7 @@ class RunningMomentsTest {
             m[t] = t < before ? 0.01 * rng.nextGaussian() : window[t - before][1];
         }
         ReturnPanel panel = new ReturnPanel(days(rows), ids(n), r, m, new double[rows], "index", 252);
-        RunningMoments running = new RunningMoments(panel, window.length, RunningMoments.DEFAULT_REFRESH_EVERY);
+        RunningMoments running = new RunningMoments(panel, window.length);
         for (int tau = window.length - 1; tau < rows; tau += 7) {
             running.moveTo(tau);
         }
@@ -95,7 +96,7 @@ class RunningMomentsTest {
     }
 
     @Test
-    void rebuild_happensAfterTheConfiguredNumberOfMoves() {
+    void rebuild_happensWhenTheSlidRowsWouldExceedTheBudget() {
         ReturnPanel panel = panel(200, 5, 0.0, 3L);
         RunningMoments running = new RunningMoments(panel, 30, 20);
         running.moveTo(29);
@@ -104,9 +105,61 @@ class RunningMomentsTest {
             running.moveTo(tau);
         }
         // 45 one-row moves: 20 slides, a rebuild, 20 slides, a rebuild, 3 slides.
-        assertEquals(3, running.refreshes(), "rebuilds after 45 moves");
+        assertEquals(3, running.refreshes(), "rebuilds after 20 slid rows");
         running.moveTo(74 + 16);
         assertEquals(4, running.refreshes(), "a move over more than half the window rebuilds");
+    }
+
+    /**
+     * The default budget is the window length: with L = 30 and moves of 7 rows, four moves slide
+     * 28 rows and the fifth, which would take the count to 35, rebuilds instead.
+     */
+    @Test
+    void defaultBudget_isTheWindowLength() {
+        ReturnPanel panel = panel(200, 5, 0.0, 4L);
+        RunningMoments running = new RunningMoments(panel, 30);
+        running.moveTo(29);
+        for (int move = 1; move <= 4; move++) {
+            running.moveTo(29 + 7 * move);
+        }
+        assertEquals(1, running.refreshes(), "28 slid rows stay within the budget of 30");
+        running.moveTo(29 + 7 * 5);
+        assertEquals(2, running.refreshes(), "35 rows would exceed it");
+        for (int move = 6; move <= 9; move++) {
+            running.moveTo(29 + 7 * move);
+        }
+        assertEquals(2, running.refreshes(), "the count starts again at the rebuild");
+    }
+
+    /**
+     * The same moves give the same sums bit for bit whatever else happens in the process: two
+     * instances over one panel, one of them interleaved with an unrelated third, agree exactly at
+     * every move (the rebuild points depend on the schedule alone).
+     */
+    @Test
+    void sameSchedule_givesBitIdenticalMoments() {
+        ReturnPanel panel = panel(900, 30, 0.0004, 21L);
+        RunningMoments first = new RunningMoments(panel, 100);
+        RunningMoments second = new RunningMoments(panel, 100);
+        RunningMoments other = new RunningMoments(panel, 250);
+        int[] cols = new int[12];
+        for (int a = 0; a < cols.length; a++) {
+            cols[a] = 4 + 2 * a;
+        }
+        for (int tau = 249; tau < panel.rows(); tau += 9) {
+            first.moveTo(tau);
+            other.moveTo(tau);
+            second.moveTo(tau);
+            WindowMoments a = first.snapshot(cols);
+            WindowMoments b = second.snapshot(cols);
+            for (int i = 0; i < cols.length; i++) {
+                assertEquals(Double.doubleToRawLongBits(a.mean()[i]), Double.doubleToRawLongBits(b.mean()[i]), "mean");
+                for (int j = 0; j < cols.length; j++) {
+                    assertEquals(Double.doubleToRawLongBits(a.covariance(i, j)),
+                            Double.doubleToRawLongBits(b.covariance(i, j)), "S at τ = " + tau);
+                }
+            }
+        }
     }
 
     @Test
@@ -139,8 +192,8 @@ class RunningMomentsTest {
         assertTrue(e.getMessage().contains("ascending"), e.getMessage());
     }
 
-    private static void assertMovesAgree(ReturnPanel panel, int length, int step, int refreshEvery, int minMoves) {
-        RunningMoments running = new RunningMoments(panel, length, refreshEvery);
+    private static void assertMovesAgree(ReturnPanel panel, int length, int step, int refreshRows, int minMoves) {
+        RunningMoments running = new RunningMoments(panel, length, refreshRows);
         int moves = 0;
         for (int tau = length - 1; tau < panel.rows(); tau += step) {
             running.moveTo(tau);

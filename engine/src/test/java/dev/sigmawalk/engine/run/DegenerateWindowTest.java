@@ -83,7 +83,7 @@ class DegenerateWindowTest {
     void constantMarket_givesExactlyZeroMarketMoments_alsoFromRunningSums() {
         ReturnPanel panel = withRows(TestPanels.random(ROWS, ASSETS, 7), 0, 20, 45, 0.004, true);
         WindowBuilder builder = new WindowBuilder(panel);
-        RunningMoments running = new RunningMoments(panel, 12, RunningMoments.DEFAULT_REFRESH_EVERY);
+        RunningMoments running = new RunningMoments(panel, 12);
         for (int tau = 11; tau < ROWS; tau++) {
             EstimationWindow w = builder.build(tau, 12, running);
             boolean flat = tau >= 31 && tau <= 45;

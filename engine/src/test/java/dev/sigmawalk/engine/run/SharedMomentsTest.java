@@ -54,7 +54,7 @@ class SharedMomentsTest {
     void staleWindow_isRefused() {
         ReturnPanel panel = TestPanels.random(80, 4, 2);
         WindowBuilder builder = new WindowBuilder(panel);
-        RunningMoments running = new RunningMoments(panel, 24, RunningMoments.DEFAULT_REFRESH_EVERY);
+        RunningMoments running = new RunningMoments(panel, 24);
         EstimationWindow early = builder.build(40, 24, running);
         EstimationWindow late = builder.build(43, 24, running);
         late.moments();
@@ -67,7 +67,7 @@ class SharedMomentsTest {
     void runningAndPlainWindows_agree() {
         ReturnPanel panel = gappy(TestPanels.random(90, 6, 8));
         WindowBuilder builder = new WindowBuilder(panel);
-        RunningMoments running = new RunningMoments(panel, 30, RunningMoments.DEFAULT_REFRESH_EVERY);
+        RunningMoments running = new RunningMoments(panel, 30);
         for (int tau = 29; tau < panel.rows(); tau += 4) {
             EstimationWindow viaSums = builder.build(tau, 30, running);
             EstimationWindow plain = builder.build(tau, 30);

@@ -65,4 +65,36 @@ class QuadraticProblemTest {
             }
         }
     }
+
+    /**
+     * A matrix that is not positive semi-definite, whose largest entry (10^6) is off the diagonal
+     * (at most 2): an asymmetry of 10^-7 is within 10^-12 of the largest entry and is accepted,
+     * though it is far beyond 10^-12 of the largest diagonal entry; 10^-5 is not and is named.
+     */
+    @Test
+    void largestEntryOffTheDiagonal_setsTheTolerance() {
+        double[] q = symmetric(3);
+        q[5 * N + 120] = 1e6;
+        q[120 * N + 5] = 1e6 + 1e-7;
+        assertDoesNotThrow(() -> problem(q));
+        q[120 * N + 5] = 1e6 + 1e-5;
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> problem(q));
+        assertTrue(e.getMessage().contains("not symmetric at (5, 120)"), e.getMessage());
+    }
+
+    /** Seeded loop: a NaN or an infinity on the diagonal is named too. */
+    @Test
+    void badDiagonalEntry_isNamed() {
+        SplittableRandom random = new SplittableRandom(11);
+        for (int trial = 0; trial < 10; trial++) {
+            double[] q = symmetric(200 + trial);
+            int i = random.nextInt(N);
+            double bad = trial % 2 == 0 ? Double.NaN : Double.POSITIVE_INFINITY;
+            q[i * N + i] = bad;
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> problem(q),
+                    "trial " + trial);
+            assertTrue(e.getMessage().contains("quadratic[" + (i * N + i) + "] (" + bad + ") must be finite"),
+                    "trial " + trial + ": " + e.getMessage());
+        }
+    }
 }
