@@ -8,13 +8,15 @@ import dev.sigmawalk.engine.evidence.HolmAdjustment;
 import dev.sigmawalk.engine.evidence.JobsonKorkieMemmel;
 import dev.sigmawalk.engine.evidence.JobsonKorkieTest;
 import dev.sigmawalk.engine.evidence.RomanoWolfStepdown;
+import dev.sigmawalk.engine.evidence.SharedOut;
 import dev.sigmawalk.engine.measures.SeriesStats;
-import dev.sigmawalk.engine.run.PathResult;
 import dev.sigmawalk.engine.run.RunResult;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.Callable;
+import java.util.function.Supplier;
 
 /**
  * Runs the difference tests of Method §9 for every strategy against its baseline at every
@@ -42,25 +44,71 @@ public final class Comparisons {
      */
     public static List<Comparison> of(RunResult<?> run, Map<String, String> baselines, List<Integer> windows,
                                       DifferenceTests tests, List<ScannedPair> scanned) {
-        List<Comparison> out = new ArrayList<>();
+        return of(run, baselines, windows, tests, scanned, 1);
+    }
+
+    /**
+     * The same comparisons, their bootstrap tests shared out over {@code threads} threads: each
+     * test draws from its own seeded generator and the family draws all its block starts first,
+     * so every value is bit for bit that of one thread.
+     *
+     * @param threads >= 1
+     */
+    public static List<Comparison> of(RunResult<?> run, Map<String, String> baselines, List<Integer> windows,
+                                      DifferenceTests tests, List<ScannedPair> scanned, int threads) {
+        // Which pairs are compared, and which of them Holm adjusts together, depends on the
+        // names alone: the groups are fixed first, then every test of every pair runs at once.
+        List<List<Pair>> groups = new ArrayList<>();
+        List<Pair> all = new ArrayList<>();
         for (Map.Entry<String, String> e : baselines.entrySet()) {
-            List<Comparison> pair = new ArrayList<>();
+            List<Pair> group = new ArrayList<>();
             for (int w : windows) {
-                pair.add(compare(run, e.getKey(), e.getValue(), w, tests));
+                group.add(new Pair(e.getKey(), e.getValue(), w));
             }
-            out.addAll(withHolm(pair));
+            groups.add(group);
+            all.addAll(group);
         }
         for (ScannedPair s : scanned) {
-            boolean covered = out.stream().anyMatch(c -> s.sameAs(c.strategy(), c.baseline(), c.window()));
+            boolean covered = all.stream().anyMatch(c -> s.sameAs(c.strategy(), c.baseline(), c.window()));
             if (!covered) {
-                out.addAll(withHolm(List.of(compare(run, s.strategy(), s.other(), s.window(), tests))));
+                Pair p = new Pair(s.strategy(), s.other(), s.window());
+                groups.add(List.of(p));
+                all.add(p);
             }
         }
-        return withFamily(run, out, tests);
+        List<Callable<Attempt<DifferenceTest>>> bootstrapped = new ArrayList<>(2 * all.size());
+        for (Pair p : all) {
+            double[] netA = run.path(p.strategy(), p.window()).net();
+            double[] netB = run.path(p.baseline(), p.window()).net();
+            bootstrapped.add(() -> attempt(() -> tests.sharpeRatio(SeriesStats.minus(netA, run.riskFree()),
+                    SeriesStats.minus(netB, run.riskFree())), "Sharpe ratio"));
+            bootstrapped.add(() -> attempt(() -> tests.variance(netA, netB), "variance"));
+        }
+        List<Attempt<DifferenceTest>> done = SharedOut.all(bootstrapped, threads, "running the difference tests");
+        List<Comparison> out = new ArrayList<>(all.size());
+        int k = 0;
+        for (List<Pair> group : groups) {
+            List<Comparison> pairs = new ArrayList<>(group.size());
+            for (Pair p : group) {
+                pairs.add(compare(run, p, done.get(k), done.get(k + 1)));
+                k += 2;
+            }
+            out.addAll(withHolm(pairs));
+        }
+        return withFamily(run, out, tests, threads);
+    }
+
+    /** A strategy, the one it is compared with, and the window of both. */
+    private record Pair(String strategy, String baseline, int window) {
+    }
+
+    /** A test's result, or why it could not run. */
+    private record Attempt<T>(Optional<T> result, Optional<String> problem) {
     }
 
     /** The Romano-Wolf p-values of every Sharpe and variance test that ran, over them all at once. */
-    private static List<Comparison> withFamily(RunResult<?> run, List<Comparison> all, DifferenceTests tests) {
+    private static List<Comparison> withFamily(RunResult<?> run, List<Comparison> all, DifferenceTests tests,
+                                               int threads) {
         List<FamilyContrast> family = new ArrayList<>();
         for (Comparison c : all) {
             double[] netA = run.path(c.strategy(), c.window()).net();
@@ -69,7 +117,8 @@ public final class Comparisons {
                     SeriesStats.minus(netA, run.riskFree()), SeriesStats.minus(netB, run.riskFree()), t)));
             c.variance().ifPresent(t -> family.add(new FamilyContrast(DifferenceMeasure.VARIANCE, netA, netB, t)));
         }
-        double[] adjusted = RomanoWolfStepdown.adjust(family, tests.evidence().resamples(), tests.evidence().seed());
+        double[] adjusted = RomanoWolfStepdown.adjust(family, tests.evidence().resamples(), tests.evidence().seed(),
+                threads);
         List<Comparison> out = new ArrayList<>(all.size());
         int k = 0;
         for (Comparison c : all) {
@@ -80,27 +129,25 @@ public final class Comparisons {
         return out;
     }
 
-    private static Comparison compare(RunResult<?> run, String strategy, String baseline, int window,
-                                      DifferenceTests tests) {
-        PathResult a = run.path(strategy, window);
-        PathResult b = run.path(baseline, window);
-        double[] excessA = SeriesStats.minus(a.net(), run.riskFree());
-        double[] excessB = SeriesStats.minus(b.net(), run.riskFree());
+    /** The pair's comparison from its two bootstrap tests, with the Jobson-Korkie test beside them. */
+    private static Comparison compare(RunResult<?> run, Pair p, Attempt<DifferenceTest> sharpe,
+                                      Attempt<DifferenceTest> variance) {
+        double[] excessA = SeriesStats.minus(run.path(p.strategy(), p.window()).net(), run.riskFree());
+        double[] excessB = SeriesStats.minus(run.path(p.baseline(), p.window()).net(), run.riskFree());
+        Attempt<JobsonKorkieTest> jk = attempt(() -> JobsonKorkieMemmel.test(excessA, excessB), "Jobson-Korkie");
         List<String> problems = new ArrayList<>();
-        Optional<DifferenceTest> sharpe = attempt(() -> tests.sharpeRatio(excessA, excessB), "Sharpe ratio", problems);
-        Optional<DifferenceTest> variance = attempt(() -> tests.variance(a.net(), b.net()), "variance", problems);
-        Optional<JobsonKorkieTest> jk = attempt(() -> JobsonKorkieMemmel.test(excessA, excessB), "Jobson-Korkie",
-                problems);
-        return new Comparison(strategy, baseline, window, sharpe, variance, jk, Double.NaN, Double.NaN,
-                problems.isEmpty() ? Optional.empty() : Optional.of(String.join("; ", problems)));
+        sharpe.problem().ifPresent(problems::add);
+        variance.problem().ifPresent(problems::add);
+        jk.problem().ifPresent(problems::add);
+        return new Comparison(p.strategy(), p.baseline(), p.window(), sharpe.result(), variance.result(), jk.result(),
+                Double.NaN, Double.NaN, problems.isEmpty() ? Optional.empty() : Optional.of(String.join("; ", problems)));
     }
 
-    private static <T> Optional<T> attempt(java.util.function.Supplier<T> test, String what, List<String> problems) {
+    private static <T> Attempt<T> attempt(Supplier<T> test, String what) {
         try {
-            return Optional.of(test.get());
+            return new Attempt<>(Optional.of(test.get()), Optional.empty());
         } catch (IllegalArgumentException ex) {
-            problems.add(what + " test not run: " + ex.getMessage());
-            return Optional.empty();
+            return new Attempt<>(Optional.empty(), Optional.of(what + " test not run: " + ex.getMessage()));
         }
     }
 

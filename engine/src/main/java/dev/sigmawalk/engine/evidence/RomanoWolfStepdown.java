@@ -6,9 +6,6 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.SplittableRandom;
 import java.util.concurrent.Callable;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.Future;
 
 /**
  * Family-wise adjusted p-values for a family of two-sided difference tests, by the studentised
@@ -108,36 +105,16 @@ public final class RomanoWolfStepdown {
         double[][] resampled = new double[resamples][];
         int shared = block;
         int parts = Math.min(threads, resamples);
-        if (parts == 1) {
-            resampleRange(family, distinct, firstOf, secondOf, starts, block, drawn, 0, resamples, resampled);
-        } else {
-            List<Callable<Void>> tasks = new ArrayList<>(parts);
-            for (int k = 0; k < parts; k++) {
-                int from = (int) ((long) resamples * k / parts);
-                int to = (int) ((long) resamples * (k + 1) / parts);
-                tasks.add(() -> {
-                    resampleRange(family, distinct, firstOf, secondOf, starts, shared, drawn, from, to, resampled);
-                    return null;
-                });
-            }
-            ForkJoinPool pool = new ForkJoinPool(parts);
-            try {
-                for (Future<Void> f : pool.invokeAll(tasks)) {
-                    f.get();
-                }
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while resampling the family", e);
-            } catch (ExecutionException e) {
-                Throwable cause = e.getCause();
-                if (cause instanceof RuntimeException r) {
-                    throw r;
-                }
-                throw new IllegalStateException(cause);
-            } finally {
-                pool.shutdownNow();
-            }
+        List<Callable<Void>> tasks = new ArrayList<>(parts);
+        for (int k = 0; k < parts; k++) {
+            int from = (int) ((long) resamples * k / parts);
+            int to = (int) ((long) resamples * (k + 1) / parts);
+            tasks.add(() -> {
+                resampleRange(family, distinct, firstOf, secondOf, starts, shared, drawn, from, to, resampled);
+                return null;
+            });
         }
+        SharedOut.all(tasks, parts, "resampling the family");
         return fromResamples(observed, resampled);
     }
 

@@ -22,16 +22,30 @@ public final class SeriesStats {
 
     /** Sample standard deviation, divisor N−1; requires at least two values. */
     public static double sd(double[] x) {
-        if (x.length < 2) {
-            throw new IllegalArgumentException("standard deviation needs at least 2 values, got " + x.length);
+        return sd(x, 0, x.length);
+    }
+
+    /**
+     * Sample standard deviation of {@code x[from..to)}, divisor N−1, with the sums taken in index
+     * order exactly as {@link #sd(double[])} takes them over a copy of the range (the same value
+     * bit for bit, without the copy); requires at least two values.
+     */
+    public static double sd(double[] x, int from, int to) {
+        int n = to - from;
+        if (n < 2) {
+            throw new IllegalArgumentException("standard deviation needs at least 2 values, got " + n);
         }
-        double m = mean(x);
+        double sum = 0;
+        for (int k = from; k < to; k++) {
+            sum += x[k];
+        }
+        double m = sum / n;
         double s = 0;
-        for (double v : x) {
-            double d = v - m;
+        for (int k = from; k < to; k++) {
+            double d = x[k] - m;
             s += d * d;
         }
-        return Math.sqrt(s / (x.length - 1));
+        return Math.sqrt(s / (n - 1));
     }
 
     /** a − b element by element. */

@@ -62,10 +62,13 @@ public final class Runs {
         return out;
     }
 
-    /** Every strategy against its baseline, for every window (Method §9). */
-    public static List<Comparison> comparisons(dev.sigmawalk.engine.study.Study study, RunResult<?> run) {
+    /**
+     * Every strategy against its baseline, for every window (Method §9), the bootstrap tests on
+     * {@code threads} threads (the values do not depend on it).
+     */
+    public static List<Comparison> comparisons(dev.sigmawalk.engine.study.Study study, RunResult<?> run, int threads) {
         return Comparisons.of(run, Baselines.of(study.strategies()), study.walkForward().windows(),
-                new DifferenceTests(HacKernel.PARZEN, study.evidence()), ScannedPair.lowestVolatility(run));
+                new DifferenceTests(HacKernel.PARZEN, study.evidence()), ScannedPair.lowestVolatility(run), threads);
     }
 
     /**

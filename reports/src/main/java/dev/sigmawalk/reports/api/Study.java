@@ -71,7 +71,7 @@ public final class Study {
         var run = Runs.walk(spec, data, threads, ProgressListener.NONE);
         List<String> warnings = new ArrayList<>(Runs.warningsBeforeWalk(spec, data));
         warnings.addAll(Runs.warningsOfResults(run));
-        return new Results(spec, run, Runs.summaries(run), Runs.comparisons(spec, run), warnings);
+        return new Results(spec, run, Runs.summaries(run), Runs.comparisons(spec, run, threads), warnings);
     }
 
     /**

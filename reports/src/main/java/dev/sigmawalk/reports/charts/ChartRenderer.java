@@ -3,13 +3,13 @@ package dev.sigmawalk.reports.charts;
 import java.awt.Graphics2D;
 import java.awt.Rectangle;
 import java.awt.image.BufferedImage;
+import java.io.BufferedOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.ViewBox;
@@ -92,8 +92,8 @@ public final class ChartRenderer {
         } finally {
             g.dispose();
         }
-        try (OutputStream out = Files.newOutputStream(file)) {
-            ChartUtils.writeBufferedImageAsPNG(out, image);
+        try (OutputStream out = new BufferedOutputStream(Files.newOutputStream(file))) {
+            PngEncoder.write(image, out);
         }
     }
 

@@ -44,7 +44,7 @@ public final class RollingVolatility {
         Arrays.fill(out, Double.NaN);
         double scale = Math.sqrt(periodsPerYear);
         for (int k = span - 1; k < returns.length; k++) {
-            out[k] = scale * SeriesStats.sd(Arrays.copyOfRange(returns, k - span + 1, k + 1));
+            out[k] = scale * SeriesStats.sd(returns, k - span + 1, k + 1);
         }
         return out;
     }

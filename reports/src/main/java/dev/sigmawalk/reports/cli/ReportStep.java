@@ -28,6 +28,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
 
 /**
@@ -54,9 +55,18 @@ final class ReportStep {
             ReportPage page = new ReportWriter().assemble(new ReportData(study, run, summaries, record, evidence),
                     dir.resolve("charts"), workers);
             // The PDF is laid out while the workers draw the charts' SVG and PNG copies; it draws
-            // each chart itself once that chart's worker is done with it.
+            // each chart itself once that chart's worker is done with it. The page itself goes
+            // to a worker, which waits there for the charts' markup while this thread lays out
+            // the PDF (the charts were handed to the workers first, so none waits behind it).
+            CompletableFuture<Void> html = CompletableFuture.runAsync(() -> {
+                try {
+                    page.writeHtml(dir.resolve("report.html"));
+                } catch (IOException e) {
+                    throw new UncheckedIOException("cannot write the report", e);
+                }
+            }, workers);
             ReportPdf.write(page.outline(), dir, page.charts(), dir.resolve("report.pdf"));
-            page.writeHtml(dir.resolve("report.html"));
+            Workers.await(html);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report", e);
         }

@@ -128,7 +128,7 @@ public final class StudyRun {
                 EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
             });
             summaries = Runs.summaries(run);
-            comparisons = Runs.comparisons(study, run);
+            comparisons = Runs.comparisons(study, run, threads);
             List<String> found = Runs.warningsOfResults(run);
             found.forEach(warn);
             warnings.addAll(found);
