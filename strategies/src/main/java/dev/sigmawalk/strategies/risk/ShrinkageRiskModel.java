@@ -97,7 +97,7 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
 
     /**
      * Not when the estimate is handed on as diagonal plus low rank ({@link LowRankShrinkage}:
-     * the single-index and identity targets with 4L &lt; n, {@link SampleRank#lowRank}).
+     * the single-index and identity targets with 8L &lt; n, {@link SampleRank#lowRank}).
      */
     @Override
     public boolean needsDenseMoments(int window, int assets) {

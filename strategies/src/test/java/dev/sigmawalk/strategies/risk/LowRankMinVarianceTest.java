@@ -33,7 +33,7 @@ class LowRankMinVarianceTest {
     void boundedMinVariance_sameOptimumAsDense_onSeededWideWindows() {
         long seed = 100;
         for (ShrinkageTarget target : new ShrinkageTarget[] {ShrinkageTarget.SINGLE_INDEX, ShrinkageTarget.IDENTITY}) {
-            for (int[] shape : new int[][] {{24, 150}, {60, 300}, {36, 150}}) {
+            for (int[] shape : new int[][] {{16, 150}, {36, 300}, {18, 150}}) {
                 EstimationWindow w = Windows.simulated(seed++, shape[0], shape[1]);
                 ShrinkageRiskModel model = new ShrinkageRiskModel(target);
                 CovarianceEstimate low = model.estimate(w);

@@ -54,12 +54,12 @@ class LowRankShrinkageTest {
     @Test
     void lowRankEstimate_equalsDenseEstimate_entryByEntry() {
         for (ShrinkageTarget target : new ShrinkageTarget[] {ShrinkageTarget.SINGLE_INDEX, ShrinkageTarget.IDENTITY}) {
-            EstimationWindow w = Windows.simulated(7, 20, 90);
+            EstimationWindow w = Windows.simulated(7, 20, 170);
             ShrinkageRiskModel model = new ShrinkageRiskModel(target);
-            assertFalse(model.needsDenseMoments(20, 90), target + " declared it needs S");
+            assertFalse(model.needsDenseMoments(20, 170), target + " declared it needs S");
             CovarianceEstimate low = model.estimate(w);
             assertInstanceOf(FactorCovariance.class, low, target + " estimate form");
-            CovarianceEstimate dense = model.dense(Windows.simulated(7, 20, 90));
+            CovarianceEstimate dense = model.dense(Windows.simulated(7, 20, 170));
             Close.relative(dense.shrinkage().orElseThrow(), low.shrinkage().orElseThrow(), INTENSITY_TOL, target + " δ");
             int n = w.assetCount();
             for (int i = 0; i < n; i++) {
@@ -92,8 +92,8 @@ class LowRankShrinkageTest {
     }
 
     /**
-     * With more than n/4 rows (where the Gram matrix would cost more than the dense path), or
-     * the constant-correlation target, the estimate stays dense.
+     * With at least n/8 rows (where the low-rank forms' own work costs more than the dense
+     * path, {@link SampleRank#lowRank}), or the constant-correlation target, the estimate stays dense.
      */
     @Test
     void denseWhereTheAlgebraOrTheShapeSaysSo() {
@@ -101,6 +101,11 @@ class LowRankShrinkageTest {
         assertInstanceOf(DenseCovariance.class, new ShrinkageRiskModel(ShrinkageTarget.SINGLE_INDEX).estimate(tall));
         EstimationWindow middle = Windows.simulated(3, 30, 100);
         assertInstanceOf(DenseCovariance.class, new ShrinkageRiskModel(ShrinkageTarget.SINGLE_INDEX).estimate(middle));
+        EstimationWindow edge = Windows.simulated(3, 20, 160);
+        ShrinkageRiskModel si = new ShrinkageRiskModel(ShrinkageTarget.SINGLE_INDEX);
+        assertTrue(si.needsDenseMoments(20, 160), "8L = n must stay dense");
+        assertInstanceOf(DenseCovariance.class, si.estimate(edge));
+        assertFalse(si.needsDenseMoments(20, 161), "8L < n must take the low-rank form");
         EstimationWindow wide = Windows.simulated(3, 20, 50);
         ShrinkageRiskModel cc = new ShrinkageRiskModel(ShrinkageTarget.CONSTANT_CORRELATION);
         assertTrue(cc.needsDenseMoments(20, 50), "constant correlation must ask for S");
