@@ -52,11 +52,13 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
 
     /** As {@link #apply(RuleInput, WarmStart)}, attaching {@code notes} to a chosen portfolio. */
     RuleOutcome apply(RuleInput input, WarmStart warm, List<String> notes) {
-        RuleOutcome none = Solved.unusable(NAME, input);
+        // With bounds a dense Σ goes into a QuadraticProblem, which checks its entries itself.
+        boolean bounded = input.bounds().isPresent();
+        RuleOutcome none = bounded ? Solved.unusableBeforeProblem(NAME, input) : Solved.unusable(NAME, input);
         if (none != null) {
             return none;
         }
-        return Solved.guarded(NAME, () -> Solved.from(NAME, solve(input, warm), input, warm, notes));
+        return Solved.guarded(NAME, input, () -> Solved.from(NAME, solve(input, warm), input, warm, notes));
     }
 
     private SolveOutcome solve(RuleInput input, WarmStart warm) {

@@ -67,6 +67,20 @@ final class Solved {
     }
 
     /**
+     * As {@link #guarded(String, Supplier)} for a body whose problem was checked only by
+     * {@link #unusableBeforeProblem}: a rejection caused by a non-finite entry of Σ is reported
+     * naming that entry, as {@link #unusable} reports it.
+     */
+    static RuleOutcome guarded(String rule, RuleInput input, Supplier<RuleOutcome> body) {
+        try {
+            return body.get();
+        } catch (IllegalArgumentException e) {
+            RuleOutcome named = unusableEntry(rule, input);
+            return named != null ? named : new RuleOutcome.NotFormed(rule + ": " + e.getMessage());
+        }
+    }
+
+    /**
      * For rules that use expected returns: NotFormed when the input is unusable or carries no
      * expected returns; null when the rule may proceed.
      */
@@ -89,6 +103,21 @@ final class Solved {
      * entry when one is not finite.
      */
     static RuleOutcome unusable(String rule, RuleInput input) {
+        RuleOutcome before = unusableBeforeProblem(rule, input);
+        if (before != null || input.covariance() instanceof FactorForm || input.covariance() instanceof SingleFactorForm) {
+            return before;
+        }
+        return unusableEntry(rule, input);
+    }
+
+    /**
+     * As {@link #unusable}, except that a dense Σ's entries are left to the {@code QuadraticProblem}
+     * the rule builds from it, whose one validation pass reads every entry anyway: one O(n²) pass
+     * fewer per dense problem. The rule must then run that problem inside
+     * {@link #guarded(String, RuleInput, Supplier)}, which names the non-finite entry as
+     * {@link #unusable} would.
+     */
+    static RuleOutcome unusableBeforeProblem(String rule, RuleInput input) {
         if (input.size() == 0) {
             return new RuleOutcome.NotFormed(rule + ": no eligible assets");
         }
@@ -102,16 +131,22 @@ final class Solved {
             return Double.isFinite(form.factorVariance()) && finite(form.loadings())
                     && finite(form.specificVariances()) ? null : unusableEntry(rule, input);
         }
-        return unusableEntry(rule, input);
+        return null;
+    }
+
+    private static boolean finite(double[] values) {
+        for (double v : values) {
+            if (!Double.isFinite(v)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** NotFormed naming the first non-finite entry of the dense Σ; null when there is none. */
     private static RuleOutcome unusableEntry(String rule, RuleInput input) {
         int n = input.size();
         double[] sigma = input.covariance().dense();
-        if (finite(sigma)) {
-            return null;
-        }
         for (int k = 0; k < sigma.length; k++) {
             if (!Double.isFinite(sigma[k])) {
                 return new RuleOutcome.NotFormed(rule + ": covariance entry (" + input.assets().get(k / n) + ", "
@@ -119,28 +154,5 @@ final class Solved {
             }
         }
         return null;
-    }
-
-    /**
-     * v − v is +0 for a finite v and NaN for ±∞ and NaN, so the sum of the differences is 0
-     * exactly when every entry is finite: no branch per entry, and four partial sums so that the
-     * additions pipeline. O(n²) for a dense Σ all the same, at a fraction of a test per entry.
-     */
-    private static boolean finite(double[] values) {
-        double z0 = 0;
-        double z1 = 0;
-        double z2 = 0;
-        double z3 = 0;
-        int k = 0;
-        for (; k + 4 <= values.length; k += 4) {
-            z0 += values[k] - values[k];
-            z1 += values[k + 1] - values[k + 1];
-            z2 += values[k + 2] - values[k + 2];
-            z3 += values[k + 3] - values[k + 3];
-        }
-        for (; k < values.length; k++) {
-            z0 += values[k] - values[k];
-        }
-        return (z0 + z1) + (z2 + z3) == 0;
     }
 }

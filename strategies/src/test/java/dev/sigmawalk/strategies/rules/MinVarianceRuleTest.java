@@ -119,21 +119,24 @@ class MinVarianceRuleTest {
     }
 
     /**
-     * An infinite or NaN entry anywhere in a 3×3 Σ (the four-at-a-time check and its remainder)
-     * is named by its position: the solvers take finite matrices only (IEEE 754: ∞ − ∞ is NaN).
+     * An infinite or NaN entry anywhere in a 3×3 Σ is named by its position, with and without
+     * bounds (with bounds the entries are checked by the problem's own validation): the solvers
+     * take finite matrices only.
      */
     @Test
     void nonFiniteEntryAtAnyPosition_isNotFormedNamingIt() {
         List<String> names = List.of("P", "Q", "R");
         double[] bad = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NaN};
-        for (int k = 0; k < 9; k++) {
-            double[] sigma = {0.04, 0.01, 0.0, 0.01, 0.05, 0.01, 0.0, 0.01, 0.06};
-            sigma[k] = bad[k % 3];
-            RuleOutcome out = rule.apply(new RuleInput(names, TestCovariances.dense(sigma), null, Optional.empty()),
-                    new WarmStart());
-            RuleOutcome.NotFormed failed = assertInstanceOf(RuleOutcome.NotFormed.class, out, "entry " + k);
-            String entry = "(" + names.get(k / 3) + ", " + names.get(k % 3) + ") is " + bad[k % 3];
-            assertTrue(failed.reason().contains(entry), failed.reason());
+        for (Optional<Bounds> bounds : List.of(Optional.<Bounds>empty(), Optional.of(new Bounds(0, 1)))) {
+            for (int k = 0; k < 9; k++) {
+                double[] sigma = {0.04, 0.01, 0.0, 0.01, 0.05, 0.01, 0.0, 0.01, 0.06};
+                sigma[k] = bad[k % 3];
+                RuleOutcome out = rule.apply(new RuleInput(names, TestCovariances.dense(sigma), null, bounds),
+                        new WarmStart());
+                RuleOutcome.NotFormed failed = assertInstanceOf(RuleOutcome.NotFormed.class, out, "entry " + k);
+                String entry = "(" + names.get(k / 3) + ", " + names.get(k % 3) + ") is " + bad[k % 3];
+                assertTrue(failed.reason().contains(entry), failed.reason());
+            }
         }
     }
 
