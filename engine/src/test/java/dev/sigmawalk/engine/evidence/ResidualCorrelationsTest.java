@@ -272,7 +272,9 @@ class ResidualCorrelationsTest {
                     double sj = m.marketCovariance()[j];
                     double smm = m.marketVariance();
                     double cov = m.covariance(i, j) - si * sj / smm;
-                    double r = cov / Math.sqrt((m.covariance(i, i) - si * si / smm) * (m.covariance(j, j) - sj * sj / smm));
+                    double di = m.covariance(i, i) - si * si / smm;
+                    double dj = m.covariance(j, j) - sj * sj / smm;
+                    double r = cov / Math.sqrt(di * dj);
                     sum += r;
                     sumAbs += Math.abs(r);
                     sumSquares += r * r;

@@ -104,7 +104,8 @@ final class Solved {
      */
     static RuleOutcome unusable(String rule, RuleInput input) {
         RuleOutcome before = unusableBeforeProblem(rule, input);
-        if (before != null || input.covariance() instanceof FactorForm || input.covariance() instanceof SingleFactorForm) {
+        boolean factors = input.covariance() instanceof FactorForm || input.covariance() instanceof SingleFactorForm;
+        if (before != null || factors) {
             return before;
         }
         return unusableEntry(rule, input);
