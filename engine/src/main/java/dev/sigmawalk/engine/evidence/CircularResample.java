@@ -18,23 +18,31 @@ final class CircularResample {
 
     /**
      * Fills the resample with the blocks of {@code block} consecutive periods of {@code x}
-     * starting at {@code starts}, wrapping past the end of {@code x}.
+     * starting at {@code starts}, wrapping past the end of {@code x}, and adds up the sums as it
+     * goes, in period order.
      */
     void draw(double[] x, int[] starts, int block) {
         int length = x.length;
         int at = 0;
-        for (int start : starts) {
-            // A block that runs past the end continues at the start: two plain copies, no modulo.
-            int head = Math.min(block, length - start);
-            System.arraycopy(x, start, values, at, head);
-            System.arraycopy(x, 0, values, at + head, block - head);
-            at += block;
-        }
         double s = 0;
         double q = 0;
-        for (double v : values) {
-            s += v;
-            q += v * v;
+        for (int start : starts) {
+            // A block that runs past the end continues at the start: two plain runs, no modulo.
+            // Element by element rather than by array copies: the data-driven block is often
+            // one to a few periods, where a copy call per block costs more than the copy.
+            int head = Math.min(block, length - start);
+            for (int k = start; k < start + head; k++, at++) {
+                double v = x[k];
+                values[at] = v;
+                s += v;
+                q += v * v;
+            }
+            for (int k = 0; k < block - head; k++, at++) {
+                double v = x[k];
+                values[at] = v;
+                s += v;
+                q += v * v;
+            }
         }
         sum = s;
         sumOfSquares = q;

@@ -20,6 +20,7 @@ import dev.sigmawalk.engine.study.EvidenceSpec;
 import dev.sigmawalk.engine.study.RebalanceRule;
 import dev.sigmawalk.engine.study.WalkForwardSpec;
 import dev.sigmawalk.engine.timeline.Timeline;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -93,27 +94,27 @@ class ComparisonsTest {
     /** Equal weights (0), weights ∝ 1/S_ii (1), or weights rising with the asset's position (2). */
     private record Weighted(String name, int rule) implements StrategyDefinition {
         @Override
-        public String riskLabel() {
-            return "diagonal";
+        public Allocator newAllocator(int window) {
+            return this::decide;
         }
 
         @Override
-        public Allocator newAllocator(int window) {
-            return this::decide;
+        public String riskLabel() {
+            return "fixed rule " + rule;
         }
 
         private Decision decide(EstimationWindow w) {
             int n = w.assetCount();
             double[] weights = new double[n];
-            double total = 0;
-            for (int i = 0; i < n; i++) {
-                weights[i] = rule == 0 ? 1 : rule == 1 ? 1 / w.moments().covariance(i, i) : i + 1;
-                total += weights[i];
-            }
+            Arrays.setAll(weights, i -> rule == 0 ? 1 : rule == 1 ? 1 / w.moments().covariance(i, i) : i + 1);
+            double total = Arrays.stream(weights).sum();
+            Arrays.setAll(weights, i -> weights[i] / total);
+            // w'Sw over the whole window matrix: the forecast the engine records.
             double variance = 0;
             for (int i = 0; i < n; i++) {
-                weights[i] /= total;
-                variance += weights[i] * weights[i] * w.moments().covariance(i, i);
+                for (int j = 0; j < n; j++) {
+                    variance += weights[i] * weights[j] * w.moments().covariance(i, j);
+                }
             }
             return new Decision.Chosen(weights, variance, OptionalDouble.empty(), List.of());
         }

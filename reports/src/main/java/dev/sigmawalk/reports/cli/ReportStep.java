@@ -39,9 +39,16 @@ final class ReportStep {
     private ReportStep() {
     }
 
+    /**
+     * @param workers where the charts, the page and {@code besidePdf} run
+     * @param besidePdf work that needs nothing of the report (the walk's own CSV files): handed to
+     *        the workers after every chart, so it fills the core the PDF's single-threaded layout
+     *        leaves idle once the charts are drawn; the report is done when it is
+     */
     static void write(Path dir, Study study, StudyData data, RunResult<WindowEvidence> run, List<Summary> summaries,
                       List<Comparison> comparisons, List<String> warnings, Instant started,
-                      Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics, Executor workers) {
+                      Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics, Executor workers,
+                      Runnable besidePdf) {
         ReturnPanel panel = data.panel();
         List<InputFile> inputs = new ArrayList<>();
         for (FileFingerprint f : data.fingerprints()) {
@@ -65,8 +72,10 @@ final class ReportStep {
                     throw new UncheckedIOException("cannot write the report", e);
                 }
             }, workers);
+            CompletableFuture<Void> beside = CompletableFuture.runAsync(besidePdf, workers);
             ReportPdf.write(page.outline(), dir, page.charts(), dir.resolve("report.pdf"));
             Workers.await(html);
+            Workers.await(beside);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report", e);
         }

@@ -32,7 +32,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.CompletableFuture;
 import java.util.function.Consumer;
 
 /**
@@ -113,9 +112,10 @@ public final class StudyRun {
         List<Comparison> comparisons;
         long tested;
         try (Workers workers = new Workers(threads)) {
-            // The files of the walk itself need neither the measures nor the tests: a worker
-            // writes them while this thread runs the tests.
-            CompletableFuture<Void> runFiles = workers.start(() -> {
+            // The files of the walk itself need neither the measures, the tests nor the report:
+            // a worker writes them beside the PDF, whose layout keeps only one thread busy,
+            // while the tests have every thread.
+            Runnable runFiles = () -> {
                 ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
                 ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
                 ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
@@ -126,7 +126,7 @@ public final class StudyRun {
                 SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
                         ReportStep.diagnostics(run, study.walkForward().windows()), ReportStep.flatten(factorDiagnostics)));
                 EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
-            });
+            };
             summaries = Runs.summaries(run);
             comparisons = Runs.comparisons(study, run, threads);
             List<String> found = Runs.warningsOfResults(run);
@@ -134,10 +134,9 @@ public final class StudyRun {
             warnings.addAll(found);
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
             EvidenceFiles.writeTests(dir.resolve("tests.csv"), comparisons, Baselines.choices(study.strategies()));
-            Workers.await(runFiles);
             tested = System.nanoTime();
             ReportStep.write(dir, study, data, run, summaries, comparisons, warnings, started, factorDiagnostics,
-                    workers.executor());
+                    workers.executor(), runFiles);
         }
         long reported = System.nanoTime();
         Map<String, Double> seconds = new LinkedHashMap<>();

@@ -8,9 +8,9 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.TimeUnit;
 
 /**
- * The threads that write a run's outputs beside the main thread: CSV files while the tests run,
- * charts while the page is assembled. With one thread every task runs at once on the caller, so
- * a one-thread run uses no other thread. What a task writes never depends on which thread ran it.
+ * The threads that write a run's outputs beside the main thread: charts while the page is
+ * assembled, the page and the walk's CSV files while the PDF is laid out. With one thread every
+ * task runs at once on the caller, so a one-thread run uses no other thread. What a task writes never depends on which thread ran it.
  */
 final class Workers implements AutoCloseable {
     private final ExecutorService pool;
@@ -25,12 +25,7 @@ final class Workers implements AutoCloseable {
         return pool == null ? Runnable::run : pool;
     }
 
-    /** Starts {@code task}; {@link #await} waits for it and passes on what it threw. */
-    CompletableFuture<Void> start(Runnable task) {
-        return CompletableFuture.runAsync(task, executor());
-    }
-
-    /** Waits for a task started by {@link #start}, rethrowing its exception as it was thrown. */
+    /** Waits for a task started on {@link #executor}, rethrowing its exception as it was thrown. */
     static void await(CompletableFuture<Void> task) {
         try {
             task.join();
