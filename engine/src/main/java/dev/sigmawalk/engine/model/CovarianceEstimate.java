@@ -39,6 +39,14 @@ public interface CovarianceEstimate {
         return v;
     }
 
+    /**
+     * What the producer promises about Σ_ij against Σ_ji in {@link #dense()}: {@link Symmetry#MIRRORED}
+     * only when every pair is equal bit for bit by construction; by default no promise.
+     */
+    default Symmetry symmetry() {
+        return Symmetry.UNPROVEN;
+    }
+
     /** The Ledoit-Wolf intensity δ in [0, 1] for shrinkage estimates; empty for other models. */
     default OptionalDouble shrinkage() {
         return OptionalDouble.empty();

@@ -23,6 +23,7 @@ public final class WindowMoments {
     private final double marketVariance;
     private final double[] marketCovariance;
     private final double[] variances;
+    private final Symmetry symmetry;
     private Supplier<double[]> denseSource;
     private double[] covariance;
 
@@ -40,12 +41,23 @@ public final class WindowMoments {
     public WindowMoments(int assets, int length, double[] mean, double marketMean, double marketVariance,
                          double[] marketCovariance, double[] covariance) {
         this(assets, length, mean, marketMean, marketVariance, marketCovariance, diagonal(covariance, assets),
-                covariance, null);
+                covariance, null, Symmetry.UNPROVEN);
+    }
+
+    /**
+     * As the public constructor, for a producer that stores each S_ji as the very double it
+     * computed for S_ij ({@link Symmetry#MIRRORED}): consumers then skip proving S symmetric.
+     * Any other caller uses the constructor, which promises nothing.
+     */
+    public static WindowMoments mirrored(int assets, int length, double[] mean, double marketMean,
+                                         double marketVariance, double[] marketCovariance, double[] covariance) {
+        return new WindowMoments(assets, length, mean, marketMean, marketVariance, marketCovariance,
+                diagonal(covariance, assets), covariance, null, Symmetry.MIRRORED);
     }
 
     private WindowMoments(int assets, int length, double[] mean, double marketMean, double marketVariance,
                           double[] marketCovariance, double[] variances, double[] covariance,
-                          Supplier<double[]> denseSource) {
+                          Supplier<double[]> denseSource, Symmetry symmetry) {
         if (!(length >= 2)) {
             throw new IllegalArgumentException("window length (" + length + ") must be >= 2");
         }
@@ -62,6 +74,7 @@ public final class WindowMoments {
         this.variances = variances;
         this.covariance = covariance;
         this.denseSource = denseSource;
+        this.symmetry = symmetry;
     }
 
     private static double[] diagonal(double[] covariance, int n) {
@@ -136,6 +149,11 @@ public final class WindowMoments {
         return covariance;
     }
 
+    /** What the producer of S promises about S_ij against S_ji (the diagonal fix-ups keep it). */
+    public Symmetry covarianceSymmetry() {
+        return symmetry;
+    }
+
     /** S_ij; the diagonal without the dense matrix, other entries through {@link #covariance()}. */
     public double covariance(int i, int j) {
         return i == j ? variances[i] : covariance()[i * assets + j];
@@ -144,7 +162,7 @@ public final class WindowMoments {
     /** These moments with the market's variance and every asset's covariance with it set to exactly 0. */
     public synchronized WindowMoments withConstantMarket() {
         return new WindowMoments(assets, length, mean, marketMean, 0.0, new double[assets], variances, covariance,
-                denseSource);
+                denseSource, symmetry);
     }
 
     /**
@@ -155,7 +173,7 @@ public final class WindowMoments {
      */
     public static WindowMoments of(EstimationWindow w) {
         Centred c = Centred.of(w.excessReturns(), w.marketExcess(), w.assetCount());
-        return new WindowMoments(c.n, c.len, c.mean, c.marketMean, c.smm, c.sim, c.dense());
+        return mirrored(c.n, c.len, c.mean, c.marketMean, c.smm, c.sim, c.dense());
     }
 
     /**
@@ -171,7 +189,7 @@ public final class WindowMoments {
         Centred c = Centred.of(excess, market, n);
         double[] variances = c.variances();
         return new WindowMoments(n, c.len, c.mean, c.marketMean, c.smm, c.sim, variances, null,
-                () -> Centred.of(excess, market, n).dense());
+                () -> Centred.of(excess, market, n).dense(), Symmetry.MIRRORED);
     }
 
     /** A window's centred rows and the moments of the market, from the two-pass computation. */
@@ -246,7 +264,7 @@ public final class WindowMoments {
             return v;
         }
 
-        /** S through the blocked kernel, upper triangle mirrored. */
+        /** S through the blocked kernel, upper triangle mirrored: each S_ji stored as S_ij ({@link Symmetry#MIRRORED}). */
         double[] dense() {
             double[] s = new double[n * n];
             CrossProducts.accumulate(rows, rows, len, n, s);

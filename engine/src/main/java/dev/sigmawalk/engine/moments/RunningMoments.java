@@ -243,6 +243,8 @@ public final class RunningMoments {
             s[a * n + a] = Math.max(0.0, s[a * n + a]);
         }
         double smm = Math.max(0.0, (cross[mk * width + mk] - sm * sm / len) / div);
-        return new WindowMoments(n, length, mean, shift[mk] + sm / len, smm, sim, s);
+        // fillCovariance stores each S_ba as the value computed for S_ab, and the clamp touches
+        // only the diagonal, so S is symmetric bit for bit.
+        return WindowMoments.mirrored(n, length, mean, shift[mk] + sm / len, smm, sim, s);
     }
 }

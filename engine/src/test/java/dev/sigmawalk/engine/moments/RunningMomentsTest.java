@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sigmawalk.engine.data.ReturnPanel;
+import dev.sigmawalk.engine.model.Symmetry;
 import dev.sigmawalk.engine.model.WindowMoments;
 import java.io.IOException;
 import java.io.InputStream;
@@ -92,6 +93,67 @@ class RunningMomentsTest {
             }
             double beta = got.marketCovariance()[i] / got.marketVariance();
             assertEquals(single[i][1], beta, RELATIVE * Math.abs(single[i][1]) + 1e-14, "beta of A" + (i + 1));
+        }
+    }
+
+    /**
+     * Seeded loop over panels wider than a snapshot tile (150 assets against tiles of 64): every
+     * snapshot promises {@link Symmetry#MIRRORED} and keeps it, S_ij == S_ji bit for bit for every
+     * pair, whichever eligible columns (gaps included) and whether the move slid or rebuilt.
+     */
+    @Test
+    void snapshot_isMirroredBitForBit() {
+        SplittableRandom cases = new SplittableRandom(41L);
+        for (int trial = 0; trial < 6; trial++) {
+            int length = 40 + cases.nextInt(60);
+            ReturnPanel panel = panel(1100, 150, 0.0002 * trial, cases.nextLong());
+            RunningMoments running = new RunningMoments(panel, length);
+            for (int tau = length - 1; tau < panel.rows(); tau += 37 + cases.nextInt(80)) {
+                running.moveTo(tau);
+                WindowMoments got = running.snapshot(eligible(panel, tau, length));
+                assertEquals(Symmetry.MIRRORED, got.covarianceSymmetry(), "τ = " + tau);
+                assertBitSymmetric(got, "trial " + trial + ", τ = " + tau);
+            }
+        }
+    }
+
+    /**
+     * The two-pass moments of a window mirror their upper triangle too, whether S is built at
+     * once or on first request; moments handed in through the constructor promise nothing.
+     */
+    @Test
+    void twoPassMoments_areMirrored_handedInMomentsAreNot() {
+        SplittableRandom rng = new SplittableRandom(43L);
+        int len = 90;
+        int n = 130;
+        double[] x = new double[len * n];
+        double[] m = new double[len];
+        for (int t = 0; t < len; t++) {
+            m[t] = 0.01 * rng.nextGaussian();
+            for (int i = 0; i < n; i++) {
+                x[t * n + i] = (0.4 + i / 100.0) * m[t] + 0.02 * rng.nextGaussian();
+            }
+        }
+        WindowMoments lazy = WindowMoments.withoutCovariance(x, m, n);
+        assertEquals(Symmetry.MIRRORED, lazy.covarianceSymmetry());
+        assertBitSymmetric(lazy, "built on request");
+        WindowMoments given = new WindowMoments(n, len, lazy.mean(), lazy.marketMean(), lazy.marketVariance(),
+                lazy.marketCovariance(), lazy.covariance());
+        assertEquals(Symmetry.UNPROVEN, given.covarianceSymmetry());
+        assertEquals(Symmetry.UNPROVEN, given.withConstantMarket().covarianceSymmetry());
+        assertEquals(Symmetry.MIRRORED, lazy.withConstantMarket().covarianceSymmetry());
+    }
+
+    private static void assertBitSymmetric(WindowMoments moments, String where) {
+        int n = moments.assets();
+        double[] s = moments.covariance();
+        for (int i = 0; i < n; i++) {
+            for (int j = i + 1; j < n; j++) {
+                if (Double.doubleToRawLongBits(s[i * n + j]) != Double.doubleToRawLongBits(s[j * n + i])) {
+                    throw new AssertionError(where + ": S(" + i + "," + j + ") = " + s[i * n + j] + " but S(" + j
+                            + "," + i + ") = " + s[j * n + i]);
+                }
+            }
         }
     }
 

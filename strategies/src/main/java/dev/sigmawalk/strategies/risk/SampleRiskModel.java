@@ -2,6 +2,7 @@ package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.model.Symmetry;
 
 import java.util.OptionalDouble;
 
@@ -20,7 +21,8 @@ public record SampleRiskModel() implements RiskModel {
             return lowRank(window);
         }
         var moments = window.moments();
-        return new DenseCovariance(moments.assets(), moments.covariance(), OptionalDouble.empty());
+        return new DenseCovariance(moments.assets(), moments.covariance(), OptionalDouble.empty(),
+                moments.covarianceSymmetry());
     }
 
     /** S as its centred rows: B = X̃' (n×L), Σ_F = I/(L−1), no specific variance, whatever the shape. */

@@ -2,6 +2,7 @@ package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.engine.model.EstimationWindow;
+import dev.sigmawalk.engine.model.Symmetry;
 import dev.sigmawalk.engine.model.WindowMoments;
 import dev.sigmawalk.engine.study.ShrinkageTarget;
 
@@ -63,7 +64,8 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
             f = identityTarget(moments);
             delta = ShrinkageIntensity.identity(centred, f, pi);
         }
-        return new DenseCovariance(n, combine(delta, f, moments.covariance()), OptionalDouble.of(delta));
+        return new DenseCovariance(n, combine(delta, f, moments.covariance()), OptionalDouble.of(delta),
+                Symmetry.UNPROVEN);
     }
 
     /**
@@ -92,7 +94,9 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
             }
             out[row + i] = delta * s[row + i] + keep * s[row + i];
         }
-        return new DenseCovariance(n, out, OptionalDouble.of(delta));
+        // Mirrored inputs give a mirrored Σ: each (i, j) and (j, i) is the same expression of
+        // equal doubles (β_i β_j = β_j β_i exactly; S_ij = S_ji bit for bit when S is mirrored).
+        return new DenseCovariance(n, out, OptionalDouble.of(delta), moments.covarianceSymmetry());
     }
 
     /**

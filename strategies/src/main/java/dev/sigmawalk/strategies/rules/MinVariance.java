@@ -85,7 +85,8 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
                 return structured.get();
             }
         }
-        QuadraticProblem problem = new QuadraticProblem(n, input.covariance().dense(), new double[n], lo, hi);
+        QuadraticProblem problem = new QuadraticProblem(n, input.covariance().dense(), new double[n], lo, hi,
+                input.covariance().symmetry());
         return new ActiveSetSolver(settings).solve(problem, guess);
     }
 

@@ -1,6 +1,7 @@
 package dev.sigmawalk.strategies.rules;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
+import dev.sigmawalk.engine.model.Symmetry;
 import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import dev.sigmawalk.strategies.optimize.SingleFactorMinVariance;
 import java.util.ArrayList;
@@ -12,6 +13,11 @@ final class TestCovariances {
     }
 
     static CovarianceEstimate dense(double[] sigma) {
+        return dense(sigma, Symmetry.UNPROVEN);
+    }
+
+    /** A dense matrix whose producer claims the given symmetry (the test's word, not proven). */
+    static CovarianceEstimate dense(double[] sigma, Symmetry symmetry) {
         int n = (int) Math.round(Math.sqrt(sigma.length));
         return new CovarianceEstimate() {
             @Override
@@ -27,6 +33,11 @@ final class TestCovariances {
             @Override
             public double[] dense() {
                 return sigma;
+            }
+
+            @Override
+            public Symmetry symmetry() {
+                return symmetry;
             }
         };
     }
