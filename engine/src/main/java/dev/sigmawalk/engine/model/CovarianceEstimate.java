@@ -40,11 +40,11 @@ public interface CovarianceEstimate {
     }
 
     /**
-     * What the producer promises about Σ_ij against Σ_ji in {@link #dense()}: {@link Symmetry#MIRRORED}
-     * only when every pair is equal bit for bit by construction; by default no promise.
+     * What the producer proved about {@link #dense()} while writing it ({@link DenseProof}): by
+     * default nothing, so a consumer proves symmetry and finiteness itself.
      */
-    default Symmetry symmetry() {
-        return Symmetry.UNPROVEN;
+    default DenseProof proof() {
+        return DenseProof.UNPROVEN;
     }
 
     /** The Ledoit-Wolf intensity δ in [0, 1] for shrinkage estimates; empty for other models. */

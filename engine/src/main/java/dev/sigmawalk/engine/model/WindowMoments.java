@@ -23,7 +23,7 @@ public final class WindowMoments {
     private final double marketVariance;
     private final double[] marketCovariance;
     private final double[] variances;
-    private final Symmetry symmetry;
+    private final DenseProof proof;
     private Supplier<double[]> denseSource;
     private double[] covariance;
 
@@ -41,23 +41,25 @@ public final class WindowMoments {
     public WindowMoments(int assets, int length, double[] mean, double marketMean, double marketVariance,
                          double[] marketCovariance, double[] covariance) {
         this(assets, length, mean, marketMean, marketVariance, marketCovariance, diagonal(covariance, assets),
-                covariance, null, Symmetry.UNPROVEN);
+                covariance, null, DenseProof.UNPROVEN);
     }
 
     /**
      * As the public constructor, for a producer that stores each S_ji as the very double it
-     * computed for S_ij ({@link Symmetry#MIRRORED}): consumers then skip proving S symmetric.
-     * Any other caller uses the constructor, which promises nothing.
+     * computed for S_ij ({@link DenseProof#MIRRORED}): consumers then skip proving S symmetric,
+     * and finite too when {@code finite} says its write loop saw every value finite. Any other
+     * caller uses the constructor, which promises nothing.
      */
     public static WindowMoments mirrored(int assets, int length, double[] mean, double marketMean,
-                                         double marketVariance, double[] marketCovariance, double[] covariance) {
+                                         double marketVariance, double[] marketCovariance, double[] covariance,
+                                         boolean finite) {
         return new WindowMoments(assets, length, mean, marketMean, marketVariance, marketCovariance,
-                diagonal(covariance, assets), covariance, null, Symmetry.MIRRORED);
+                diagonal(covariance, assets), covariance, null, DenseProof.mirrored(finite));
     }
 
     private WindowMoments(int assets, int length, double[] mean, double marketMean, double marketVariance,
                           double[] marketCovariance, double[] variances, double[] covariance,
-                          Supplier<double[]> denseSource, Symmetry symmetry) {
+                          Supplier<double[]> denseSource, DenseProof proof) {
         if (!(length >= 2)) {
             throw new IllegalArgumentException("window length (" + length + ") must be >= 2");
         }
@@ -74,7 +76,7 @@ public final class WindowMoments {
         this.variances = variances;
         this.covariance = covariance;
         this.denseSource = denseSource;
-        this.symmetry = symmetry;
+        this.proof = proof;
     }
 
     private static double[] diagonal(double[] covariance, int n) {
@@ -149,9 +151,9 @@ public final class WindowMoments {
         return covariance;
     }
 
-    /** What the producer of S promises about S_ij against S_ji (the diagonal fix-ups keep it). */
-    public Symmetry covarianceSymmetry() {
-        return symmetry;
+    /** What the producer of S proved about it (symmetry, finiteness); the diagonal fix-ups keep it. */
+    public DenseProof covarianceProof() {
+        return proof;
     }
 
     /** S_ij; the diagonal without the dense matrix, other entries through {@link #covariance()}. */
@@ -162,7 +164,7 @@ public final class WindowMoments {
     /** These moments with the market's variance and every asset's covariance with it set to exactly 0. */
     public synchronized WindowMoments withConstantMarket() {
         return new WindowMoments(assets, length, mean, marketMean, 0.0, new double[assets], variances, covariance,
-                denseSource, symmetry);
+                denseSource, proof);
     }
 
     /**
@@ -173,7 +175,7 @@ public final class WindowMoments {
      */
     public static WindowMoments of(EstimationWindow w) {
         Centred c = Centred.of(w.excessReturns(), w.marketExcess(), w.assetCount());
-        return mirrored(c.n, c.len, c.mean, c.marketMean, c.smm, c.sim, c.dense());
+        return mirrored(c.n, c.len, c.mean, c.marketMean, c.smm, c.sim, c.dense(), false);
     }
 
     /**
@@ -189,7 +191,7 @@ public final class WindowMoments {
         Centred c = Centred.of(excess, market, n);
         double[] variances = c.variances();
         return new WindowMoments(n, c.len, c.mean, c.marketMean, c.smm, c.sim, variances, null,
-                () -> Centred.of(excess, market, n).dense(), Symmetry.MIRRORED);
+                () -> Centred.of(excess, market, n).dense(), DenseProof.MIRRORED);
     }
 
     /** A window's centred rows and the moments of the market, from the two-pass computation. */
@@ -264,7 +266,7 @@ public final class WindowMoments {
             return v;
         }
 
-        /** S through the blocked kernel, upper triangle mirrored: each S_ji stored as S_ij ({@link Symmetry#MIRRORED}). */
+        /** S through the blocked kernel, upper triangle mirrored: each S_ji stored as S_ij ({@link DenseProof#MIRRORED}). */
         double[] dense() {
             double[] s = new double[n * n];
             CrossProducts.accumulate(rows, rows, len, n, s);

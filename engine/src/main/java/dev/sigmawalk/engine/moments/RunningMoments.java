@@ -183,11 +183,15 @@ public final class RunningMoments {
      * written to both triangles in one pass over square tiles: each upper entry is computed once
      * and stored at (a, b) and (b, a), and a tile's column writes stay in the cache (a separate
      * mirror pass, which read the upper triangle a second time, cost a third more at n = 2,000).
+     * Returns whether every value is finite: the sum of v·0 over the computed values is 0 when
+     * they all are and NaN as soon as one is NaN or infinite, one addition a value beside the
+     * division, so the dense problem need not read the matrix again to find out.
      */
-    private void fillCovariance(int[] columns, double[] s) {
+    private boolean fillCovariance(int[] columns, double[] s) {
         double len = length;
         double div = length - 1.0;
         int n = columns.length;
+        double check = 0;
         for (int a0 = 0; a0 < n; a0 += SNAPSHOT_TILE) {
             int a1 = Math.min(n, a0 + SNAPSHOT_TILE);
             for (int b0 = a0; b0 < n; b0 += SNAPSHOT_TILE) {
@@ -201,10 +205,12 @@ public final class RunningMoments {
                         double value = (cross[rowBase + cj] - si * sum[cj] / len) / div;
                         s[row + b] = value;
                         s[b * n + a] = value;
+                        check += value * 0.0;
                     }
                 }
             }
         }
+        return check == 0.0;
     }
 
     /**
@@ -238,13 +244,14 @@ public final class RunningMoments {
             sim[a] = (cross[ci * width + mk] - si * sm / len) / div;
         }
         double[] s = new double[n * n];
-        fillCovariance(columns, s);
+        boolean finite = fillCovariance(columns, s);
         for (int a = 0; a < n; a++) {
             s[a * n + a] = Math.max(0.0, s[a * n + a]);
         }
         double smm = Math.max(0.0, (cross[mk * width + mk] - sm * sm / len) / div);
         // fillCovariance stores each S_ba as the value computed for S_ab, and the clamp touches
-        // only the diagonal, so S is symmetric bit for bit.
-        return WindowMoments.mirrored(n, length, mean, shift[mk] + sm / len, smm, sim, s);
+        // only the diagonal and never makes a finite value non-finite, so S is symmetric bit for
+        // bit and finite when every computed value was.
+        return WindowMoments.mirrored(n, length, mean, shift[mk] + sm / len, smm, sim, s, finite);
     }
 }

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sigmawalk.engine.data.ReturnPanel;
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import dev.sigmawalk.engine.model.WindowMoments;
 import java.io.IOException;
 import java.io.InputStream;
@@ -98,8 +98,9 @@ class RunningMomentsTest {
 
     /**
      * Seeded loop over panels wider than a snapshot tile (150 assets against tiles of 64): every
-     * snapshot promises {@link Symmetry#MIRRORED} and keeps it, S_ij == S_ji bit for bit for every
-     * pair, whichever eligible columns (gaps included) and whether the move slid or rebuilt.
+     * snapshot of finite returns promises {@link DenseProof#MIRRORED_FINITE} and keeps it, S_ij ==
+     * S_ji bit for bit for every pair and every entry finite, whichever eligible columns (gaps
+     * included) and whether the move slid or rebuilt.
      */
     @Test
     void snapshot_isMirroredBitForBit() {
@@ -111,15 +112,39 @@ class RunningMomentsTest {
             for (int tau = length - 1; tau < panel.rows(); tau += 37 + cases.nextInt(80)) {
                 running.moveTo(tau);
                 WindowMoments got = running.snapshot(eligible(panel, tau, length));
-                assertEquals(Symmetry.MIRRORED, got.covarianceSymmetry(), "τ = " + tau);
+                assertEquals(DenseProof.MIRRORED_FINITE, got.covarianceProof(), "τ = " + tau);
                 assertBitSymmetric(got, "trial " + trial + ", τ = " + tau);
+                for (double v : got.covariance()) {
+                    assertTrue(Double.isFinite(v), "trial " + trial + ", τ = " + tau + ": " + v);
+                }
             }
         }
     }
 
     /**
+     * Returns whose spread (10^160) squares past the largest double: the sums overflow, so the
+     * snapshot promises symmetry but not finiteness ({@link DenseProof#MIRRORED}), and the pairs
+     * are still the same doubles (infinities and NaNs stored twice from one value).
+     */
+    @Test
+    void overflowingSnapshot_isMirroredButNotPromisedFinite() {
+        ReturnPanel panel = levelPanel(200, 70, 0.0, 1e160, 9L);
+        RunningMoments running = new RunningMoments(panel, 50);
+        for (int tau = 49; tau < 200; tau += 50) {
+            running.moveTo(tau);
+            int[] all = new int[70];
+            Arrays.setAll(all, i -> i);
+            WindowMoments got = running.snapshot(all);
+            assertEquals(DenseProof.MIRRORED, got.covarianceProof(), "τ = " + tau);
+            assertTrue(Arrays.stream(got.covariance()).anyMatch(v -> !Double.isFinite(v)), "τ = " + tau);
+            assertBitSymmetric(got, "τ = " + tau);
+        }
+    }
+
+    /**
      * The two-pass moments of a window mirror their upper triangle too, whether S is built at
-     * once or on first request; moments handed in through the constructor promise nothing.
+     * once or on first request (finiteness is not tracked there, so only symmetry is promised);
+     * moments handed in through the constructor promise nothing.
      */
     @Test
     void twoPassMoments_areMirrored_handedInMomentsAreNot() {
@@ -135,13 +160,13 @@ class RunningMomentsTest {
             }
         }
         WindowMoments lazy = WindowMoments.withoutCovariance(x, m, n);
-        assertEquals(Symmetry.MIRRORED, lazy.covarianceSymmetry());
+        assertEquals(DenseProof.MIRRORED, lazy.covarianceProof());
         assertBitSymmetric(lazy, "built on request");
         WindowMoments given = new WindowMoments(n, len, lazy.mean(), lazy.marketMean(), lazy.marketVariance(),
                 lazy.marketCovariance(), lazy.covariance());
-        assertEquals(Symmetry.UNPROVEN, given.covarianceSymmetry());
-        assertEquals(Symmetry.UNPROVEN, given.withConstantMarket().covarianceSymmetry());
-        assertEquals(Symmetry.MIRRORED, lazy.withConstantMarket().covarianceSymmetry());
+        assertEquals(DenseProof.UNPROVEN, given.covarianceProof());
+        assertEquals(DenseProof.UNPROVEN, given.withConstantMarket().covarianceProof());
+        assertEquals(DenseProof.MIRRORED, lazy.withConstantMarket().covarianceProof());
     }
 
     private static void assertBitSymmetric(WindowMoments moments, String where) {

@@ -1,6 +1,6 @@
 package dev.sigmawalk.strategies.optimize;
 
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import java.util.Arrays;
 import java.util.Objects;
 
@@ -14,9 +14,9 @@ import java.util.Objects;
  * Arrays are held as given (not copied, for speed at n = 500) and must not be modified while
  * the problem is in use.
  *
- * <p>Validation reads every entry of Q. Symmetry is proven too, pair by pair in tiles (the
+ * <p>Validation reads every entry of Q. DenseProof is proven too, pair by pair in tiles (the
  * transposed read is strided), unless the producer of Q promises it by construction
- * ({@link Symmetry#MIRRORED}); then one row-major pass proves finiteness alone, at a fraction of
+ * ({@link DenseProof#MIRRORED}); then one row-major pass proves finiteness alone, at a fraction of
  * the cost for n = 2,000.
  *
  * @param size n ≥ 1
@@ -24,11 +24,11 @@ import java.util.Objects;
  * @param linear c, length n, finite
  * @param lower lower_i, length n, never NaN or +∞
  * @param upper upper_i, length n, never NaN or −∞, each ≥ lower_i
- * @param symmetry what the producer of Q promises: {@link Symmetry#MIRRORED} skips the symmetry
- *                 proof (never the finiteness one)
+ * @param proof what the producer of Q proved about it ({@link DenseProof#UNPROVEN} for a matrix
+ *              from anywhere else)
  */
 public record QuadraticProblem(int size, double[] quadratic, double[] linear, double[] lower, double[] upper,
-                               Symmetry symmetry) {
+                               DenseProof proof) {
     /** Relative tolerance for asymmetry of Q, against the largest |Q_ij|. */
     private static final double SYMMETRY_TOLERANCE = 1e-12;
     /** Side of the square tiles the symmetry check walks. */
@@ -42,9 +42,10 @@ public record QuadraticProblem(int size, double[] quadratic, double[] linear, do
         requireLength("linear", linear, size);
         requireLength("lower", lower, size);
         requireLength("upper", upper, size);
-        Objects.requireNonNull(symmetry, "symmetry");
-        boolean mirrored = symmetry == Symmetry.MIRRORED;
-        boolean quadraticFine = mirrored ? allFinite(quadratic) : quadraticPasses(size, quadratic);
+        Objects.requireNonNull(proof, "proof");
+        boolean mirrored = proof.mirrored();
+        boolean quadraticFine = proof == DenseProof.MIRRORED_FINITE
+                || (mirrored ? allFinite(quadratic) : quadraticPasses(size, quadratic));
         if (!quadraticFine) {
             checkFinite("quadratic", quadratic);
         }
@@ -55,9 +56,9 @@ public record QuadraticProblem(int size, double[] quadratic, double[] linear, do
         }
     }
 
-    /** A problem whose Q carries no promise of symmetry: it is proven. */
+    /** A problem whose Q carries no proof from its producer: finiteness and symmetry are proven here. */
     public QuadraticProblem(int size, double[] quadratic, double[] linear, double[] lower, double[] upper) {
-        this(size, quadratic, linear, lower, upper, Symmetry.UNPROVEN);
+        this(size, quadratic, linear, lower, upper, DenseProof.UNPROVEN);
     }
 
     /**

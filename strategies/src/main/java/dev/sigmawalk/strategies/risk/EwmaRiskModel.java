@@ -2,7 +2,7 @@ package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.engine.model.EstimationWindow;
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import dev.sigmawalk.engine.moments.CrossProducts;
 
 import java.util.OptionalDouble;
@@ -45,7 +45,7 @@ public record EwmaRiskModel(double halfLife) implements RiskModel {
                 s[j * n + i] = s[i * n + j];
             }
         }
-        return new DenseCovariance(n, s, OptionalDouble.empty(), Symmetry.UNPROVEN);
+        return new DenseCovariance(n, s, OptionalDouble.empty(), DenseProof.UNPROVEN);
     }
 
     /**

@@ -2,7 +2,7 @@ package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.engine.model.EstimationWindow;
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 
 import java.util.OptionalDouble;
 
@@ -35,7 +35,7 @@ public record NonlinearShrinkageRiskModel() implements RiskModel {
         SampleEigen eigen = SampleEigen.largest(centred, m);
         double[] shrunk = AnalyticalShrinkage.shrink(eigen.values(), n, sampleSize);
         double floor = n > sampleSize ? shrunk[m] : 0.0;
-        return new DenseCovariance(n, assemble(eigen, shrunk, floor), OptionalDouble.empty(), Symmetry.UNPROVEN);
+        return new DenseCovariance(n, assemble(eigen, shrunk, floor), OptionalDouble.empty(), DenseProof.UNPROVEN);
     }
 
     /** floor·I + U diag(d̃ - floor) U', upper triangle then mirrored, so it is exactly symmetric. */

@@ -2,7 +2,6 @@ package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.engine.model.EstimationWindow;
-import dev.sigmawalk.engine.model.Symmetry;
 
 import java.util.OptionalDouble;
 
@@ -22,7 +21,7 @@ public record SampleRiskModel() implements RiskModel {
         }
         var moments = window.moments();
         return new DenseCovariance(moments.assets(), moments.covariance(), OptionalDouble.empty(),
-                moments.covarianceSymmetry());
+                moments.covarianceProof());
     }
 
     /** S as its centred rows: B = X̃' (n×L), Σ_F = I/(L−1), no specific variance, whatever the shape. */

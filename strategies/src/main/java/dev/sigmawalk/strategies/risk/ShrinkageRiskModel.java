@@ -2,7 +2,7 @@ package dev.sigmawalk.strategies.risk;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
 import dev.sigmawalk.engine.model.EstimationWindow;
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import dev.sigmawalk.engine.model.WindowMoments;
 import dev.sigmawalk.engine.study.ShrinkageTarget;
 
@@ -65,7 +65,7 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
             delta = ShrinkageIntensity.identity(centred, f, pi);
         }
         return new DenseCovariance(n, combine(delta, f, moments.covariance()), OptionalDouble.of(delta),
-                Symmetry.UNPROVEN);
+                DenseProof.UNPROVEN);
     }
 
     /**
@@ -85,18 +85,26 @@ public record ShrinkageRiskModel(ShrinkageTarget target) implements RiskModel {
         double delta = ShrinkageIntensity.singleIndex(centred, SingleIndexTargetSums.of(s, n, smm, beta));
         double keep = 1.0 - delta;
         double[] out = new double[n * n];
+        // Σ v·0 over the stored values: 0 when all are finite, NaN as soon as one is not.
+        double check = 0;
         for (int i = 0; i < n; i++) {
             int row = i * n;
             double bi = beta[i];
             for (int j = 0; j < n; j++) {
                 // δ (s_mm (β_i β_j)) rounds the same for (i, j) and (j, i), so Σ stays exactly symmetric.
-                out[row + j] = delta * (smm * (bi * beta[j])) + keep * s[row + j];
+                double v = delta * (smm * (bi * beta[j])) + keep * s[row + j];
+                out[row + j] = v;
+                check += v * 0.0;
             }
-            out[row + i] = delta * s[row + i] + keep * s[row + i];
+            double d = delta * s[row + i] + keep * s[row + i];
+            out[row + i] = d;
+            check += d * 0.0;
         }
         // Mirrored inputs give a mirrored Σ: each (i, j) and (j, i) is the same expression of
         // equal doubles (β_i β_j = β_j β_i exactly; S_ij = S_ji bit for bit when S is mirrored).
-        return new DenseCovariance(n, out, OptionalDouble.of(delta), moments.covarianceSymmetry());
+        // The check above covers every stored value, whatever S's own proof says of finiteness.
+        DenseProof proof = moments.covarianceProof().mirrored() ? DenseProof.mirrored(check == 0.0) : DenseProof.UNPROVEN;
+        return new DenseCovariance(n, out, OptionalDouble.of(delta), proof);
     }
 
     /**

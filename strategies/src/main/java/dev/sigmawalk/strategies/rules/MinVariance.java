@@ -52,7 +52,8 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
 
     /** As {@link #apply(RuleInput, WarmStart)}, attaching {@code notes} to a chosen portfolio. */
     RuleOutcome apply(RuleInput input, WarmStart warm, List<String> notes) {
-        // With bounds a dense Σ goes into a QuadraticProblem, which checks its entries itself.
+        // With bounds a dense Σ goes into a QuadraticProblem, which checks its entries itself
+        // (or takes the finiteness its producer proved, DenseProof.MIRRORED_FINITE).
         boolean bounded = input.bounds().isPresent();
         RuleOutcome none = bounded ? Solved.unusableBeforeProblem(NAME, input) : Solved.unusable(NAME, input);
         if (none != null) {
@@ -86,7 +87,7 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
             }
         }
         QuadraticProblem problem = new QuadraticProblem(n, input.covariance().dense(), new double[n], lo, hi,
-                input.covariance().symmetry());
+                input.covariance().proof());
         return new ActiveSetSolver(settings).solve(problem, guess);
     }
 

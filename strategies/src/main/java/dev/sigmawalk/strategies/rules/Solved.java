@@ -113,8 +113,8 @@ final class Solved {
 
     /**
      * As {@link #unusable}, except that a dense Σ's entries are left to the {@code QuadraticProblem}
-     * the rule builds from it, whose one validation pass reads every entry anyway: one O(n²) pass
-     * fewer per dense problem. The rule must then run that problem inside
+     * the rule builds from it, whose one validation pass reads every entry anyway (unless the
+     * producer proved them finite while writing them): one O(n²) pass fewer per dense problem. The rule must then run that problem inside
      * {@link #guarded(String, RuleInput, Supplier)}, which names the non-finite entry as
      * {@link #unusable} would.
      */

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertDoesNotThrow;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
@@ -32,10 +32,10 @@ class QuadraticProblemTest {
         return q;
     }
 
-    private static QuadraticProblem problem(int n, double[] q, Symmetry symmetry) {
+    private static QuadraticProblem problem(int n, double[] q, DenseProof proof) {
         double[] hi = new double[n];
         java.util.Arrays.fill(hi, 1.0);
-        return new QuadraticProblem(n, q, new double[n], new double[n], hi, symmetry);
+        return new QuadraticProblem(n, q, new double[n], new double[n], hi, proof);
     }
 
     private static QuadraticProblem problem(double[] q) {
@@ -110,7 +110,7 @@ class QuadraticProblemTest {
     }
 
     /**
-     * Seeded loop on the path where the producer promises symmetry ({@link Symmetry#MIRRORED}):
+     * Seeded loop on the path where the producer promises symmetry ({@link DenseProof#MIRRORED}):
      * finiteness is still proven for every entry. A NaN or an infinity at a random place, on the
      * diagonal or off it, and at the very last entry (n = 7 gives 49 entries, not a multiple of
      * the four sums of the finiteness pass), is named as on the full path.
@@ -120,7 +120,7 @@ class QuadraticProblemTest {
         SplittableRandom random = new SplittableRandom(13);
         double[] bads = {Double.NaN, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY};
         for (int n : new int[] {N, 7, 1}) {
-            assertDoesNotThrow(() -> problem(n, symmetric(n, 5), Symmetry.MIRRORED), "n = " + n);
+            assertDoesNotThrow(() -> problem(n, symmetric(n, 5), DenseProof.MIRRORED), "n = " + n);
             for (int trial = 0; trial < 30; trial++) {
                 double[] q = symmetric(n, 300 + trial);
                 int k = trial == 0 ? n * n - 1 : trial == 1 ? 0 : random.nextInt(n * n);
@@ -128,7 +128,7 @@ class QuadraticProblemTest {
                 q[k] = bad;
                 String where = "n = " + n + ", trial " + trial;
                 IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                        () -> problem(n, q, Symmetry.MIRRORED), where);
+                        () -> problem(n, q, DenseProof.MIRRORED), where);
                 assertTrue(e.getMessage().contains("quadratic[" + k + "] (" + bad + ") must be finite"),
                         where + ": " + e.getMessage());
             }
@@ -137,9 +137,9 @@ class QuadraticProblemTest {
 
     /**
      * Seeded loop: without the promise, through either constructor, a pair that differs by 10^-3
-     * is rejected and named; with the promise the same matrix is taken on its producer's word,
-     * which is why only producers whose write loop mirrors every pair make it (their own tests
-     * check the matrices bit for bit).
+     * is rejected and named; with either mirrored promise the same matrix is taken on its
+     * producer's word, which is why only producers whose write loop mirrors every pair make it
+     * (their own tests check the matrices bit for bit).
      */
     @Test
     void asymmetricPair_isRejectedUnlessSymmetryIsPromised() {
@@ -153,9 +153,33 @@ class QuadraticProblemTest {
             IllegalArgumentException plain = assertThrows(IllegalArgumentException.class, () -> problem(q));
             assertTrue(plain.getMessage().contains(pair), plain.getMessage());
             IllegalArgumentException unproven = assertThrows(IllegalArgumentException.class,
-                    () -> problem(N, q, Symmetry.UNPROVEN));
+                    () -> problem(N, q, DenseProof.UNPROVEN));
             assertTrue(unproven.getMessage().contains(pair), unproven.getMessage());
-            assertDoesNotThrow(() -> problem(N, q, Symmetry.MIRRORED), "trial " + trial);
+            assertDoesNotThrow(() -> problem(N, q, DenseProof.MIRRORED), "trial " + trial);
+            assertDoesNotThrow(() -> problem(N, q, DenseProof.MIRRORED_FINITE), "trial " + trial);
         }
+    }
+
+    /**
+     * A Q whose producer proved it finite while writing it is not read again: a NaN planted after
+     * the fact is not seen (the promise is the producer's to keep, and the running sums' and the
+     * shrinkage's tests check it), while the same matrix with a symmetry-only promise is rejected
+     * naming the entry. The linear term and the bounds are checked whatever Q's proof.
+     */
+    @Test
+    void finitePromise_skipsReadingQ_notTheOtherChecks() {
+        double[] q = symmetric(7, 9);
+        q[20] = Double.NaN;
+        assertDoesNotThrow(() -> problem(7, q, DenseProof.MIRRORED_FINITE));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> problem(7, q, DenseProof.MIRRORED));
+        assertTrue(e.getMessage().contains("quadratic[20] (NaN) must be finite"), e.getMessage());
+        double[] c = new double[7];
+        c[4] = Double.POSITIVE_INFINITY;
+        double[] hi = new double[7];
+        java.util.Arrays.fill(hi, 1.0);
+        IllegalArgumentException linear = assertThrows(IllegalArgumentException.class,
+                () -> new QuadraticProblem(7, symmetric(7, 9), c, new double[7], hi, DenseProof.MIRRORED_FINITE));
+        assertTrue(linear.getMessage().contains("linear[4] (Infinity) must be finite"), linear.getMessage());
     }
 }

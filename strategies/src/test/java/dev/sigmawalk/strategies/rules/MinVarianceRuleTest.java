@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.sigmawalk.engine.model.Decision;
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import dev.sigmawalk.engine.study.Bounds;
 import dev.sigmawalk.strategies.optimize.RandomProblems;
 import dev.sigmawalk.strategies.optimize.ReferenceMatrices;
@@ -122,19 +122,19 @@ class MinVarianceRuleTest {
     /**
      * An infinite or NaN entry anywhere in a 3×3 Σ is named by its position, with and without
      * bounds (with bounds the entries are checked by the problem's own validation), and whether
-     * or not the estimate promises symmetry (the promise skips only the symmetry proof): the
+     * or not the estimate promises symmetry (that promise skips only the symmetry proof): the
      * solvers take finite matrices only.
      */
     @Test
     void nonFiniteEntryAtAnyPosition_isNotFormedNamingIt() {
         List<String> names = List.of("P", "Q", "R");
         double[] bad = {Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.NaN};
-        for (Symmetry symmetry : Symmetry.values()) {
+        for (DenseProof proof : List.of(DenseProof.UNPROVEN, DenseProof.MIRRORED)) {
             for (Optional<Bounds> bounds : List.of(Optional.<Bounds>empty(), Optional.of(new Bounds(0, 1)))) {
                 for (int k = 0; k < 9; k++) {
                     double[] sigma = {0.04, 0.01, 0.0, 0.01, 0.05, 0.01, 0.0, 0.01, 0.06};
                     sigma[k] = bad[k % 3];
-                    RuleOutcome out = rule.apply(new RuleInput(names, TestCovariances.dense(sigma, symmetry), null,
+                    RuleOutcome out = rule.apply(new RuleInput(names, TestCovariances.dense(sigma, proof), null,
                             bounds), new WarmStart());
                     RuleOutcome.NotFormed failed = assertInstanceOf(RuleOutcome.NotFormed.class, out, "entry " + k);
                     String entry = "(" + names.get(k / 3) + ", " + names.get(k % 3) + ") is " + bad[k % 3];

@@ -1,7 +1,7 @@
 package dev.sigmawalk.strategies.rules;
 
 import dev.sigmawalk.engine.model.CovarianceEstimate;
-import dev.sigmawalk.engine.model.Symmetry;
+import dev.sigmawalk.engine.model.DenseProof;
 import dev.sigmawalk.strategies.optimize.SingleFactorForm;
 import dev.sigmawalk.strategies.optimize.SingleFactorMinVariance;
 import java.util.ArrayList;
@@ -13,11 +13,11 @@ final class TestCovariances {
     }
 
     static CovarianceEstimate dense(double[] sigma) {
-        return dense(sigma, Symmetry.UNPROVEN);
+        return dense(sigma, DenseProof.UNPROVEN);
     }
 
-    /** A dense matrix whose producer claims the given symmetry (the test's word, not proven). */
-    static CovarianceEstimate dense(double[] sigma, Symmetry symmetry) {
+    /** A dense matrix whose producer claims the given proof (the test's word). */
+    static CovarianceEstimate dense(double[] sigma, DenseProof proof) {
         int n = (int) Math.round(Math.sqrt(sigma.length));
         return new CovarianceEstimate() {
             @Override
@@ -36,8 +36,8 @@ final class TestCovariances {
             }
 
             @Override
-            public Symmetry symmetry() {
-                return symmetry;
+            public DenseProof proof() {
+                return proof;
             }
         };
     }
