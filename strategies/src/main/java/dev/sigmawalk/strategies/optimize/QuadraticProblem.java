@@ -14,10 +14,11 @@ import java.util.Objects;
  * Arrays are held as given (not copied, for speed at n = 500) and must not be modified while
  * the problem is in use.
  *
- * <p>Validation reads every entry of Q. DenseProof is proven too, pair by pair in tiles (the
- * transposed read is strided), unless the producer of Q promises it by construction
+ * <p>Validation proves Q finite and symmetric, pair by pair in tiles (the transposed read is
+ * strided), unless the producer of Q promises symmetry by construction
  * ({@link DenseProof#MIRRORED}); then one row-major pass proves finiteness alone, at a fraction of
- * the cost for n = 2,000.
+ * the cost for n = 2,000, and a producer whose write loop also saw every value finite
+ * ({@link DenseProof#MIRRORED_FINITE}) spares even that pass.
  *
  * @param size n ≥ 1
  * @param quadratic Q, length n², finite and symmetric
