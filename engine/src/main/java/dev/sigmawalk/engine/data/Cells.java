@@ -63,7 +63,8 @@ final class Cells {
 
     /**
      * Method §1: a price must be positive; a return or rate below -1 (a loss of more than all
-     * of it) is impossible. Missing values (NaN) pass.
+     * of it) is impossible, and one above {@link #LARGEST_RETURN} is refused as a data error.
+     * Missing values (NaN) pass.
      *
      * @param prices whether {@code value} is a price (false for returns and for rates beside prices)
      */
@@ -78,7 +79,20 @@ final class Cells {
                     "'" + cell + "' is a return below -1, a loss of more than everything, which is impossible;"
                             + " expected decimal returns (-0.015 for a 1.5 % loss): if the file holds percent,"
                             + " divide every value by 100");
+        } else if (value > LARGEST_RETURN) {
+            throw new InputException(new InputException.Location(file, line, column),
+                    "'" + cell + "' is a return above 1e12 (a gain of a hundred trillion percent in one period),"
+                            + " which no asset earns; expected decimal returns (0.015 for a 1.5 % gain): if the"
+                            + " file holds prices, set values: prices in the study file");
         }
     }
+
+    /**
+     * The largest return or rate accepted. Far beyond any asset's period return (returns above
+     * +500 % already draw a warning), and far enough below the range of a double that the study's
+     * sums of squared and fourth-power returns stay finite: past about 1e75, r⁴ overflows, and a
+     * run would end in a non-finite statistic instead of this message.
+     */
+    static final double LARGEST_RETURN = 1e12;
 
 }

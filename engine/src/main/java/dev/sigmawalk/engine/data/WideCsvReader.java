@@ -230,7 +230,7 @@ final class WideCsvReader {
                 }
                 if (q == limit || b[q] == ',' || b[q] == '\n' || b[q] == '\r') {
                     double v = number.value;
-                    if (positive[j] ? !(v > 0) : v < -1) {
+                    if (positive[j] ? !(v > 0) : v < -1 || v > Cells.LARGEST_RETURN) {
                         Cells.requirePossible(v, positive[j], CellText.decode(b, p, number.end, file, line), file, line,
                                 columns.get(j));
                     }
@@ -252,7 +252,7 @@ final class WideCsvReader {
                 return quotedRecord();
             }
             double v = DecimalBytes.parse(b, s, ve, file, line, columns.get(j));
-            if (positive[j] ? !(v > 0) && v == v : v < -1) {
+            if (positive[j] ? !(v > 0) && v == v : v < -1 || v > Cells.LARGEST_RETURN) {
                 Cells.requirePossible(v, positive[j], CellText.decode(b, s, ve, file, line), file, line, columns.get(j));
             }
             target[base + j] = v;

@@ -148,6 +148,31 @@ class DataFileFaultsTest {
         assertTrue(e.getMessage().endsWith("if the file holds percent, divide every value by 100"), e.getMessage());
     }
 
+    /**
+     * A return so large that its fourth power overflows used to end the run in a non-finite
+     * statistic (exit 1); it is refused at its cell instead, with the prices hint. 1e12 itself
+     * passes (with the warning every return above +500 % draws).
+     */
+    @Test
+    void absurdlyLargeReturn_isRefusedAtItsCell() {
+        InputException e = loadFails(new StudyFixture(dir).edit("assets.csv", "2020-03-31,-0.03", "2020-03-31,1e200"));
+        assertEquals(4, e.location().line());
+        assertEquals("A01", e.location().column());
+        assertTrue(e.getMessage().startsWith("assets.csv line 4, column 'A01': '1e200' is a return above 1e12"),
+                e.getMessage());
+        assertTrue(e.getMessage().endsWith("if the file holds prices, set values: prices in the study file"),
+                e.getMessage());
+        StudyData d = new StudyFixture(dir).edit("assets.csv", "2020-03-31,-0.03", "2020-03-31,1e12").load();
+        assertEquals(1e12, d.panel().value(2, 0), 0.0);
+    }
+
+    @Test
+    void riskFreeRateAboveTheLargestReturn_isRefused() {
+        InputException e = loadFails(new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,2e12"));
+        assertTrue(e.getMessage().startsWith("riskfree.csv line 4, column 'rf': '2e12' is a return above 1e12"),
+                e.getMessage());
+    }
+
     @Test
     void returnOfExactlyMinusOne_isATotalLossAndAccepted() {
         StudyData d = new StudyFixture(dir).edit("assets.csv", "2020-03-31,-0.03", "2020-03-31,-1").load();
