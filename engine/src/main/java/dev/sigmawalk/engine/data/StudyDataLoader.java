@@ -58,6 +58,9 @@ final class StudyDataLoader {
         }
         List<Integer> assetCols = assetColumns(table, market, riskFreeColumn);
         double[] returns = assetReturns(table, assetCols, panelRows);
+        if (spec.values() == ValueKind.PRICES) {
+            PriceJumps.requireBounded(table, assetCols, returns, panelRows);
+        }
         List<Integer> kept = dropEmpty(table, assetCols, returns, panelRows);
         if (kept.isEmpty()) {
             throw new InputException(new InputException.Location(table.file(), 1, null),
@@ -69,6 +72,9 @@ final class StudyDataLoader {
             assets.add(table.columns().get(assetCols.get(k)));
         }
         double[] marketReturns = ValueConversion.convert(spec.values(), market.values());
+        if (spec.values() == ValueKind.PRICES) {
+            PriceJumps.requireBounded(market, marketReturns);
+        }
         double[] riskFree = riskFreeColumn
                 .map(rf -> Arrays.copyOfRange(rf.values(), offset, rf.values().length))
                 .orElseGet(() -> annualToPeriod(((SeriesSource.AnnualRate) spec.riskFree()).rate(), periods, panelRows));

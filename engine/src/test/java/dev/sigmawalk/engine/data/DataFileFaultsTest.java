@@ -166,6 +166,61 @@ class DataFileFaultsTest {
         assertEquals(1e12, d.panel().value(2, 0), 0.0);
     }
 
+    private static final String PRICES = "date,P1,P2\n2020-01-31,100,50\n2020-02-29,110,50\n2020-03-31,121,55\n"
+            + "2020-04-30,125,60\n2020-05-31,130,66\n2020-06-30,143,66\n2020-07-31,130,60\n2020-08-31,117,54\n";
+    private static final String MARKET_PRICES = "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,102\n"
+            + "2020-04-30,103\n2020-05-31,104\n2020-06-30,105\n2020-07-31,106\n2020-08-31,107\n";
+
+    private StudyFixture prices(String assets, String market) {
+        return new StudyFixture(dir).write("assets.csv", assets).write("market.csv", market)
+                .edit("study.yaml", "values: returns", "values: prices");
+    }
+
+    /**
+     * A placeholder price (1e-200 standing for "no price") followed by a real one gives a return
+     * of about 1e202, whose fourth power overflows: refused at the later price's cell with both
+     * prices and their lines, exit 2 (it used to end the run with an internal error).
+     */
+    @Test
+    void priceJumpBeyondTheLargestReturn_isRefusedAtTheLaterPrice() {
+        InputException e = loadFails(prices(PRICES.replace("2020-03-31,121,55", "2020-03-31,1e-200,55"),
+                MARKET_PRICES));
+        assertEquals(5, e.location().line());
+        assertEquals("P1", e.location().column());
+        assertTrue(e.getMessage().startsWith("assets.csv line 5, column 'P1': the price 125.0 after 1.0E-200 (line 4)"
+                + " gives a return of 1.25E202, above 1e12"), e.getMessage());
+        assertTrue(e.getMessage().endsWith("a placeholder standing for a missing price (leave the cell empty)"),
+                e.getMessage());
+    }
+
+    /** 1e-300 then 1e300: the quotient overflows to +∞, which is refused the same way. */
+    @Test
+    void priceJumpThatOverflows_isRefused() {
+        InputException e = loadFails(prices(PRICES.replace("2020-05-31,130,66", "2020-05-31,1e-300,66")
+                .replace("2020-06-30,143,66", "2020-06-30,1e300,66"), MARKET_PRICES));
+        assertEquals(7, e.location().line());
+        assertTrue(e.getMessage().contains("gives a return too large for a number, above 1e12"), e.getMessage());
+    }
+
+    /** The market's prices obey the same bound, reported in the market file: 1e15/100 − 1 = 9999999999999 (Python 3: 1e15/100-1). */
+    @Test
+    void marketPriceJump_isRefusedInTheMarketFile() {
+        InputException e = loadFails(prices(PRICES, MARKET_PRICES.replace("2020-02-29,101", "2020-02-29,1e15")));
+        assertEquals("market.csv", e.location().file().getFileName().toString());
+        assertEquals(3, e.location().line());
+        assertEquals("IDX", e.location().column());
+        assertTrue(e.getMessage().contains("the price 1.0E15 after 100.0 (line 2) gives a return of 9.999999999999E12"),
+                e.getMessage());
+    }
+
+    /** 1 then 1e12 is a return of 1e12 − 1, inside the bound: it loads (with the +500 % warning). */
+    @Test
+    void priceJumpJustInsideTheBound_loads() {
+        StudyData d = prices(PRICES.replace("2020-03-31,121,55", "2020-03-31,1,55")
+                .replace("2020-04-30,125,60", "2020-04-30,1e12,60"), MARKET_PRICES).load();
+        assertEquals(1e12 - 1, d.panel().value(2, 0), 0.0);
+    }
+
     @Test
     void riskFreeRateAboveTheLargestReturn_isRefused() {
         InputException e = loadFails(new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,2e12"));

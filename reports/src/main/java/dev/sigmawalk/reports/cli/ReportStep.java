@@ -41,14 +41,15 @@ final class ReportStep {
 
     /**
      * @param workers where the charts, the page and {@code besidePdf} run
-     * @param besidePdf work that needs nothing of the report (the walk's own CSV files): handed to
-     *        the workers after every chart, so it fills the core the PDF's single-threaded layout
-     *        leaves idle once the charts are drawn; the report is done when it is
+     * @param besidePdf tasks that need nothing of the report (the walk's own CSV files): handed to
+     *        the workers in this order after every chart, so they fill the cores the PDF's
+     *        single-threaded layout leaves idle once the charts are drawn; the report is done
+     *        when all of them are, and the first of them (in this order) that failed fails it
      */
     static void write(Path dir, Study study, StudyData data, RunResult<WindowEvidence> run, List<Summary> summaries,
                       List<Comparison> comparisons, List<String> warnings, Instant started,
                       Map<Integer, List<List<FactorDiagnostics>>> factorDiagnostics, Executor workers,
-                      Runnable besidePdf) {
+                      List<Runnable> besidePdf) {
         ReturnPanel panel = data.panel();
         List<InputFile> inputs = new ArrayList<>();
         for (FileFingerprint f : data.fingerprints()) {
@@ -72,10 +73,13 @@ final class ReportStep {
                     throw new UncheckedIOException("cannot write the report", e);
                 }
             }, workers);
-            CompletableFuture<Void> beside = CompletableFuture.runAsync(besidePdf, workers);
+            List<CompletableFuture<Void>> beside = new ArrayList<>();
+            for (Runnable task : besidePdf) {
+                beside.add(CompletableFuture.runAsync(task, workers));
+            }
             ReportPdf.write(page.outline(), dir, page.charts(), dir.resolve("report.pdf"));
             Workers.await(html);
-            Workers.await(beside);
+            beside.forEach(Workers::await);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write the report", e);
         }

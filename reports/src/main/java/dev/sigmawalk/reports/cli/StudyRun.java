@@ -113,20 +113,21 @@ public final class StudyRun {
         long tested;
         try (Workers workers = new Workers(threads)) {
             // The files of the walk itself need neither the measures, the tests nor the report:
-            // a worker writes them beside the PDF, whose layout keeps only one thread busy,
-            // while the tests have every thread.
-            Runnable runFiles = () -> {
-                ResultFiles.writeReturns(dir.resolve("returns.csv"), run);
-                ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
-                ResultFiles.writeWeights(dir.resolve("weights.csv"), run);
-                EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(),
-                        study.walkForward().windows());
-                FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics,
-                        study.walkForward().windows());
-                SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
-                        ReportStep.diagnostics(run, study.walkForward().windows()), ReportStep.flatten(factorDiagnostics)));
-                EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), study.walkForward().windows());
-            };
+            // the workers write them beside the PDF, whose layout keeps only one thread busy,
+            // while the tests have every thread. Each large file is a task of its own, the
+            // costliest first, so that both workers write while the PDF is laid out.
+            List<Integer> windows = study.walkForward().windows();
+            List<Runnable> runFiles = List.of(
+                    () -> EvidenceFiles.writeEstimates(dir.resolve("estimates.csv"), run.probes(), windows),
+                    () -> ResultFiles.writeWeights(dir.resolve("weights.csv"), run),
+                    () -> ResultFiles.writeReturns(dir.resolve("returns.csv"), run),
+                    () -> {
+                        ResultFiles.writeRebalances(dir.resolve("rebalances.csv"), run);
+                        EvidenceFiles.writeDiagnostics(dir.resolve("diagnostics.csv"), run.probes(), windows);
+                        FactorDiagnosticsFile.write(dir.resolve("factor_diagnostics.csv"), factorDiagnostics, windows);
+                        SectorCorrelationsFile.write(dir.resolve("sector_correlations.csv"), SectorGrids.of(
+                                ReportStep.diagnostics(run, windows), ReportStep.flatten(factorDiagnostics)));
+                    });
             summaries = Runs.summaries(run);
             comparisons = Runs.comparisons(study, run, threads);
             List<String> found = Runs.warningsOfResults(run);

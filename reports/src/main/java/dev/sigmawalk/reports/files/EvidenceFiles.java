@@ -50,16 +50,21 @@ public final class EvidenceFiles {
      */
     public static void writeEstimates(Path file, Map<Integer, List<WindowEvidence>> byWindow, List<Integer> windows) {
         try (CsvWriter csv = new CsvWriter(file, "date", "window", "asset", "alpha", "beta", "residual_variance")) {
+            CsvCell.Cache names = new CsvCell.Cache();
             for (int w : windows) {
                 for (WindowEvidence e : byWindow.getOrDefault(w, List.of())) {
                     if (e.estimates().isEmpty()) {
                         continue;
                     }
                     SingleIndexEstimates est = e.estimates().get();
-                    String date = e.date().toString();
-                    for (int i = 0; i < est.assets().size(); i++) {
-                        csv.text(date).integer(w).text(est.assets().get(i)).number(est.alpha()[i]).number(est.beta()[i])
-                                .number(est.residualVariance()[i]).end();
+                    CsvCell date = CsvCell.of(e.date().toString());
+                    List<String> assets = est.assets();
+                    double[] alpha = est.alpha();
+                    double[] beta = est.beta();
+                    double[] residualVariance = est.residualVariance();
+                    for (int i = 0; i < assets.size(); i++) {
+                        csv.cell(date).integer(w).cell(names.of(assets.get(i))).number(alpha[i]).number(beta[i])
+                                .number(residualVariance[i]).end();
                     }
                 }
             }

@@ -21,15 +21,20 @@ public final class ResultFiles {
     public static void writeReturns(Path file, RunResult<?> run) {
         LocalDate[] dates = run.dates();
         try (CsvWriter csv = new CsvWriter(file, "date", "strategy", "window", "gross_return", "net_return")) {
+            CsvCell[] dateCells = new CsvCell[dates.length];
+            for (int k = 0; k < dates.length; k++) {
+                dateCells[k] = CsvCell.of(dates[k].toString());
+            }
             for (PathResult p : run.paths()) {
+                CsvCell strategy = CsvCell.of(p.strategy());
                 for (int k = 0; k < dates.length; k++) {
-                    csv.text(dates[k].toString()).text(p.strategy()).integer(p.window())
+                    csv.cell(dateCells[k]).cell(strategy).integer(p.window())
                             .number(p.gross()[k]).number(p.net()[k]).end();
                 }
             }
             double[] m = run.market();
             for (int k = 0; k < dates.length; k++) {
-                csv.text(dates[k].toString()).text("market").empty().number(m[k]).number(m[k]).end();
+                csv.cell(dateCells[k]).text("market").empty().number(m[k]).number(m[k]).end();
             }
         }
     }
@@ -60,13 +65,16 @@ public final class ResultFiles {
      */
     public static void writeWeights(Path file, RunResult<?> run) {
         try (CsvWriter csv = new CsvWriter(file, "date", "strategy", "window", "asset", "weight")) {
+            CsvCell.Cache names = new CsvCell.Cache();
             for (PathResult p : run.paths()) {
+                CsvCell strategy = CsvCell.of(p.strategy());
                 for (RebalanceRecord r : p.rebalances()) {
-                    String date = r.date().toString();
+                    CsvCell date = CsvCell.of(r.date().toString());
                     List<String> assets = r.assets();
+                    double[] weights = r.weights();
                     for (int i = 0; i < assets.size(); i++) {
-                        csv.text(date).text(p.strategy()).integer(p.window()).text(assets.get(i))
-                                .number(r.weights()[i]).end();
+                        csv.cell(date).cell(strategy).integer(p.window()).cell(names.of(assets.get(i)))
+                                .number(weights[i]).end();
                     }
                 }
             }

@@ -186,7 +186,7 @@ class RunCommandTest {
         assertEquals(0, sigmawalk("run", study.toString(), "--out", out.resolve("b").toString(), "--quiet",
                 "--threads", "2").code());
         for (String f : List.of("returns.csv", "rebalances.csv", "weights.csv", "summary.csv", "diagnostics.csv",
-                "tests.csv")) {
+                "tests.csv", "estimates.csv", "factor_diagnostics.csv", "sector_correlations.csv")) {
             assertArrayEquals(Files.readAllBytes(out.resolve("a").resolve(f)), Files.readAllBytes(out.resolve("b").resolve(f)),
                     f);
         }
