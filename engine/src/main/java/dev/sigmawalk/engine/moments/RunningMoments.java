@@ -106,7 +106,7 @@ public final class RunningMoments {
         return refreshes;
     }
 
-    /** D_ij of the current sums, i ≤ j panel columns (the market is column N): for tests of the snapshot. */
+    /** D_ij = D_ji of the current sums, panel columns i and j (the market is N): for tests of the snapshot. */
     double crossSum(int i, int j) {
         return cross[Math.min(i, j) * width + Math.max(i, j)];
     }
