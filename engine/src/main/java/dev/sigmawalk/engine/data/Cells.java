@@ -29,7 +29,8 @@ final class Cells {
             }
         }
         throw new InputException(new InputException.Location(file, line, column),
-                "'" + cell + "' is not an ISO-8601 date; expected YYYY-MM-DD, for example 2020-01-31");
+                "'" + cell + "' is not an ISO-8601 date; expected YYYY-MM-DD, for example 2020-01-31"
+                        + CellHints.date(cell));
     }
 
     private static boolean digitsAt(String s) {
@@ -58,7 +59,8 @@ final class Cells {
                     "'" + cell + "' is not a finite number");
         }
         throw new InputException(new InputException.Location(file, line, column),
-                "'" + cell + "' is not a number; expected a decimal such as 0.0123 or an empty cell");
+                "'" + cell + "' is not a number; expected a decimal such as 0.0123 or an empty cell"
+                        + CellHints.number(cell));
     }
 
     /**

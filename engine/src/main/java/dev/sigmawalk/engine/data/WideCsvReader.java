@@ -358,7 +358,8 @@ final class WideCsvReader {
     private List<String> valueColumns(List<String> header) {
         if (!DATE.equals(header.get(0))) {
             throw new InputException(new InputException.Location(file, 1, header.get(0)),
-                    "the first column is '" + header.get(0) + "'; expected 'date'");
+                    "the first column is '" + header.get(0) + "'; expected 'date'"
+                            + CellHints.header(header.get(0)));
         }
         if (header.size() < 2) {
             throw new InputException(new InputException.Location(file, 1, null),

@@ -109,10 +109,13 @@ public final class ResidualCorrelations {
 
     /**
      * Σ ρ_ij, Σ |ρ_ij| and Σ ρ_ij² over the pairs i &lt; j, summed while the correlations are made,
-     * so that the statistics cost no second pass over them. Per pair
-     * ρ_ij = (S_ij − s_im β_j) · (1/√d_i)(1/√d_j) with β_j = s_jm / s_mm: multiplications only,
-     * unit stride along row i of S, in four interleaved partial sums so that the additions
-     * pipeline. The order is fixed, so the result is the same on every run.
+     * so that the statistics cost no second pass over S. Per pair
+     * ρ_ij = (S_ij − s_im β_j) · (1/√d_i)(1/√d_j) with β_j = s_jm / s_mm: multiplications only.
+     * Row i of S is copied into a buffer and its correlations made there by a loop whose arrays
+     * all share the index j, which the JIT vectorises (it leaves a loop that reads S at a row
+     * offset scalar); a second loop over the buffer, still in the cache, adds them up in four
+     * interleaved partial sums so that the additions pipeline. The order is fixed, so the result
+     * is the same on every run.
      */
     private record PairSums(double sum, double sumAbs, double sumSquares) {
 
@@ -128,33 +131,46 @@ public final class ResidualCorrelations {
                 beta[i] = sim[i] / smm;
                 scale[i] = 1.0 / residualSd[i];
             }
-            double[] scratch = packed == null ? new double[n] : null;
+            double[] rho = new double[n];
             double[] row = new double[3];
             double sum = 0;
             double sumAbs = 0;
             double sumSquares = 0;
             int at = 0;
             for (int i = 0; i < n; i++) {
-                // Row i's pairs go to the packed triangle, or to a scratch row that is overwritten.
-                double[] out = packed == null ? scratch : packed;
-                int base = (packed == null ? 0 : at) - (i + 1);
-                row(s, i, n, sim[i], scale, beta, out, base, row);
+                int first = i + 1;
+                System.arraycopy(s, i * n + first, rho, first, n - first);
+                correlations(rho, first, sim[i], scale[i], scale, beta);
+                if (packed != null) {
+                    System.arraycopy(rho, first, packed, at, n - first);
+                }
+                sums(rho, first, row);
                 sum += row[0];
                 sumAbs += row[1];
                 sumSquares += row[2];
-                at += n - i - 1;
+                at += n - first;
             }
             return new PairSums(sum, sumAbs, sumSquares);
         }
 
         /**
-         * ρ_ij for i &lt; j into out[base + j], clamped to [−1, 1]; their sum, absolute sum and sum of
-         * squares into sums[0..2].
+         * ρ_ij for j ≥ first into rho[j], clamped to [−1, 1], from S_ij in rho[j] on entry:
+         * (S_ij − s_im β_j) · (ui · scale_j), the order of operations of the definition above.
          */
-        private static void row(double[] s, int i, int n, double si, double[] scale, double[] beta, double[] out,
-                                int base, double[] sums) {
-            int at = i * n;
-            double ui = scale[i];
+        private static void correlations(double[] rho, int first, double si, double ui, double[] scale,
+                                         double[] beta) {
+            for (int j = first; j < rho.length; j++) {
+                rho[j] = clamp((rho[j] - si * beta[j]) * (ui * scale[j]));
+            }
+        }
+
+        /**
+         * Sum, absolute sum and sum of squares of rho[first..] into sums[0..2], each in four
+         * partial sums taken in the order j = first, first + 1, ... (term k of the row into partial
+         * sum k mod 4, the rest after the last group of four into the first).
+         */
+        private static void sums(double[] rho, int first, double[] sums) {
+            int n = rho.length;
             double r0 = 0;
             double r1 = 0;
             double r2 = 0;
@@ -167,16 +183,12 @@ public final class ResidualCorrelations {
             double q1 = 0;
             double q2 = 0;
             double q3 = 0;
-            int j = i + 1;
+            int j = first;
             for (; j + 4 <= n; j += 4) {
-                double p0 = clamp((s[at + j] - si * beta[j]) * (ui * scale[j]));
-                double p1 = clamp((s[at + j + 1] - si * beta[j + 1]) * (ui * scale[j + 1]));
-                double p2 = clamp((s[at + j + 2] - si * beta[j + 2]) * (ui * scale[j + 2]));
-                double p3 = clamp((s[at + j + 3] - si * beta[j + 3]) * (ui * scale[j + 3]));
-                out[base + j] = p0;
-                out[base + j + 1] = p1;
-                out[base + j + 2] = p2;
-                out[base + j + 3] = p3;
+                double p0 = rho[j];
+                double p1 = rho[j + 1];
+                double p2 = rho[j + 2];
+                double p3 = rho[j + 3];
                 r0 += p0;
                 r1 += p1;
                 r2 += p2;
@@ -191,8 +203,7 @@ public final class ResidualCorrelations {
                 q3 += p3 * p3;
             }
             for (; j < n; j++) {
-                double p = clamp((s[at + j] - si * beta[j]) * (ui * scale[j]));
-                out[base + j] = p;
+                double p = rho[j];
                 r0 += p;
                 a0 += Math.abs(p);
                 q0 += p * p;

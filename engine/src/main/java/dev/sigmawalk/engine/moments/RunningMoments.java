@@ -45,8 +45,8 @@ import java.util.Arrays;
 public final class RunningMoments {
     /** Rebuild when s_i²/L exceeds this fraction of D_ii (see the class comment). */
     private static final double CANCELLATION_LIMIT = 0.5;
-    /** Side of the square tiles in which the snapshot fills both triangles. */
-    private static final int SNAPSHOT_TILE = 64;
+    /** Rows of S the snapshot computes before it mirrors them below the diagonal. */
+    private static final int MIRROR_ROWS = 64;
 
     private final ShiftedRows rows;
     private final int length;
@@ -104,6 +104,16 @@ public final class RunningMoments {
     /** How many times the sums were rebuilt from the rows, the first build included. */
     public int refreshes() {
         return refreshes;
+    }
+
+    /** D_ij = D_ji of the current sums, panel columns i and j (the market is N): for tests of the snapshot. */
+    double crossSum(int i, int j) {
+        return cross[Math.min(i, j) * width + Math.max(i, j)];
+    }
+
+    /** s_i of the current sums (the market is column N): for tests of the snapshot. */
+    double columnSum(int i) {
+        return sum[i];
     }
 
     /**
@@ -180,37 +190,85 @@ public final class RunningMoments {
 
     /**
      * S_ab = (D_ij − s_i s_j / L)/(L − 1) for the panel columns i = columns[a], j = columns[b],
-     * written to both triangles in one pass over square tiles: each upper entry is computed once
-     * and stored at (a, b) and (b, a), and a tile's column writes stay in the cache (a separate
-     * mirror pass, which read the upper triangle a second time, cost a third more at n = 2,000).
-     * Returns whether every value is finite: the sum of v·0 over the computed values is 0 when
-     * they all are and NaN as soon as one is NaN or infinite, one addition a value beside the
-     * division, so the dense problem need not read the matrix again to find out.
+     * both triangles, in blocks of {@value #MIRROR_ROWS} rows. For each row a the D_ij with
+     * b ≥ a are copied into a row buffer (one copy when the columns are a run of consecutive
+     * panel columns, as when every asset of the panel is in the window; otherwise gathered
+     * through {@code columns}), turned into S_ab in place by a loop whose arrays all share the
+     * index b, which the JIT vectorises, and copied into S. The block is then copied into its
+     * columns below the diagonal while its rows are still in the cache. Every entry is the same
+     * IEEE operations on the same doubles as the formula, in its order, whichever route its D_ij
+     * took, so the bits are those of the plain loop (the JIT left a loop that read D and wrote S
+     * at their own row offsets scalar).
+     *
+     * <p>Returns whether every value is finite: the sum of v·0 over the computed values is 0 when
+     * they all are and NaN as soon as one is NaN or infinite. It is kept per column beside each
+     * entry, so it vectorises with the rest (one running sum would chain every addition to the
+     * one before); the order of those additions cannot change a sum of zeros and NaNs. The dense
+     * problem then need not read the matrix again to find out.
      */
     private boolean fillCovariance(int[] columns, double[] s) {
-        double len = length;
-        double div = length - 1.0;
         int n = columns.length;
-        double check = 0;
-        for (int a0 = 0; a0 < n; a0 += SNAPSHOT_TILE) {
-            int a1 = Math.min(n, a0 + SNAPSHOT_TILE);
-            for (int b0 = a0; b0 < n; b0 += SNAPSHOT_TILE) {
-                int b1 = Math.min(n, b0 + SNAPSHOT_TILE);
-                for (int a = a0; a < a1; a++) {
-                    int rowBase = columns[a] * width;
-                    double si = sum[columns[a]];
-                    int row = a * n;
-                    for (int b = Math.max(b0, a); b < b1; b++) {
-                        int cj = columns[b];
-                        double value = (cross[rowBase + cj] - si * sum[cj] / len) / div;
-                        s[row + b] = value;
-                        s[b * n + a] = value;
-                        check += value * 0.0;
+        if (n == 0) {
+            return true;
+        }
+        double[] sumOf = new double[n];
+        for (int b = 0; b < n; b++) {
+            sumOf[b] = sum[columns[b]];
+        }
+        // Strictly ascending columns form one run exactly when the last is n − 1 past the first.
+        boolean run = columns[n - 1] - columns[0] == n - 1;
+        double[] row = new double[n];
+        double[] zeros = new double[n];
+        for (int a0 = 0; a0 < n; a0 += MIRROR_ROWS) {
+            int a1 = Math.min(n, a0 + MIRROR_ROWS);
+            for (int a = a0; a < a1; a++) {
+                int rowBase = columns[a] * width;
+                if (run) {
+                    System.arraycopy(cross, rowBase + columns[a], row, a, n - a);
+                } else {
+                    for (int b = a; b < n; b++) {
+                        row[b] = cross[rowBase + columns[b]];
                     }
                 }
+                covarianceRow(row, sumOf, sum[columns[a]], a, zeros);
+                System.arraycopy(row, a, s, a * n + a, n - a);
             }
+            mirrorBlock(s, n, a0, a1);
+        }
+        double check = 0;
+        for (double z : zeros) {
+            check += z;
         }
         return check == 0.0;
+    }
+
+    /**
+     * row[b] = (row[b] − si · sums[b] / L) / (L − 1) for b ≥ first, holding D_ij on entry, and v·0
+     * added to zeros[b].
+     */
+    private void covarianceRow(double[] row, double[] sums, double si, int first, double[] zeros) {
+        double len = length;
+        double div = length - 1.0;
+        for (int b = first; b < row.length; b++) {
+            double value = (row[b] - si * sums[b] / len) / div;
+            row[b] = value;
+            zeros[b] += value * 0.0;
+        }
+    }
+
+    /**
+     * Copies rows a0..a1−1 of the upper triangle into their columns below the diagonal:
+     * S_ba = S_ab for a0 ≤ a &lt; min(a1, b). Each lower row gets one short run, read from the
+     * block's rows, which were written just before.
+     */
+    private static void mirrorBlock(double[] s, int n, int a0, int a1) {
+        for (int b = a0 + 1; b < n; b++) {
+            int to = b * n;
+            int end = Math.min(a1, b);
+            for (int a = a0; a < end; a++) {
+                s[to + a] = s[a * n + b];
+            }
+        }
     }
 
     /**

@@ -59,8 +59,44 @@ class CellsTest {
         for (String bad : new String[] {"NaN", "Infinity", "n/a", "1,5", "2%", "1e", "--1", ".", "0x10", "1e5.5", "1d"}) {
             InputException e = assertThrows(InputException.class, () -> Cells.number(bad, FILE, 9, "A07"), bad);
             assertEquals("assets.csv line 9, column 'A07': '" + bad + "' is not a number; expected a decimal such as"
-                    + " 0.0123 or an empty cell", e.getMessage());
+                    + " 0.0123 or an empty cell" + CellHints.number(bad), e.getMessage());
         }
+    }
+
+    /** Each export form gets the fix that reads it; a cell of no known form gets none. */
+    @Test
+    void refusedNumbers_carryTheHintOfTheirForm() {
+        for (String marker : new String[] {"#N/A", "N/A", "NA", "NaN", "null", "-", ".", "#DIV/0!", "#VALUE!"}) {
+            assertEquals("; a missing value is an empty cell: leave the cell empty instead of writing '" + marker + "'",
+                    CellHints.number(marker), marker);
+        }
+        assertEquals("; a percent sign is not read: write returns as decimals (0.039 for 3.9 %)", CellHints.number("3.9%"));
+        assertEquals("; a percent sign is not read: write returns as decimals (0.039 for 3.9 %)", CellHints.number("-2 %"));
+        for (String comma : new String[] {"1,5", "-0,0123", "0,5e-3"}) {
+            assertEquals("; a decimal comma is not read: write '.' as the decimal point, with no thousands separator",
+                    CellHints.number(comma), comma);
+        }
+        for (String plain : new String[] {"abc", "1e", "--1", "0x10", "1,234,567", ",5", "Infinity"}) {
+            assertEquals("", CellHints.number(plain), plain);
+        }
+    }
+
+    @Test
+    void refusedDates_carryTheHintOfTheirForm() {
+        assertEquals("; a time of day is not read: keep the date part only (2020-01-31)", CellHints.date("2020-01-31 00:00:00"));
+        assertEquals("; a time of day is not read: keep the date part only (2020-01-31)", CellHints.date("2020-01-31T16:30"));
+        assertEquals("; in a date such as '31/01/2020' the order of day and month cannot be told for sure: re-save the"
+                + " column with the format YYYY-MM-DD", CellHints.date("31/01/2020"));
+        assertEquals("; write it with dashes, as 2020-01-31", CellHints.date("20200131"));
+        assertEquals("", CellHints.date("2020-1-31"));
+        assertEquals("", CellHints.date("Jan 31 2020"));
+    }
+
+    @Test
+    void headersSeparatedOtherwise_carryTheHint() {
+        assertTrue(CellHints.header("date;A01;A02").startsWith("; the header is separated by semicolons"));
+        assertEquals("; the header is separated by tabs: re-save the file comma-separated", CellHints.header("date\tA01"));
+        assertEquals("", CellHints.header("Date"));
     }
 
     @Test

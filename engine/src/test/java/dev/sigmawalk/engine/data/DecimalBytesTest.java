@@ -110,7 +110,7 @@ class DecimalBytesTest {
                 "1.2.3", "1 2")) {
             InputException e = assertThrows(InputException.class, () -> parse(bad), bad);
             assertEquals("assets.csv line 2, column 'A': '" + bad + "' is not a number; expected a decimal such as"
-                    + " 0.0123 or an empty cell", e.getMessage());
+                    + " 0.0123 or an empty cell" + CellHints.number(bad), e.getMessage());
         }
         InputException e = assertThrows(InputException.class, () -> parse("1e400"));
         assertEquals("assets.csv line 2, column 'A': '1e400' is not a finite number", e.getMessage());

@@ -291,6 +291,55 @@ class ResidualCorrelationsTest {
         }
     }
 
+    /**
+     * The stored correlations are ρ_ij = clamp((S_ij − s_im β_j)·(u_i u_j)) with β_j = s_jm / s_mm
+     * and u_i = 1/√d_i, bit for bit, and the statistics are their sums row by row, each row in four
+     * interleaved partial sums (the row's term k into partial sum k mod 4, the terms after the last
+     * group of four into the first, combined as (p0 + p1) + (p2 + p3)), the rows added in order:
+     * recomputed here in plain loops over 20 seeded windows with n from 3 to 42, so that a change
+     * in the order of any addition shows, on both routes (correlations kept or not).
+     */
+    @Test
+    void onePassSums_keepTheirOrderOfAdditionBitForBit() {
+        SplittableRandom cases = new SplittableRandom(0x5EED_0202L);
+        for (int c = 0; c < 20; c++) {
+            int n = 3 + cases.nextInt(40);
+            int len = 5 + cases.nextInt(60);
+            EstimationWindow w = ResidualRowsTest.withoutFirst(ResidualRowsTest.window(len, n, cases.nextLong()));
+            WindowMoments m = w.moments();
+            int k = w.assetCount();
+            double smm = m.marketVariance();
+            double[] sim = m.marketCovariance();
+            double[] u = new double[k];
+            for (int i = 0; i < k; i++) {
+                u[i] = 1.0 / Math.sqrt(m.covariance(i, i) - sim[i] * sim[i] / smm);
+            }
+            ResidualCorrelations rho = ResidualCorrelations.of(w);
+            String label = " (case " + c + ", n = " + k + ", L = " + len + ")";
+            double[] totals = new double[3];
+            for (int i = 0; i < k; i++) {
+                double[][] partial = new double[3][4];
+                for (int j = i + 1; j < k; j++) {
+                    double r = Math.max(-1.0, Math.min(1.0,
+                            (m.covariance(i, j) - sim[i] * (sim[j] / smm)) * (u[i] * u[j])));
+                    assertEquals(Double.doubleToRawLongBits(r), Double.doubleToRawLongBits(rho.correlation(i, j)),
+                            "rho(" + i + "," + j + ")" + label);
+                    int lane = (j - i - 1) < (k - i - 1) / 4 * 4 ? (j - i - 1) % 4 : 0;
+                    partial[0][lane] += r;
+                    partial[1][lane] += Math.abs(r);
+                    partial[2][lane] += r * r;
+                }
+                for (int q = 0; q < 3; q++) {
+                    totals[q] += (partial[q][0] + partial[q][1]) + (partial[q][2] + partial[q][3]);
+                }
+            }
+            ResidualDiagnostics want = ResidualDiagnostics.fromSums(k, len, totals[0], totals[2],
+                    totals[1] / (k * (k - 1) / 2));
+            assertEquals(want, rho.diagnostics(), "kept" + label);
+            assertEquals(want, ResidualCorrelations.diagnostics(m, w.assets()), "not kept" + label);
+        }
+    }
+
     private static void assertRelative(double expected, double actual, String what) {
         assertEquals(expected, actual, Math.abs(expected) * STATISTIC_RELATIVE, what);
     }

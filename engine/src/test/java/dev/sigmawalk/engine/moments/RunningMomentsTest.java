@@ -122,6 +122,92 @@ class RunningMomentsTest {
     }
 
     /**
+     * Every entry of a snapshot is the formula of Method §3 on the running sums,
+     * (D_ij − s_i s_j / L)/(L − 1), computed here entry by entry, bit for bit (the diagonal clamped
+     * at 0), whichever route the snapshot's rows take: every column of the panel (one run from
+     * column 0, read straight from the sums' rows), a run that starts later, seeded subsets with
+     * gaps and a single column (gathered through the column list). Panels of 150 columns, more
+     * than two blocks of the snapshot's rows; one column is constant, so its variance rounds to
+     * about 0 and must come out clamped, never negative.
+     */
+    @Test
+    void snapshot_ofAnyColumns_isTheFormulaBitForBit() {
+        SplittableRandom cases = new SplittableRandom(47L);
+        int constant = 7;
+        int fullRuns = 0;
+        for (int trial = 0; trial < 4; trial++) {
+            int length = 30 + cases.nextInt(90);
+            ReturnPanel panel = withConstantColumn(panel(1100, 150, 0.0, cases.nextLong()), constant, 0.0004);
+            RunningMoments running = new RunningMoments(panel, length);
+            for (int tau = length - 1; tau < panel.rows(); tau += 61 + cases.nextInt(90)) {
+                running.moveTo(tau);
+                int[] eligible = eligible(panel, tau, length);
+                fullRuns += eligible.length == 150 ? 1 : 0;
+                List<int[]> choices = List.of(eligible, range(4, 150), range(20, 90), subset(eligible, constant, cases),
+                        subset(eligible, constant, cases), new int[] {eligible[eligible.length / 2]});
+                for (int k = 0; k < choices.size(); k++) {
+                    String where = "trial " + trial + ", τ = " + tau + ", columns #" + k;
+                    WindowMoments got = assertFormula(running, choices.get(k), where);
+                    int at = Arrays.binarySearch(choices.get(k), constant);
+                    if (at >= 0) {
+                        double v = got.variance(at);
+                        assertTrue(v >= 0 && v < 1e-30, where + ": constant column's variance " + v);
+                    }
+                }
+            }
+        }
+        assertTrue(fullRuns >= 2, "snapshots of every column: " + fullRuns);
+    }
+
+    private static WindowMoments assertFormula(RunningMoments running, int[] cols, String where) {
+        WindowMoments got = running.snapshot(cols);
+        int n = cols.length;
+        double len = running.length();
+        double div = running.length() - 1.0;
+        double[] s = got.covariance();
+        for (int a = 0; a < n; a++) {
+            for (int b = 0; b < n; b++) {
+                int i = cols[Math.min(a, b)];
+                int j = cols[Math.max(a, b)];
+                double want = (running.crossSum(i, j) - running.columnSum(i) * running.columnSum(j) / len) / div;
+                if (a == b) {
+                    want = Math.max(0.0, want);
+                }
+                if (Double.doubleToRawLongBits(want) != Double.doubleToRawLongBits(s[a * n + b])) {
+                    throw new AssertionError(where + ": S(" + a + "," + b + ") = " + s[a * n + b] + ", formula " + want);
+                }
+            }
+        }
+        return got;
+    }
+
+    private static int[] range(int from, int to) {
+        int[] cols = new int[to - from];
+        Arrays.setAll(cols, k -> from + k);
+        return cols;
+    }
+
+    /** About four in five of the eligible columns, seeded, always with {@code keep}. */
+    private static int[] subset(int[] eligible, int keep, SplittableRandom rng) {
+        return Arrays.stream(eligible).filter(c -> c == keep || rng.nextInt(5) != 0).toArray();
+    }
+
+    /** The panel with column {@code col} set to {@code value} in every row. */
+    private static ReturnPanel withConstantColumn(ReturnPanel panel, int col, double value) {
+        int rows = panel.rows();
+        int n = panel.assetCount();
+        double[] r = panel.rawReturns().clone();
+        double[] m = new double[rows];
+        double[] rf = new double[rows];
+        for (int t = 0; t < rows; t++) {
+            r[t * n + col] = value;
+            m[t] = panel.market(t);
+            rf[t] = panel.riskFree(t);
+        }
+        return new ReturnPanel(days(rows), ids(n), r, m, rf, "index", 252);
+    }
+
+    /**
      * Returns whose spread (10^160) squares past the largest double: the sums overflow, so the
      * snapshot promises symmetry but not finiteness ({@link DenseProof#MIRRORED}), and the pairs
      * are still the same doubles (infinities and NaNs stored twice from one value).

@@ -1,6 +1,5 @@
 package dev.sigmawalk.reports.charts;
 
-import java.util.TreeSet;
 
 /**
  * Thins a long line for drawing without losing its peaks and troughs: the points are cut into
@@ -31,20 +30,31 @@ public final class Decimation {
             }
             return all;
         }
-        // Up to three points a bucket (low, high, first NaN) plus the two ends.
+        // Up to three points a bucket (low, high, first NaN) plus the two ends, marked in a mask
+        // and read back in index order: the ascending set of kept indices, without boxing.
         int buckets = (maxPoints - 2) / 3;
-        TreeSet<Integer> keep = new TreeSet<>();
-        keep.add(0);
-        keep.add(n - 1);
+        boolean[] keep = new boolean[n];
+        keep[0] = true;
+        keep[n - 1] = true;
         for (int b = 0; b < buckets; b++) {
             int start = (int) ((long) b * n / buckets);
             int end = (int) ((long) (b + 1) * n / buckets);
             keepExtremes(y, start, end, keep);
         }
-        return keep.stream().mapToInt(Integer::intValue).toArray();
+        int count = 0;
+        for (boolean k : keep) {
+            count += k ? 1 : 0;
+        }
+        int[] out = new int[count];
+        for (int k = 0, at = 0; k < n; k++) {
+            if (keep[k]) {
+                out[at++] = k;
+            }
+        }
+        return out;
     }
 
-    private static void keepExtremes(double[] y, int start, int end, TreeSet<Integer> keep) {
+    private static void keepExtremes(double[] y, int start, int end, boolean[] keep) {
         int low = -1;
         int high = -1;
         int gap = -1;
@@ -58,7 +68,7 @@ public final class Decimation {
         }
         for (int k : new int[] {low, high, gap}) {
             if (k >= 0) {
-                keep.add(k);
+                keep[k] = true;
             }
         }
     }

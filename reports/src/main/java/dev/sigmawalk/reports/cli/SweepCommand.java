@@ -26,7 +26,7 @@ public final class SweepCommand implements Callable<Integer> {
     Path out;
 
     @Option(names = "--force", description = "Write into a non-empty folder sigmawalk did not write"
-            + " (files of the same names are replaced; nothing else is touched).")
+            + ", beside its files (a file sigmawalk did not write is never replaced: a clash of names is refused).")
     boolean force;
 
     @Option(names = "--quiet", description = "No progress lines on standard error.")

@@ -17,14 +17,16 @@ import java.util.stream.Stream;
  * <p>Before any computation, {@link #prepare} refuses (as an {@link InputException}, exit 2) an
  * output folder that overlaps an input with a name the run writes ({@link InputOverlap}, with or
  * without {@code --force}), a path that is a file or lies under one, a dangling symbolic link, a
- * folder that cannot be written, and a non-empty folder that sigmawalk did not write (no
- * {@value #MARKER} file) unless forced. It removes work folders that killed runs left beside the
+ * folder that cannot be written, a non-empty folder that sigmawalk did not write (no
+ * {@value #MARKER} file) unless forced, and, forced or not, a folder holding a file sigmawalk did
+ * not write (not listed in the marker) under a name a run writes ({@link ForeignFiles}). It removes work folders that killed runs left beside the
  * target, and creates this run's staging folder there.
  *
  * <p>Everything is written into the staging folder; {@link #commit} publishes it whole: one
  * atomic rename when the target does not exist, else a journalled {@link Publication} that
  * restores the old folder if any rename fails. Files an earlier sigmawalk run wrote and this run
- * did not are removed; files sigmawalk did not write are never touched. A shutdown hook removes
+ * did not are removed; files sigmawalk did not write are never touched, and the publication
+ * refuses to replace one (a chart name that only the finished run knows). A shutdown hook removes
  * the staging folder when the process is stopped (SIGTERM, Ctrl-C) before the outputs are
  * published; it waits for a publication under way to finish first.
  */
@@ -59,7 +61,7 @@ public final class OutputFolder implements AutoCloseable {
      * Checks the target and creates the staging folder.
      *
      * @param target the output folder
-     * @param force write into a non-empty folder sigmawalk did not write (only same-name files are replaced)
+     * @param force write into a non-empty folder sigmawalk did not write (never replacing a file it did not write)
      * @param inputs every file the run reads (study file, data files); none may be overwritten
      * @param ops the file-system operations used to publish
      * @throws InputException when the target is refused; the message names the path and the rule
@@ -89,8 +91,12 @@ public final class OutputFolder implements AutoCloseable {
     private static void requireUsable(Path dir, boolean force) {
         if (!force && !isEmpty(dir) && !Files.exists(dir.resolve(MARKER))) {
             throw new InputException("output folder " + dir + " is not empty and was not written by sigmawalk;"
-                    + " choose another --out, or add --force to write into it (files of the same names are replaced,"
-                    + " nothing else is touched)");
+                    + " choose another --out, or add --force to write into it (beside its files: a file"
+                    + " sigmawalk did not write is never replaced)");
+        }
+        List<String> foreign = ForeignFiles.atOutputNames(dir);
+        if (!foreign.isEmpty()) {
+            throw ForeignFiles.refusal(dir, foreign);
         }
         if (!Files.isWritable(dir)) {
             throw new InputException("output folder " + dir + " is not writable; choose another --out or change"

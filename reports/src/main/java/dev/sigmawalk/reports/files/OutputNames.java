@@ -16,6 +16,16 @@ public final class OutputNames {
     private OutputNames() {
     }
 
+    /** Every file name sigmawalk writes at the top of its folder, the marker included. */
+    static Set<String> files() {
+        return FILES;
+    }
+
+    /** Every folder name sigmawalk writes into. */
+    static Set<String> folders() {
+        return FOLDERS;
+    }
+
     /** Whether a file of this name (no folder part) is one sigmawalk writes at the top of its folder. */
     public static boolean isOutputFile(String name) {
         return FILES.contains(name);

@@ -19,7 +19,8 @@ import java.util.stream.Stream;
  * file the new outputs replace, and every file an earlier sigmawalk run wrote that this run does
  * not (listed in the old marker), is renamed into a backup folder; then every new file is renamed
  * into place, the marker last. Each rename is journalled; when any step fails, the journal is
- * undone in reverse, so the folder is as it was. Files sigmawalk never wrote are never touched.
+ * undone in reverse, so the folder is as it was. Files sigmawalk never wrote are never touched:
+ * when one sits where a new file goes, nothing is moved and the run is refused ({@link ForeignFiles}).
  */
 final class Publication {
     private final FileOps ops;
@@ -78,7 +79,12 @@ final class Publication {
         try {
             fresh = new ArrayList<>(files(staging));
             fresh.add(OutputFolder.MARKER);
-            leaving = new TreeSet<>(previous(target));
+            Set<String> previous = previous(target);
+            List<String> foreign = ForeignFiles.among(target, fresh, previous);
+            if (!foreign.isEmpty()) {
+                throw ForeignFiles.refusal(target, foreign);
+            }
+            leaving = new TreeSet<>(previous);
             for (String f : fresh) {
                 if (Files.exists(target.resolve(f), java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
                     leaving.add(f);

@@ -56,4 +56,60 @@ class DecimationTest {
         assertTrue(Arrays.stream(kept).anyMatch(k -> y[k] == min), "lowest kept");
         assertTrue(Arrays.stream(kept).anyMatch(k -> y[k] == max), "highest kept");
     }
+
+    /**
+     * The kept indices are the ascending set of every bucket's low, high and first NaN plus both
+     * ends: the mask gives exactly what a sorted set of those indices gives, on seeded random lines
+     * with gaps and ties, of lengths around the bucket boundaries.
+     */
+    @Test
+    void keptIndices_equalTheSortedSetOfBucketExtremes() {
+        java.util.SplittableRandom cases = new java.util.SplittableRandom(77_003L);
+        for (int c = 0; c < 200; c++) {
+            int n = 5 + cases.nextInt(4000);
+            int limit = 4 + cases.nextInt(600);
+            double[] y = new double[n];
+            for (int k = 0; k < n; k++) {
+                double u = cases.nextDouble();
+                y[k] = u < 0.05 ? Double.NaN : u < 0.15 ? 0.5 : cases.nextGaussian();
+            }
+            assertArrayEquals(sortedSetOfExtremes(y, limit), Decimation.minMax(y, limit), "case " + c);
+        }
+    }
+
+    /** The rule spelled out with a sorted set, point by point. */
+    private static int[] sortedSetOfExtremes(double[] y, int limit) {
+        int n = y.length;
+        java.util.TreeSet<Integer> keep = new java.util.TreeSet<>();
+        if (n <= limit) {
+            for (int k = 0; k < n; k++) {
+                keep.add(k);
+            }
+        } else {
+            keep.add(0);
+            keep.add(n - 1);
+            int buckets = (limit - 2) / 3;
+            for (int b = 0; b < buckets; b++) {
+                int start = (int) ((long) b * n / buckets);
+                int end = (int) ((long) (b + 1) * n / buckets);
+                int low = -1;
+                int high = -1;
+                int gap = -1;
+                for (int k = start; k < end; k++) {
+                    if (Double.isNaN(y[k])) {
+                        gap = gap < 0 ? k : gap;
+                    } else {
+                        low = low < 0 || y[k] < y[low] ? k : low;
+                        high = high < 0 || y[k] > y[high] ? k : high;
+                    }
+                }
+                for (int k : new int[] {low, high, gap}) {
+                    if (k >= 0) {
+                        keep.add(k);
+                    }
+                }
+            }
+        }
+        return keep.stream().mapToInt(Integer::intValue).toArray();
+    }
 }

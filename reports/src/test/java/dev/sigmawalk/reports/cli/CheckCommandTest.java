@@ -198,7 +198,8 @@ class CheckCommandTest {
     void nonIsoDate_exitsTwo() {
         edit("assets.csv", "2020-04-30", "30.04.2020");
         assertRejected("assets.csv line 5, column 'date': '30.04.2020' is not an ISO-8601 date; expected YYYY-MM-DD,"
-                + " for example 2020-01-31");
+                + " for example 2020-01-31; in a date such as '30.04.2020' the order of day and month cannot be told"
+                + " for sure: re-save the column with the format YYYY-MM-DD");
     }
 
     @Test
@@ -224,7 +225,8 @@ class CheckCommandTest {
     @Test
     void nonNumericCell_exitsTwo() {
         edit("assets.csv", "2020-07-31,0.00,0.02", "2020-07-31,0.00,2%");
-        assertRejected("assets.csv line 8, column 'A02': '2%' is not a number; expected a decimal such as 0.0123 or an empty cell");
+        assertRejected("assets.csv line 8, column 'A02': '2%' is not a number; expected a decimal such as 0.0123 or an"
+                + " empty cell; a percent sign is not read: write returns as decimals (0.039 for 3.9 %)");
     }
 
     @Test

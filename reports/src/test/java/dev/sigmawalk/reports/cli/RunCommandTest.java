@@ -203,8 +203,22 @@ class RunCommandTest {
         }
         Result forced = sigmawalk("run", study.toString(), "--out", out.toString(), "--quiet", "--force");
         assertEquals(0, forced.code(), forced.err());
-        assertEquals("my own notes", Files.readString(mine), "--force replaces only files of its own names");
+        assertEquals("my own notes", Files.readString(mine), "--force writes beside the user's files");
         assertTrue(Files.exists(out.resolve("summary.csv")));
+    }
+
+    /** With --force too, a user's file named like an output is kept and the run refused (exit 2), before any work. */
+    @Test
+    void usersFileNamedLikeAnOutput_isKept_evenWithForce(@TempDir Path out) throws IOException {
+        Path mine = Files.writeString(out.resolve("summary.csv"), "my own summary");
+        Result forced = sigmawalk("run", study.toString(), "--out", out.toString(), "--quiet", "--force");
+        assertEquals(2, forced.code(), forced.err());
+        assertTrue(forced.err().contains("sigmawalk never replaces a file it did not write, with or without --force"),
+                forced.err());
+        assertEquals("my own summary", Files.readString(mine));
+        try (Stream<Path> s = Files.list(out)) {
+            assertEquals(List.of(mine), s.toList());
+        }
     }
 
     @Test

@@ -186,10 +186,9 @@ class OutputFolderTest {
     }
 
     @Test
-    void forceIntoForeignFolder_replacesOnlySameNameFiles() throws IOException {
+    void forceIntoForeignFolder_writesBesideTheUsersFiles() throws IOException {
         Path mine = dir.resolve("mine");
         write(mine.resolve("thesis.tex"), "a user's file");
-        write(mine.resolve("summary.csv"), "a user's summary");
         write(mine.resolve("charts/figure.png"), "a user's figure");
         try (OutputFolder f = OutputFolder.prepare(mine, true, List.of())) {
             stageNewRun(f);
@@ -200,6 +199,61 @@ class OutputFolderTest {
         assertEquals("a user's figure", after.get("charts/figure.png"));
         assertEquals("new summary", after.get("summary.csv"));
         assertEquals("new chart 36", after.get("charts/growth-36.png"));
+    }
+
+    /**
+     * A file of the user's under a name a run writes (here summary.csv and report.html) is never
+     * replaced, not even with --force: the folder is refused before any work, naming the files,
+     * and nothing in it changes.
+     */
+    @Test
+    void usersFileAtAnOutputName_isRefusedWithOrWithoutForce() throws IOException {
+        Path mine = dir.resolve("mine");
+        write(mine.resolve("summary.csv"), "a user's summary");
+        write(mine.resolve("report.html"), "a user's page");
+        write(mine.resolve("thesis.tex"), "a user's file");
+        Map<String, String> before = snapshot(mine);
+        InputException e = assertThrows(InputException.class, () -> OutputFolder.prepare(mine, true, List.of()));
+        assertEquals("output folder " + mine.toRealPath() + " holds files sigmawalk did not write under names a run"
+                + " writes (report.html, summary.csv); sigmawalk never replaces a file it did not write, with or"
+                + " without --force: move them elsewhere or choose another --out", e.getMessage());
+        assertEquals(before, snapshot(mine));
+        assertEquals(List.of("mine"), names(dir), "no staging folder created");
+    }
+
+    /**
+     * In a folder an earlier run wrote, a file the user added later under a name the run writes
+     * (not in the marker's list) is the user's as well: refused, kept.
+     */
+    @Test
+    void usersFileAddedToARunsFolder_isRefused() throws IOException {
+        Path out = earlierRun();
+        write(out.resolve("report.pdf"), "the user's own printout");
+        Map<String, String> before = snapshot(out);
+        InputException e = assertThrows(InputException.class, () -> OutputFolder.prepare(out, false, List.of()));
+        assertTrue(e.getMessage().contains("holds a file sigmawalk did not write under a name a run writes (report.pdf)"),
+                e.getMessage());
+        assertEquals(before, snapshot(out));
+    }
+
+    /**
+     * A chart's name is known only once the run has drawn it: a user's file of that name in
+     * charts/ is found at publication, which then moves nothing, removes its staging folder and
+     * refuses; the folder is as it was.
+     */
+    @Test
+    void usersChartAtTheNameOfANewChart_isRefusedAtPublication() throws IOException {
+        Path mine = dir.resolve("mine");
+        write(mine.resolve("charts/growth-36.png"), "a user's own growth chart");
+        write(mine.resolve("thesis.tex"), "a user's file");
+        Map<String, String> before = snapshot(mine);
+        try (OutputFolder f = OutputFolder.prepare(mine, true, List.of())) {
+            stageNewRun(f);
+            InputException e = assertThrows(InputException.class, f::commit);
+            assertTrue(e.getMessage().contains("(charts/growth-36.png)"), e.getMessage());
+        }
+        assertEquals(before, snapshot(mine));
+        assertEquals(List.of("mine"), names(dir), "staging folder removed");
     }
 
     @Test

@@ -1,7 +1,9 @@
 package dev.sigmawalk.strategies.optimize;
 
 import java.util.Arrays;
+import java.util.List;
 import java.util.Objects;
+import java.util.function.IntFunction;
 
 /**
  * Closed forms for the budget-only problem minimise ½ w'Qw − c'w s.t. Σ w = 1 (short sales
@@ -31,8 +33,25 @@ public final class UnboundedSolver {
         return solve(sigma, new double[n], n);
     }
 
+    /**
+     * {@link #minVariance(double[], int)} for the named assets (in Σ's order): a singular Σ is
+     * reported at the asset whose pivot vanished.
+     */
+    public SolveOutcome minVariance(double[] sigma, List<String> assets) {
+        return solve(sigma, new double[assets.size()], assets.size(), i -> "asset '" + assets.get(i) + "'");
+    }
+
     /** minimise ½ w'Qw − c'w s.t. Σ w = 1; {@code q} dense row-major n×n. */
     public SolveOutcome solve(double[] q, double[] c, int n) {
+        return solve(q, c, n, i -> "the asset at position " + i);
+    }
+
+    /** {@link #solve(double[], double[], int)} for the named assets (in Q's order). */
+    public SolveOutcome solve(double[] q, double[] c, List<String> assets) {
+        return solve(q, c, assets.size(), i -> "asset '" + assets.get(i) + "'");
+    }
+
+    private SolveOutcome solve(double[] q, double[] c, int n, IntFunction<String> asset) {
         QuadraticProblem problem = free(n, q, c);
         CholeskyFactor factor = new CholeskyFactor(n);
         double[] column = new double[n];
@@ -42,8 +61,10 @@ public final class UnboundedSolver {
             }
             if (!factor.append(column, q[i * n + i], settings.singularPivot())) {
                 return new SolveOutcome.Failed("the " + n + "x" + n + " matrix is singular or not positive definite"
-                        + " (Cholesky pivot " + i + " vanishes); with fewer window periods than assets the"
-                        + " sample covariance is always singular");
+                        + " (Cholesky pivot " + i + " vanishes: " + asset.apply(i) + " is, to rounding, a mix of"
+                        + " the assets before it); a sample covariance is singular when the window has no more"
+                        + " periods than assets, or when assets move together exactly (a column repeated, one"
+                        + " series a combination of others)");
             }
         }
         double[] x = c.clone();

@@ -44,7 +44,7 @@ public record MeanVariance(double riskAversion, SolverSettings settings) impleme
         }
         double[] mu = input.expectedReturns();
         SolveOutcome outcome = input.bounds().isEmpty()
-                ? new UnboundedSolver(settings).solve(q, mu, n)
+                ? new UnboundedSolver(settings).solve(q, mu, input.assets())
                 : new ActiveSetSolver(settings).solve(
                         new QuadraticProblem(n, q, mu, Solved.lower(input), Solved.upper(input)),
                         warm.guessFor(input.assets()));

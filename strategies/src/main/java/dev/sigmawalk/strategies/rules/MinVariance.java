@@ -68,7 +68,7 @@ public record MinVariance(SolverSettings settings) implements PortfolioRule {
         if (input.bounds().isEmpty()) {
             return factorForm
                     ? new SingleFactorMinVariance(settings).unbounded((SingleFactorForm) input.covariance())
-                    : new UnboundedSolver(settings).minVariance(input.covariance().dense(), n);
+                    : new UnboundedSolver(settings).minVariance(input.covariance().dense(), input.assets());
         }
         double[] lo = Solved.lower(input);
         double[] hi = Solved.upper(input);

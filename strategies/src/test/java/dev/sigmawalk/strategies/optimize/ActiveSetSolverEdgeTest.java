@@ -114,6 +114,24 @@ class ActiveSetSolverEdgeTest {
     }
 
     /**
+     * Three assets, the second a copy of the first, in a window with more periods than assets: Σ
+     * is singular all the same, and the refusal names the copy (whose pivot vanishes, being
+     * exactly the first asset) rather than blaming the window's length alone.
+     */
+    @Test
+    void repeatedColumn_unbounded_isFailedNamingTheCopy() {
+        double[] sigma = {
+            0.04, 0.04, 0.01,
+            0.04, 0.04, 0.01,
+            0.01, 0.01, 0.09};
+        SolveOutcome out = new UnboundedSolver(settings).minVariance(sigma, java.util.List.of("K1", "K1-copy", "K2"));
+        SolveOutcome.Failed failed = assertInstanceOf(SolveOutcome.Failed.class, out);
+        assertTrue(failed.reason().startsWith("the 3x3 matrix is singular or not positive definite (Cholesky pivot 1"
+                + " vanishes: asset 'K1-copy' is, to rounding, a mix of the assets before it)"), failed.reason());
+        assertTrue(failed.reason().contains("or when assets move together exactly"), failed.reason());
+    }
+
+    /**
      * The same rank-deficient matrix with bounds [0, 0.5]: the problem is bounded, so the
      * semi-definite treatment must find a point that passes the KKT check, with no NaN.
      */
