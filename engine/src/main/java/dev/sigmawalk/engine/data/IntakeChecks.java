@@ -17,6 +17,12 @@ final class IntakeChecks {
     static final double MEAN_MARKET_TOLERANCE = 1e-10;
     /** Decimal returns above this in size in most rows mean the file holds percent. */
     static final double PERCENT_MEDIAN = 0.5;
+    /**
+     * A market whose standard deviation is below this fraction of the median asset's is not an
+     * index's returns. Common practice, no source: a broad equity index's volatility is of the
+     * order of a half to one times a typical member's, never a hundredth of it.
+     */
+    static final double BARELY_VARYING_MARKET = 0.01;
     /** Fewer returns beyond ±100 % in a column are left to the +500 % warning. */
     static final int MANY_BEYOND_ONE = 3;
 
@@ -172,5 +178,63 @@ final class IntakeChecks {
                     + " use an index measured on its own, or the residual tests are distorted (mean residual"
                     + " correlation near -1/(n-1))");
         }
+    }
+
+    /**
+     * Warns when the market's standard deviation over the panel is positive but below
+     * {@value #BARELY_VARYING_MARKET} of the median of the assets' (each over its own returns):
+     * betas against such a series are enormous and mean nothing, while windows where it does not
+     * vary at all are already refused by the models (Method §3). A rate or a stale series
+     * standing in for an index's returns looks like this.
+     */
+    void warnMarketBarelyVaries() {
+        double market = standardDeviation(t -> panel.market(t));
+        int n = panel.assetCount();
+        double[] sd = new double[n];
+        int counted = 0;
+        for (int j = 0; j < n; j++) {
+            int col = j;
+            double s = standardDeviation(t -> panel.value(t, col));
+            if (!Double.isNaN(s)) {
+                sd[counted++] = s;
+            }
+        }
+        if (counted == 0 || !(market > 0)) {
+            return;
+        }
+        double[] kept = java.util.Arrays.copyOf(sd, counted);
+        java.util.Arrays.sort(kept);
+        double median = counted % 2 == 1 ? kept[counted / 2] : (kept[counted / 2 - 1] + kept[counted / 2]) / 2;
+        if (market < BARELY_VARYING_MARKET * median) {
+            warnings.add(String.format(Locale.ROOT, "the market '%s' barely varies: its returns' standard deviation is"
+                    + " %.3g per period against a median of %.3g for the assets (%.2g %% of it); betas measured"
+                    + " against it are enormous and mean nothing: check that the column holds an index's returns,"
+                    + " not a rate or a stale series", panel.marketName(), market, median, 100 * market / median));
+        }
+    }
+
+    /** The sample standard deviation (divisor n − 1) of a series' non-missing values; NaN below two values. */
+    private double standardDeviation(java.util.function.IntToDoubleFunction value) {
+        double sum = 0;
+        int count = 0;
+        for (int t = 0; t < panel.rows(); t++) {
+            double v = value.applyAsDouble(t);
+            if (!Double.isNaN(v)) {
+                sum += v;
+                count++;
+            }
+        }
+        if (count < 2) {
+            return Double.NaN;
+        }
+        double mean = sum / count;
+        double squares = 0;
+        for (int t = 0; t < panel.rows(); t++) {
+            double v = value.applyAsDouble(t);
+            if (!Double.isNaN(v)) {
+                squares += (v - mean) * (v - mean);
+            }
+        }
+        return Math.sqrt(squares / (count - 1));
     }
 }

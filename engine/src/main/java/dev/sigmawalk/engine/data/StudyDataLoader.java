@@ -93,6 +93,7 @@ final class StudyDataLoader {
         checks.warnImplausibleReturns(table, assetCols, kept);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
         checks.warnMarketIsAssetMean();
+        checks.warnMarketBarelyVaries();
         requireFeasibleBounds(panel.assetCount());
 
         warnFewResamples();
