@@ -9,9 +9,10 @@ import java.util.regex.Pattern;
 
 /**
  * One text cell of a CSV file as the UTF-8 bytes {@link CsvWriter} writes for it: inert in a
- * spreadsheet, then quoted when it holds a comma, quote or line break (RFC 4180). A file writer
- * prepares a cell once for a value it repeats on many rows (a date, a strategy, an asset name),
- * so the checks and the encoding are not redone per row.
+ * spreadsheet, then quoted when it holds a comma, quote or line break (RFC 4180); or a few
+ * adjacent cells joined ({@link #then}). A file writer prepares a cell once for a value it
+ * repeats on many rows (a date, a strategy, an asset name), so the checks and the encoding are
+ * not redone per row.
  *
  * <p>Inert: a text that starts with {@code =}, {@code +}, {@code -}, {@code @}, a tab or a
  * carriage return (which a spreadsheet runs as a formula) gets a leading apostrophe, as the OWASP
@@ -31,6 +32,23 @@ final class CsvCell {
     /** The cell that holds {@code value}. */
     static CsvCell of(String value) {
         return new CsvCell(encode(value));
+    }
+
+    /** The cell that holds the decimal digits of {@code value}, as {@link CsvWriter#integer} writes them. */
+    static CsvCell integer(long value) {
+        return new CsvCell(Long.toString(value).getBytes(StandardCharsets.US_ASCII));
+    }
+
+    /**
+     * This cell and {@code next} as one piece of a row, comma between: a file writer joins the
+     * cells that open every row of a rebalance (date, strategy, window) and writes them at once.
+     */
+    CsvCell then(CsvCell next) {
+        byte[] joined = new byte[bytes.length + 1 + next.bytes.length];
+        System.arraycopy(bytes, 0, joined, 0, bytes.length);
+        joined[bytes.length] = ',';
+        System.arraycopy(next.bytes, 0, joined, bytes.length + 1, next.bytes.length);
+        return new CsvCell(joined);
     }
 
     /** The bytes written for this cell (not a copy: callers only read them). */

@@ -32,6 +32,7 @@ final class CsvWriter implements AutoCloseable {
     private static final int BUFFER = 1 << 16;
     /** Enough for any long: 19 digits and a sign. */
     private static final int LONG_DIGITS = 20;
+    private static final byte[] ZERO = {'0', '.', '0'};
     private final Path file;
     private final OutputStream out;
     private final byte[] buffer = new byte[BUFFER];
@@ -71,7 +72,12 @@ final class CsvWriter implements AutoCloseable {
 
     CsvWriter number(double value) {
         sep();
-        if (Double.isFinite(value)) {
+        if (Double.doubleToRawLongBits(value) == 0L) {
+            // Most weights of a long-only portfolio with bounds are exactly zero.
+            room(ZERO.length);
+            System.arraycopy(ZERO, 0, buffer, used, ZERO.length);
+            used += ZERO.length;
+        } else if (Double.isFinite(value)) {
             ascii(NumberOutput.toString(value, true));
         }
         return this;

@@ -57,13 +57,13 @@ public final class EvidenceFiles {
                         continue;
                     }
                     SingleIndexEstimates est = e.estimates().get();
-                    CsvCell date = CsvCell.of(e.date().toString());
+                    CsvCell start = CsvCell.of(e.date().toString()).then(CsvCell.integer(w));
                     List<String> assets = est.assets();
                     double[] alpha = est.alpha();
                     double[] beta = est.beta();
                     double[] residualVariance = est.residualVariance();
                     for (int i = 0; i < assets.size(); i++) {
-                        csv.cell(date).integer(w).cell(names.of(assets.get(i))).number(alpha[i]).number(beta[i])
+                        csv.cell(start).cell(names.of(assets.get(i))).number(alpha[i]).number(beta[i])
                                 .number(residualVariance[i]).end();
                     }
                 }

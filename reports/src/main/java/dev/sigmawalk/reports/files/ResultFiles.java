@@ -69,12 +69,11 @@ public final class ResultFiles {
             for (PathResult p : run.paths()) {
                 CsvCell strategy = CsvCell.of(p.strategy());
                 for (RebalanceRecord r : p.rebalances()) {
-                    CsvCell date = CsvCell.of(r.date().toString());
+                    CsvCell start = CsvCell.of(r.date().toString()).then(strategy).then(CsvCell.integer(p.window()));
                     List<String> assets = r.assets();
                     double[] weights = r.weights();
                     for (int i = 0; i < assets.size(); i++) {
-                        csv.cell(date).cell(strategy).integer(p.window()).cell(names.of(assets.get(i)))
-                                .number(weights[i]).end();
+                        csv.cell(start).cell(names.of(assets.get(i))).number(weights[i]).end();
                     }
                 }
             }

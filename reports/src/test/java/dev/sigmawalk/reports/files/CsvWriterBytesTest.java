@@ -290,6 +290,16 @@ class CsvWriterBytesTest {
         }));
     }
 
+    @Test
+    void joinedCells_writeTheSameBytesAsTheCellsOneByOne() throws IOException {
+        long[] windows = {0, 7, 250, -3, Long.MIN_VALUE};
+        for (long w : windows) {
+            CsvCell start = CsvCell.of("2005-10-31").then(CsvCell.of("a,b")).then(CsvCell.integer(w));
+            assertEquals(written(csv -> csv.text("2005-10-31").text("a,b").integer(w).text("TW01").number(0.0)),
+                    written(csv -> csv.cell(start).cell(CsvCell.of("TW01")).number(0.0)), "window " + w);
+        }
+    }
+
     private String written(Consumer<CsvWriter> row) throws IOException {
         Path file = dir.resolve("row.csv");
         try (CsvWriter csv = new CsvWriter(file, "h")) {
