@@ -305,8 +305,8 @@ class CheckCommandTest {
     @Test
     void windowLongerThanTheData_isRejected() {
         edit("study.yaml", "windows: [3, 4]", "windows: [3, 12]");
-        assertRejected("study.yaml: walkforward.windows: the longest window (12 rows) needs at least 13 rows of data"
-                + " (a window plus one row to hold), but the data have 8 (2020-01-31 to 2020-08-31)");
+        assertRejected("study.yaml: walkforward.windows: the longest window (12 rows) needs at least 14 rows of data"
+                + " (a window plus two rows to hold: a spread of returns needs two), but the data have 8 (2020-01-31 to 2020-08-31)");
     }
 
     @Test
