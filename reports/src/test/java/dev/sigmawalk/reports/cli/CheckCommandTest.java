@@ -309,6 +309,15 @@ class CheckCommandTest {
                 + " (a window plus two rows to hold: a spread of returns needs two), but the data have 8 (2020-01-31 to 2020-08-31)");
     }
 
+    /** The run refuses this study before it starts (Method §11), so check must refuse it too. */
+    @Test
+    void nonlinearShrinkageOnAWindowTooShortForTheAssets_isRejectedAsByRun() {
+        edit("study.yaml", "    risk: single-index\n", "    risk: nonlinear-shrinkage\n");
+        assertRejected("study.yaml: strategies[0] (risk: nonlinear-shrinkage) with window 3 and up to 3 assets:"
+                + " with more assets than L - 1 the formula needs a window of at least 13 rows;"
+                + " lengthen walkforward.windows");
+    }
+
     @Test
     void bothRebalanceKeys_areRejected() {
         edit("study.yaml", "rebalance_every: 1", "rebalance_every: 1\n  rebalance: month-end");
