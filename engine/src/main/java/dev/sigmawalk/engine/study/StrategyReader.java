@@ -94,7 +94,7 @@ final class StrategyReader {
         boolean singleIndexInputs = objective.needsExpectedReturns() && expected == ExpectedReturnKind.SINGLE_INDEX;
         Optional<Path> alphas = onlyWith(s, "alphas", singleIndexInputs) ? Optional.of(s.path("alphas")) : Optional.empty();
         OptionalDouble premium = onlyWith(s, "market_premium", singleIndexInputs)
-                ? OptionalDouble.of(s.number("market_premium")) : OptionalDouble.empty();
+                ? OptionalDouble.of(marketPremium(s)) : OptionalDouble.empty();
         Optional<String> baseline = s.has("baseline") ? Optional.of(s.text("baseline")) : Optional.empty();
         RiskSettings settings = RiskSettingsReader.read(s, risk, sectorsGiven);
         return new StrategySpec(name, risk, target, objective, bounds, riskAversion, expected, alphas, premium, baseline,
@@ -157,6 +157,16 @@ final class StrategyReader {
                     + upper + "] has lower > upper; expected [lower, upper] with lower <= upper, such as [0, 0.10]");
         }
         return new Bounds(lower, upper);
+    }
+
+    /** An annual premium, held to the risk-free rate's plausible range (-1, 1). */
+    private static double marketPremium(Section s) {
+        double premium = s.number("market_premium");
+        if (!(premium > -1 && premium < 1)) {
+            throw s.bad("market_premium", "is not a plausible annual premium; expected a decimal in (-1, 1), such as"
+                    + " 0.05 for 5 %");
+        }
+        return premium;
     }
 
     private static double riskAversion(Section s, Objective objective) {

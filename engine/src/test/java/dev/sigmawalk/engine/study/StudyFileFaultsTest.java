@@ -209,4 +209,16 @@ class StudyFileFaultsTest {
         assertEquals("study.yaml line 14, column 15: strategies[0].baseline: 'plain' names no other strategy;"
                 + " the study has no other strategy to compare with, so remove the key", e.getMessage());
     }
+
+    /**
+     * The premium is annual and divided by periods_per_year (Method §4); -100 made the market's
+     * expected return per period a loss of more than everything, and the run took it.
+     */
+    @Test
+    void marketPremiumBeyondAPlausibleAnnualRate_isRefused() throws IOException {
+        InputException e = fails(STUDY.replace("    objective: min-variance", "    objective: max-sharpe\n"
+                + "    market_premium: -100"));
+        assertEquals("study.yaml line 13, column 21: strategies[0].market_premium: -100 is not a plausible annual"
+                + " premium; expected a decimal in (-1, 1), such as 0.05 for 5 %", e.getMessage());
+    }
 }
