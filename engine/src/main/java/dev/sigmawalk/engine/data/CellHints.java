@@ -35,7 +35,22 @@ final class CellHints {
         if (t.indexOf(',') > 0 && t.indexOf(',') == t.lastIndexOf(',') && DecimalSpelling.isPlain(t.replace(',', '.'))) {
             return "; a decimal comma is not read: write '.' as the decimal point, with no thousands separator";
         }
-        return "";
+        return foreignCharacter(cell);
+    }
+
+    /**
+     * A character outside ASCII, which no number holds, named by its code point: a no-break
+     * space or a typeset minus sign looks like nothing or like '-' in the message's quotes.
+     */
+    private static String foreignCharacter(String cell) {
+        int c = cell.codePoints().filter(x -> x > 0x7f).findFirst().orElse(-1);
+        if (c < 0) {
+            return "";
+        }
+        String name = Character.getName(c);
+        boolean dash = Character.getType(c) == Character.DASH_PUNCTUATION || c == 0x2212;
+        return "; it holds " + String.format("U+%04X", c) + (name == null ? "" : " (" + name + ")")
+                + ", which no number contains: " + (dash ? "write the ASCII '-' instead" : "remove it");
     }
 
     /** The hint for a cell that is not an ISO-8601 date, starting with "; ", or "". */

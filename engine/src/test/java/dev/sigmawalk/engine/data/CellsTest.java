@@ -81,6 +81,21 @@ class CellsTest {
         }
     }
 
+    /** Characters a spreadsheet or word processor puts into a number that look like ASCII ones or like nothing. */
+    @Test
+    void invisibleAndLookAlikeCharacters_areNamed() {
+        assertEquals("; it holds U+00A0 (NO-BREAK SPACE), which no number contains: remove it",
+                CellHints.number("0.01\u00a0"));
+        assertEquals("; it holds U+202F (NARROW NO-BREAK SPACE), which no number contains: remove it",
+                CellHints.number("1\u202f000"));
+        assertEquals("; it holds U+2212 (MINUS SIGN), which no number contains: write the ASCII '-' instead",
+                CellHints.number("\u22120.01"));
+        assertEquals("; it holds U+2013 (EN DASH), which no number contains: write the ASCII '-' instead",
+                CellHints.number("\u20130.01"));
+        assertEquals("; it holds U+FEFF (ZERO WIDTH NO-BREAK SPACE), which no number contains: remove it",
+                CellHints.number("\ufeff0.01"));
+    }
+
     @Test
     void refusedDates_carryTheHintOfTheirForm() {
         assertEquals("; a time of day is not read: keep the date part only (2020-01-31)", CellHints.date("2020-01-31 00:00:00"));
