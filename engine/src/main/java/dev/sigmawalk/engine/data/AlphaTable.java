@@ -81,6 +81,7 @@ public final class AlphaTable {
                     throw new InputException(new InputException.Location(file, line, "alpha"),
                             "'' is empty; expected a per-period alpha such as 0.001");
                 }
+                requirePlausible(alpha, cells[2], file, line);
                 if (collected.computeIfAbsent(asset, a -> new TreeMap<>()).put(date, alpha) != null) {
                     throw new InputException(new InputException.Location(file, line, "date"),
                             "'" + cells[0] + "' repeats an alpha for asset '" + asset + "' on that date");
@@ -124,5 +125,23 @@ public final class AlphaTable {
     @Override
     public int hashCode() {
         return Objects.hash(byAsset.keySet(), size());
+    }
+
+    /**
+     * An alpha is a per-period expected return, so it obeys the bounds of a return (Method §1):
+     * above {@link Cells#LARGEST_RETURN} the mean-variance problem's linear term swamps the risk
+     * term and the solver's own checks fail, and below -1 it is a loss of more than everything.
+     */
+    private static void requirePlausible(double alpha, String cell, Path file, int line) {
+        if (alpha > Cells.LARGEST_RETURN) {
+            throw new InputException(new InputException.Location(file, line, "alpha"), "'" + cell
+                    + "' is an alpha above 1e12 per period, more than any asset earns; expected a per-period decimal"
+                    + " alpha such as 0.001");
+        }
+        if (alpha < -1) {
+            throw new InputException(new InputException.Location(file, line, "alpha"), "'" + cell
+                    + "' is an alpha below -1 per period, a loss of more than everything; expected a per-period"
+                    + " decimal alpha such as 0.001 (if the file holds percent, divide every value by 100)");
+        }
     }
 }

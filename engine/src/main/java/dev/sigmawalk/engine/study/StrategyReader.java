@@ -50,8 +50,9 @@ final class StrategyReader {
         for (int i = 0; i < out.size(); i++) {
             Optional<String> baseline = out.get(i).baseline();
             if (baseline.isPresent() && (!names.containsKey(baseline.get()) || baseline.get().equals(out.get(i).name()))) {
-                throw sections.get(i).bad("baseline", "names no other strategy; expected one of "
-                        + String.join(", ", otherNames(out, i)));
+                throw sections.get(i).bad("baseline", out.size() == 1
+                        ? "names no other strategy; the study has no other strategy to compare with, so remove the key"
+                        : "names no other strategy; expected one of " + String.join(", ", otherNames(out, i)));
             }
         }
         return out;
@@ -75,6 +76,13 @@ final class StrategyReader {
         if (Names.startsLikeFormula(name)) {
             throw s.bad("name", Names.formulaProblem("strategy"));
         }
+        int control = firstLineBreaker(name);
+        if (control >= 0) {
+            YamlNode n = s.node("name");
+            throw InputException.at(s.file(), n.line(), n.column(), s.pathOf("name") + ": '" + escaped(name)
+                    + "' holds the control character " + String.format("U+%04X", control) + ", which would break the"
+                    + " rows of the output CSV files; expected a name of printable characters on one line");
+        }
         Objective objective = s.choice("objective", Objective.class);
         RiskKind risk = objective == Objective.EQUAL_WEIGHT && !s.has("risk")
                 ? StudyDefaults.EQUAL_WEIGHT_RISK
@@ -91,6 +99,39 @@ final class StrategyReader {
         RiskSettings settings = RiskSettingsReader.read(s, risk, sectorsGiven);
         return new StrategySpec(name, risk, target, objective, bounds, riskAversion, expected, alphas, premium, baseline,
                 settings);
+    }
+
+    /**
+     * The first character of {@code name} that a CSV reader may take as the end of a row or that
+     * no text cell should hold (a control character, a Unicode line or paragraph separator), or -1.
+     */
+    private static int firstLineBreaker(String name) {
+        return name.codePoints().filter(StrategyReader::breaksLines).findFirst().orElse(-1);
+    }
+
+    private static boolean breaksLines(int c) {
+        int type = Character.getType(c);
+        return Character.isISOControl(c) || type == Character.LINE_SEPARATOR || type == Character.PARAGRAPH_SEPARATOR;
+    }
+
+    /** {@code name} with those characters spelled as escapes, so the message stays on one line. */
+    private static String escaped(String name) {
+        StringBuilder out = new StringBuilder();
+        name.codePoints().forEach(c -> {
+            switch (c) {
+                case '\n' -> out.append("\\n");
+                case '\r' -> out.append("\\r");
+                case '\t' -> out.append("\\t");
+                default -> {
+                    if (breaksLines(c)) {
+                        out.append(String.format("\\u%04X", c));
+                    } else {
+                        out.appendCodePoint(c);
+                    }
+                }
+            }
+        });
+        return out.toString();
     }
 
     private static ShrinkageTarget shrinkageTarget(Section s, RiskKind risk) {

@@ -13,7 +13,8 @@ import java.util.Arrays;
  * the first rebalance is τ_0 = max(L_max − 1, first row on or after {@code start}); then every
  * k rows, or on each row that is the last of its calendar month / quarter / year in the data's
  * own dates (the first being the earliest such row at or after that τ_0). The last rebalance
- * leaves at least one row to hold.
+ * leaves at least one row to hold, and the first at least two: the out-of-sample measures of
+ * Method §7 take a standard deviation of the held returns, which one return does not have.
  */
 public final class Timeline {
     private Timeline() {
@@ -30,7 +31,7 @@ public final class Timeline {
         int startRow = spec.start().map(panel::firstRowOnOrAfter).orElse(0);
         int tau0 = Math.max(longest - 1, startRow);
         int lastRow = rows - 1;
-        if (tau0 >= lastRow) {
+        if (tau0 >= lastRow - 1) {
             throw new InputException(tooShort(panel, longest, startRow, rows));
         }
         int[] candidates = spec.rebalance() instanceof RebalanceRule.CalendarEnd c
@@ -40,17 +41,26 @@ public final class Timeline {
             throw new InputException("walkforward: no " + describe(spec.rebalance()) + " row between "
                     + panel.date(tau0) + " and " + panel.date(lastRow - 1) + " leaves a row to hold");
         }
+        if (lastRow - candidates[0] < 2) {
+            throw new InputException("walkforward: the first " + describe(spec.rebalance()) + " rebalance, "
+                    + panel.date(candidates[0]) + ", leaves one row to hold (data end " + panel.date(lastRow)
+                    + "); a spread of returns needs two");
+        }
         return new Schedule(candidates, lastRow);
     }
 
     private static String tooShort(ReturnPanel panel, int longest, int startRow, int rows) {
-        if (longest >= rows) {
+        if (longest >= rows - 1) {
             return "walkforward.windows: the longest window (" + longest + " rows) needs at least "
-                    + (longest + 1) + " rows of data (a window plus one row to hold), but the data have " + rows
+                    + (longest + 2) + " rows of data (a window plus two rows to hold: a spread of returns needs two),"
+                    + " but the data have " + rows
                     + (rows > 0 ? " (" + panel.date(0) + " to " + panel.date(rows - 1) + ")" : "");
         }
-        return "walkforward.start: no row after " + (startRow < rows ? panel.date(startRow) : "the last date")
-                + " is left to hold a portfolio (data end " + panel.date(rows - 1) + ")";
+        if (startRow >= rows) {
+            return "walkforward.start: no row is left to hold a portfolio (data end " + panel.date(rows - 1) + ")";
+        }
+        return "walkforward.start: from " + panel.date(startRow) + " on fewer than two rows are left to hold a"
+                + " portfolio (data end " + panel.date(rows - 1) + "); a spread of returns needs two";
     }
 
     private static int[] everyRows(int k, int tau0, int lastRow) {

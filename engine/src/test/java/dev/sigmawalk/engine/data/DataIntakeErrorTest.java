@@ -144,7 +144,7 @@ class DataIntakeErrorTest {
     @Test
     void windowLongerThanTheData_isAnError() {
         InputException e = loadFails(new StudyFixture(dir).edit("study.yaml", "windows: [3]", "windows: [8]"));
-        assertTrue(e.getMessage().contains("the longest window (8 rows) needs at least 9 rows"), e.getMessage());
+        assertTrue(e.getMessage().contains("the longest window (8 rows) needs at least 10 rows"), e.getMessage());
         assertEquals("study.yaml", e.location().file().getFileName().toString());
     }
 

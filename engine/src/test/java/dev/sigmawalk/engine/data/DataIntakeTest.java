@@ -191,6 +191,26 @@ class DataIntakeTest {
         assertEquals("alphas.csv line 3, column 'date': '2020-01-31' repeats an alpha for asset 'A01' on that date", e.getMessage());
     }
 
+    /** An alpha is a per-period return, held to the same bounds as a return (Method §1). */
+    @Test
+    void alphaBeyondAnyReturn_isAnErrorAtItsCell() {
+        StudyFixture f = new StudyFixture(dir).write("alphas.csv", "date,asset,alpha\n2020-01-31,A01,0.001\n2020-02-29,A01,1e300\n");
+        InputException e = org.junit.jupiter.api.Assertions.assertThrows(InputException.class,
+                () -> AlphaTable.read(f.dir().resolve("alphas.csv")));
+        assertEquals("alphas.csv line 3, column 'alpha': '1e300' is an alpha above 1e12 per period, more than any"
+                + " asset earns; expected a per-period decimal alpha such as 0.001", e.getMessage());
+    }
+
+    @Test
+    void alphaBelowMinusOne_isAnErrorAtItsCell() {
+        StudyFixture f = new StudyFixture(dir).write("alphas.csv", "date,asset,alpha\n2020-01-31,A01,-2.5\n");
+        InputException e = org.junit.jupiter.api.Assertions.assertThrows(InputException.class,
+                () -> AlphaTable.read(f.dir().resolve("alphas.csv")));
+        assertEquals("alphas.csv line 2, column 'alpha': '-2.5' is an alpha below -1 per period, a loss of more than"
+                + " everything; expected a per-period decimal alpha such as 0.001 (if the file holds percent,"
+                + " divide every value by 100)", e.getMessage());
+    }
+
     /**
      * The 22-byte file "date,A\n2020-01-31,0.5\n" has SHA-256
      * dcb3f09cee94e6b1144390ad0fdc8f73995d323ff8b5955df9e5be57ec529f51, computed with GNU

@@ -185,4 +185,28 @@ class StudyFileFaultsTest {
         assertTrue(e.getMessage().startsWith("study-folder.yaml: is a folder"), e.getMessage());
         assertTrue(e.getMessage().endsWith("expected a study file"), e.getMessage());
     }
+
+    /** A line break in a name would split its row in every output CSV file. */
+    @Test
+    void strategyNameWithALineBreak_isRefused() throws IOException {
+        InputException e = fails(STUDY.replace("name: plain", "name: \"plain\\nold\""));
+        assertEquals("study.yaml line 10, column 11: strategies[0].name: 'plain\\nold' holds the control character"
+                + " U+000A, which would break the rows of the output CSV files; expected a name of printable"
+                + " characters on one line", e.getMessage());
+    }
+
+    @Test
+    void strategyNameWithANulCharacter_isRefused() throws IOException {
+        InputException e = fails(STUDY.replace("name: plain", "name: \"pl\\0ain\""));
+        assertEquals("study.yaml line 10, column 11: strategies[0].name: 'pl\\u0000ain' holds the control character"
+                + " U+0000, which would break the rows of the output CSV files; expected a name of printable"
+                + " characters on one line", e.getMessage());
+    }
+
+    @Test
+    void baselineOfTheOnlyStrategy_saysThereIsNoOther() throws IOException {
+        InputException e = fails(STUDY + "    baseline: plain\n");
+        assertEquals("study.yaml line 14, column 15: strategies[0].baseline: 'plain' names no other strategy;"
+                + " the study has no other strategy to compare with, so remove the key", e.getMessage());
+    }
 }

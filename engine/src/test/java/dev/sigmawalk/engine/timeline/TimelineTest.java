@@ -90,4 +90,34 @@ class TimelineTest {
         assertTrue(e.getMessage().contains("longest window (12 rows)"), e.getMessage());
         assertTrue(e.getMessage().contains("have 10"), e.getMessage());
     }
+
+    /** One row after the window holds one return, and a spread needs two (Method §7). */
+    @Test
+    void windowOneShorterThanData_leavesTooFewRowsToHold() {
+        ReturnPanel p = panel(businessDays(LocalDate.of(2020, 1, 1), 20));
+        InputException e = assertThrows(InputException.class,
+                () -> Timeline.plan(p, spec(List.of(19), new RebalanceRule.EveryRows(1), null)));
+        assertEquals("walkforward.windows: the longest window (19 rows) needs at least 21 rows of data"
+                + " (a window plus two rows to hold: a spread of returns needs two), but the data have 20"
+                + " (2020-01-01 to 2020-01-28)", e.getMessage());
+    }
+
+    @Test
+    void startOnTheNextToLastRow_leavesTooFewRowsToHold() {
+        LocalDate[] d = businessDays(LocalDate.of(2020, 1, 1), 20);
+        InputException e = assertThrows(InputException.class,
+                () -> Timeline.plan(panel(d), spec(List.of(5), new RebalanceRule.EveryRows(1), d[18])));
+        assertEquals("walkforward.start: from 2020-01-27 on fewer than two rows are left to hold a portfolio"
+                + " (data end 2020-01-28); a spread of returns needs two", e.getMessage());
+    }
+
+    /** Business days of 2021: the first month end at or after row 19 (Jan 28) is Jan 29, row 20. */
+    @Test
+    void firstCalendarRebalanceOnTheNextToLastRow_leavesTooFewRowsToHold() {
+        LocalDate[] d = businessDays(LocalDate.of(2021, 1, 1), 22);
+        InputException e = assertThrows(InputException.class, () -> Timeline.plan(panel(d),
+                spec(List.of(20), new RebalanceRule.CalendarEnd(Calendar.MONTH_END), null)));
+        assertEquals("walkforward: the first month-end rebalance, 2021-01-29, leaves one row to hold"
+                + " (data end 2021-02-01); a spread of returns needs two", e.getMessage());
+    }
 }

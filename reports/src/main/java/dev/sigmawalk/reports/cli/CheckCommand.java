@@ -17,6 +17,7 @@ import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.engine.timeline.Schedule;
 import dev.sigmawalk.reports.api.RunPreview;
+import dev.sigmawalk.strategies.StrategyCatalog;
 import dev.sigmawalk.reports.sweep.SweepCheck;
 import dev.sigmawalk.reports.sweep.SweepReader;
 import java.io.PrintWriter;
@@ -55,6 +56,9 @@ public final class CheckCommand implements Callable<Integer> {
         }
         Study study = StudyReader.read(studyFile);
         StudyData data = StudyData.load(study);
+        // Building the strategies applies the checks that need the data and the models (a window
+        // too short for a model), exactly as a run does before it starts.
+        StrategyCatalog.build(study, data);
         PrintWriter out = spec.commandLine().getOut();
         printData(out, study, data);
         printTimeline(out, study, data);

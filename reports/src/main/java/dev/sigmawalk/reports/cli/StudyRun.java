@@ -46,9 +46,7 @@ public final class StudyRun {
     /** Command-line choices of a run. */
     record Options(Optional<Path> out, boolean force, boolean quiet, int threads) {
         Options {
-            if (!(threads >= 1)) {
-                throw new dev.sigmawalk.engine.data.InputException("--threads (" + threads + ") must be >= 1");
-            }
+            ThreadCount.require(threads);
         }
     }
 

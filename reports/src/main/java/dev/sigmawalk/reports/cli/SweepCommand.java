@@ -44,10 +44,7 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
-        if (!(n >= 1)) {
-            throw new dev.sigmawalk.engine.data.InputException("--threads (" + n + ") must be >= 1");
-        }
+        int n = ThreadCount.require(threads == null ? Runtime.getRuntime().availableProcessors() : threads);
         SweepEngine chosen = SweepEngine.choose(Optional.ofNullable(engine), n);
         SweepRun.Outcome outcome = SweepRun.execute(sweepFile, new SweepRun.Options(Optional.ofNullable(out), force, quiet),
                 chosen, System.err);

@@ -14,6 +14,12 @@ import java.util.Set;
  * {@code min-var} and {@code min-var-2}), so a PNG copy says whose chart it is.
  */
 final class FileNames {
+    /**
+     * The longest slug. A chart's file name adds at most about 45 characters to it, which keeps
+     * every name well inside the 255 bytes a file system allows for one name.
+     */
+    static final int LONGEST = 80;
+
     private final Map<String, String> slugs;
 
     private FileNames(Map<String, String> slugs) {
@@ -47,10 +53,16 @@ final class FileNames {
         return s;
     }
 
-    /** Accents dropped, then every run of other characters turned into one '-'. */
+    /**
+     * Accents dropped, then every run of other characters turned into one '-', then cut to
+     * {@link #LONGEST} characters.
+     */
     static String slug(String name) {
         String plain = Normalizer.normalize(name, Normalizer.Form.NFD).replaceAll("\\p{M}+", "");
         String s = plain.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-+|-+$", "");
+        if (s.length() > LONGEST) {
+            s = s.substring(0, LONGEST).replaceAll("-+$", "");
+        }
         return s.isEmpty() ? "strategy" : s;
     }
 }

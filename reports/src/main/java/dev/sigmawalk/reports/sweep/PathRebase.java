@@ -84,7 +84,7 @@ final class PathRebase {
             if (at instanceof YamlNode.Mapping m && m.entries().get(step) != null) {
                 at = m.entries().get(step).value();
             } else if (at instanceof YamlNode.Sequence q && step.chars().allMatch(Character::isDigit)
-                    && Integer.parseInt(step) < q.items().size()) {
+                    && step.length() <= 9 && Integer.parseInt(step) < q.items().size()) {
                 at = q.items().get(Integer.parseInt(step));
             } else {
                 return false;

@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.data.InputException;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.strategies.StrategyCatalog;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -51,6 +52,7 @@ public final class SweepCheck {
         try {
             Study study = StudyReader.read(p.studyFile(), p.yaml());
             StudyData data = StudyData.load(study);
+            StrategyCatalog.build(study, data);
             return data.panel().assetCount() + " assets, " + data.panel().rows() + " rows, "
                     + SweepPage.count(data.schedule().count(), "rebalance")
                     + (data.warnings().isEmpty() ? "" : ", " + SweepPage.count(data.warnings().size(), "warning"));

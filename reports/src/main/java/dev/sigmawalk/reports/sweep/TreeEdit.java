@@ -63,7 +63,8 @@ final class TreeEdit {
     private static int itemIndex(YamlNode.Sequence q, String step, List<String> segments, int depth) {
         String where = String.join(".", segments.subList(0, depth));
         if (step.chars().allMatch(Character::isDigit)) {
-            int i = Integer.parseInt(step);
+            // More digits than any list's size has cannot name an item (and would overflow an int).
+            int i = step.length() > 9 ? Integer.MAX_VALUE : Integer.parseInt(step);
             if (i >= q.items().size()) {
                 throw new IllegalArgumentException("'" + where + "' has " + q.items().size() + " items in the base study;"
                         + " position " + step + " does not exist (positions count from 0)");

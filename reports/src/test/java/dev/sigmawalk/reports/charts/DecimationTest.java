@@ -92,22 +92,15 @@ class DecimationTest {
             for (int b = 0; b < buckets; b++) {
                 int start = (int) ((long) b * n / buckets);
                 int end = (int) ((long) (b + 1) * n / buckets);
-                int low = -1;
-                int high = -1;
-                int gap = -1;
-                for (int k = start; k < end; k++) {
-                    if (Double.isNaN(y[k])) {
-                        gap = gap < 0 ? k : gap;
-                    } else {
-                        low = low < 0 || y[k] < y[low] ? k : low;
-                        high = high < 0 || y[k] > y[high] ? k : high;
-                    }
-                }
-                for (int k : new int[] {low, high, gap}) {
-                    if (k >= 0) {
-                        keep.add(k);
-                    }
-                }
+                // Lowest and highest (first index on ties) and first NaN, by stream search.
+                java.util.function.Supplier<java.util.stream.IntStream> values =
+                        () -> java.util.stream.IntStream.range(start, end).filter(k -> !Double.isNaN(y[k]));
+                values.get().boxed().min(java.util.Comparator.<Integer>comparingDouble(k -> y[k])
+                        .thenComparing(k -> k)).ifPresent(keep::add);
+                values.get().boxed().max(java.util.Comparator.<Integer>comparingDouble(k -> y[k])
+                        .thenComparing(k -> -k)).ifPresent(keep::add);
+                java.util.stream.IntStream.range(start, end).filter(k -> Double.isNaN(y[k])).findFirst()
+                        .ifPresent(keep::add);
             }
         }
         return keep.stream().mapToInt(Integer::intValue).toArray();

@@ -305,8 +305,17 @@ class CheckCommandTest {
     @Test
     void windowLongerThanTheData_isRejected() {
         edit("study.yaml", "windows: [3, 4]", "windows: [3, 12]");
-        assertRejected("study.yaml: walkforward.windows: the longest window (12 rows) needs at least 13 rows of data"
-                + " (a window plus one row to hold), but the data have 8 (2020-01-31 to 2020-08-31)");
+        assertRejected("study.yaml: walkforward.windows: the longest window (12 rows) needs at least 14 rows of data"
+                + " (a window plus two rows to hold: a spread of returns needs two), but the data have 8 (2020-01-31 to 2020-08-31)");
+    }
+
+    /** The run refuses this study before it starts (Method §11), so check must refuse it too. */
+    @Test
+    void nonlinearShrinkageOnAWindowTooShortForTheAssets_isRejectedAsByRun() {
+        edit("study.yaml", "    risk: single-index\n", "    risk: nonlinear-shrinkage\n");
+        assertRejected("study.yaml: strategies[0] (risk: nonlinear-shrinkage) with window 3 and up to 3 assets:"
+                + " with more assets than L - 1 the formula needs a window of at least 13 rows;"
+                + " lengthen walkforward.windows");
     }
 
     @Test

@@ -178,6 +178,16 @@ class RunCommandTest {
         sums.forEach((key, sum) -> assertEquals(1.0, sum, 1e-9, key));
     }
 
+    /** Java's fork-join pool refuses a parallelism above 32767, so a larger count is a usage error. */
+    @Test
+    void threadCountBeyondTheRuntimeLimit_isRefusedBeforeAnyWork(@TempDir Path out) {
+        Result r = sigmawalk("run", study.toString(), "--out", out.resolve("t").toString(), "--quiet", "--threads",
+                "100000");
+        assertEquals(2, r.code());
+        assertEquals("sigmawalk: --threads (100000) must be between 1 and 32767", r.err().strip());
+        assertFalse(Files.exists(out.resolve("t")));
+    }
+
     /** Two runs, one with one thread and one with two, give byte-identical CSV files. */
     @Test
     void csvFiles_areByteIdentical_acrossRunsAndThreadCounts(@TempDir Path out) throws IOException {

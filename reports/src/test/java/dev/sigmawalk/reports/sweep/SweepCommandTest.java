@@ -280,6 +280,17 @@ class SweepCommandTest {
                 && r.err().contains("index-model, plain"), r.err());
     }
 
+    /** A position too large for an int is still a position that does not exist. */
+    @Test
+    void hugePosition_isReportedAsMissing() throws IOException {
+        Path sweep = SweepFixture.sweepFile(data, "huge.yaml", "strategies.99999999999999999999.bounds: [[0, 1]]");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--quiet");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("huge.yaml line 4, column 3: vary key 'strategies.99999999999999999999.bounds':"
+                + " 'strategies' has 2 items in the base study; position 99999999999999999999 does not exist"
+                + " (positions count from 0)"), r.err());
+    }
+
     @Test
     void check_acceptsASweepFile_andValidatesEveryPointsData() throws IOException {
         SweepFixture.Result ok = SweepFixture.sigmawalk("check", grid.toString());

@@ -45,6 +45,7 @@ final class MultiIndexFit {
             throw new IllegalArgumentException("factor design (L = " + design.length() + ", " + design.columnsOf().length
                     + " assets) must match the window (L = " + len + ", n = " + n + ")");
         }
+        requireMovingFactors(design);
         double[] g = centredFactors(design);
         double div = len - 1.0;
         double[] f = new double[k * k];
@@ -81,6 +82,37 @@ final class MultiIndexFit {
         }
         double[] specific = residualVariances(centred, g, k, loadings, design.columnsOf());
         return new MultiIndexFit(design, n, f, c, loadings, specific);
+    }
+
+    /**
+     * A factor some asset loads on must take more than one value in the window: centred, a
+     * constant column is rounding noise (0.01 has no exact binary form), which the pivot test
+     * in {@link #solve} measures against itself and so cannot catch.
+     */
+    private static void requireMovingFactors(FactorDesign design) {
+        int len = design.length();
+        int k = design.factorCount();
+        double[] v = design.values();
+        boolean[] used = new boolean[k];
+        for (int[] cols : design.columnsOf()) {
+            for (int a : cols) {
+                used[a] = true;
+            }
+        }
+        for (int a = 0; a < k; a++) {
+            if (!used[a] || len == 0) {
+                continue;
+            }
+            double first = v[a];
+            boolean moves = false;
+            for (int t = 1; t < len && !moves; t++) {
+                moves = v[t * k + a] != first;
+            }
+            if (!moves) {
+                throw new IllegalArgumentException("factor '" + design.names().get(a) + "' has the same value ("
+                        + first + ") in every row of the window, so its loadings are not identified");
+            }
+        }
     }
 
     private static double[] centredFactors(FactorDesign design) {
