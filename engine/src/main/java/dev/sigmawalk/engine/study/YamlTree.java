@@ -61,8 +61,13 @@ public final class YamlTree {
             }
             YamlNode root = new YamlTree(file, parser).node(first);
             // A YAML stream may hold several documents; a reader that took the first alone would
-            // run a study other than the one the user last edited below the '---'.
-            if (parser.nextToken() != null) {
+            // run a study other than the one the user last edited below the '---'. An empty one
+            // (a closing '---' with nothing or only comments after it) holds nothing to lose.
+            JsonToken next;
+            while ((next = parser.nextToken()) == JsonToken.VALUE_NULL) {
+                continue;
+            }
+            if (next != null) {
                 JsonLocation at = parser.currentTokenLocation();
                 throw InputException.at(file, at.getLineNr(), at.getColumnNr(), "a second YAML document starts"
                         + " here, after a '---' line; expected one document per file: remove it, or move it into a"

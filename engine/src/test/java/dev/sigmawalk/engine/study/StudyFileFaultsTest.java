@@ -231,8 +231,8 @@ class StudyFileFaultsTest {
     }
 
     @Test
-    void aLeadingDocumentMarker_isStillOneDocument() throws IOException {
-        Path file = write("---\n" + STUDY);
-        assertEquals("plain", StudyReader.read(file).strategies().get(0).name());
+    void aLeadingMarkerOrAnEmptyTrailingDocument_isStillOneStudy() throws IOException {
+        assertEquals("plain", StudyReader.read(write("---\n" + STUDY)).strategies().get(0).name());
+        assertEquals("plain", StudyReader.read(write(STUDY + "---\n# nothing here\n")).strategies().get(0).name());
     }
 }
