@@ -59,7 +59,21 @@ public final class YamlTree {
                 throw new InputException(new InputException.Location(file, 0, null),
                         "the study file is empty; expected keys such as title, data, walkforward, strategies");
             }
-            return new YamlTree(file, parser).node(first);
+            YamlNode root = new YamlTree(file, parser).node(first);
+            // A YAML stream may hold several documents; a reader that took the first alone would
+            // run a study other than the one the user last edited below the '---'. An empty one
+            // (a closing '---' with nothing or only comments after it) holds nothing to lose.
+            JsonToken next;
+            while ((next = parser.nextToken()) == JsonToken.VALUE_NULL) {
+                continue;
+            }
+            if (next != null) {
+                JsonLocation at = parser.currentTokenLocation();
+                throw InputException.at(file, at.getLineNr(), at.getColumnNr(), "a second YAML document starts"
+                        + " here, after a '---' line; expected one document per file: remove it, or move it into a"
+                        + " file of its own");
+            }
+            return root;
         } catch (JsonProcessingException e) {
             JsonLocation at = e.getLocation();
             throw InputException.at(file, at == null ? 0 : at.getLineNr(), at == null ? 0 : at.getColumnNr(),

@@ -221,4 +221,18 @@ class StudyFileFaultsTest {
         assertEquals("study.yaml line 13, column 21: strategies[0].market_premium: -100 is not a plausible annual"
                 + " premium; expected a decimal in (-1, 1), such as 0.05 for 5 %", e.getMessage());
     }
+
+    /** Line 14 is the '---' and line 15 the second document's first key. */
+    @Test
+    void aSecondYamlDocument_isRefusedWhereItStarts() throws IOException {
+        InputException e = fails(STUDY + "---\ntitle: another study\n");
+        assertEquals("study.yaml line 15, column 1: a second YAML document starts here, after a '---' line;"
+                + " expected one document per file: remove it, or move it into a file of its own", e.getMessage());
+    }
+
+    @Test
+    void aLeadingMarkerOrAnEmptyTrailingDocument_isStillOneStudy() throws IOException {
+        assertEquals("plain", StudyReader.read(write("---\n" + STUDY)).strategies().get(0).name());
+        assertEquals("plain", StudyReader.read(write(STUDY + "---\n# nothing here\n")).strategies().get(0).name());
+    }
 }
