@@ -8,7 +8,6 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.regex.Pattern;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.ViewBox;
@@ -23,8 +22,6 @@ import org.jfree.svg.ViewBox;
  * (the library's default prefix contains the clock).
  */
 public final class ChartRenderer {
-    private static final Pattern NAMESPACE = Pattern.compile("\\s+xmlns(:[A-Za-z]+)?=(\"[^\"]*\"|'[^']*')");
-
     /** PNG copies are drawn at this multiple of the chart's size in pixels. */
     public static final int PNG_SCALE = 2;
 
@@ -56,7 +53,62 @@ public final class ChartRenderer {
         g.setDefsKeyPrefix(idPrefix + "-");
         chart.draw(g, new Rectangle(0, 0, width, height));
         String element = g.getSVGElement(idPrefix, false, new ViewBox(0, 0, width, height), null, null);
-        return shortenNumbers(NAMESPACE.matcher(element).replaceAll(""));
+        return shortenNumbers(withoutNamespaces(element));
+    }
+
+    /**
+     * {@code svg} without its namespace declarations: every white-space run followed by
+     * {@code xmlns}, an optional {@code :prefix} of letters, {@code =} and a value in double or
+     * single quotes is removed, as the pattern {@code \s+xmlns(:[A-Za-z]+)?=("[^"]*"|'[^']*')}
+     * replaced by nothing would remove it. One pass from one {@code xmlns} to the next instead of
+     * a pattern matcher tried at every white space of several hundred kilobytes of markup.
+     */
+    static String withoutNamespaces(String svg) {
+        int at = svg.indexOf("xmlns");
+        if (at < 0) {
+            return svg;
+        }
+        StringBuilder out = new StringBuilder(svg.length());
+        int copied = 0;
+        while (at >= 0) {
+            int start = at;
+            while (start > copied && isWhiteSpace(svg.charAt(start - 1))) {
+                start--;
+            }
+            int end = start < at ? declarationEnd(svg, at + "xmlns".length()) : -1;
+            if (end < 0) {
+                at = svg.indexOf("xmlns", at + 1);
+                continue;
+            }
+            out.append(svg, copied, start);
+            copied = end;
+            at = svg.indexOf("xmlns", end);
+        }
+        return out.append(svg, copied, svg.length()).toString();
+    }
+
+    /** After {@code xmlns}: the end of {@code (:letters)?=} and a quoted value, or -1 when none follows. */
+    private static int declarationEnd(String svg, int from) {
+        int k = from;
+        int n = svg.length();
+        if (k < n && svg.charAt(k) == ':') {
+            int letters = ++k;
+            while (k < n && isLetter(svg.charAt(k))) {
+                k++;
+            }
+            if (k == letters) {
+                return -1;
+            }
+        }
+        if (k + 1 >= n || svg.charAt(k) != '=' || (svg.charAt(k + 1) != '"' && svg.charAt(k + 1) != '\'')) {
+            return -1;
+        }
+        int close = svg.indexOf(svg.charAt(k + 1), k + 2);
+        return close < 0 ? -1 : close + 1;
+    }
+
+    private static boolean isLetter(char c) {
+        return c >= 'A' && c <= 'Z' || c >= 'a' && c <= 'z';
     }
 
     /**

@@ -69,4 +69,28 @@ class ChartRendererTest {
         assertTrue(colours.size() > 1, "picture has more than one colour: " + colours.size());
         assertTrue(colours.contains(ModelFamily.SAMPLE.colour().getRGB()), "the sample family's colour is drawn");
     }
+
+    /**
+     * The namespace pass removes exactly what the pattern {@code \s+xmlns(:[A-Za-z]+)?=("[^"]*"|'[^']*')}
+     * replaced by nothing removes (java.util.regex as the reference), on seeded strings built from
+     * the fragments that matter: white space of every kind, the word, prefixes, both quotes, an
+     * unclosed value, a missing '=' or prefix.
+     */
+    @Test
+    void namespacePass_removesWhatThePatternRemoves() {
+        java.util.regex.Pattern reference = java.util.regex.Pattern.compile("\\s+xmlns(:[A-Za-z]+)?=(\"[^\"]*\"|'[^']*')");
+        String[] parts = {" ", "  ", "\t", "\n", "\r", "\f", "\u000B", "xmlns", "xmlns", ":xlink", ":", ":9", "=", "\"",
+            "'", "a", "<svg", ">", "http://x", "xmlnsx", "s"};
+        java.util.SplittableRandom draws = new java.util.SplittableRandom(31_337L);
+        for (int c = 0; c < 20_000; c++) {
+            StringBuilder s = new StringBuilder();
+            for (int k = draws.nextInt(14); k >= 0; k--) {
+                s.append(parts[draws.nextInt(parts.length)]);
+            }
+            String in = s.toString();
+            assertEquals(reference.matcher(in).replaceAll(""), ChartRenderer.withoutNamespaces(in), in);
+        }
+        assertEquals("<svg width='2'><g/></svg>", ChartRenderer.withoutNamespaces(
+                "<svg xmlns=\"http://www.w3.org/2000/svg\" xmlns:xlink='http://www.w3.org/1999/xlink' width='2'><g/></svg>"));
+    }
 }
