@@ -45,6 +45,20 @@ class DegenerateWindowTest {
         return new ReturnPanel(base.dates(), base.assets(), r, m, rf, base.marketName(), base.periodsPerYear());
     }
 
+    /** Asset Q01 earns the bill rate (alternating 0.25 and 0.5) plus 0.25: a constant excess return. */
+    private static ReturnPanel cashLike() {
+        ReturnPanel base = TestPanels.random(ROWS, ASSETS, 6);
+        double[] r = base.rawReturns().clone();
+        double[] m = new double[ROWS];
+        double[] rf = new double[ROWS];
+        for (int t = 0; t < ROWS; t++) {
+            m[t] = base.market(t);
+            rf[t] = t % 2 == 0 ? 0.25 : 0.5;
+            r[t * ASSETS] = rf[t] + 0.25;
+        }
+        return new ReturnPanel(base.dates(), base.assets(), r, m, rf, "index", 12);
+    }
+
     private static ReturnPanel suspended() {
         return withRows(TestPanels.random(ROWS, ASSETS, 5), SUSPENDED, 20, 39, 0.0, false);
     }
@@ -64,16 +78,7 @@ class DegenerateWindowTest {
      */
     @Test
     void constantExcessReturn_withVaryingRiskFree_isLeftOut() {
-        ReturnPanel base = TestPanels.random(ROWS, ASSETS, 6);
-        double[] r = base.rawReturns().clone();
-        double[] m = new double[ROWS];
-        double[] rf = new double[ROWS];
-        for (int t = 0; t < ROWS; t++) {
-            m[t] = base.market(t);
-            rf[t] = t % 2 == 0 ? 0.25 : 0.5;
-            r[t * ASSETS] = rf[t] + 0.25;
-        }
-        WindowBuilder builder = new WindowBuilder(new ReturnPanel(base.dates(), base.assets(), r, m, rf, "index", 12));
+        WindowBuilder builder = new WindowBuilder(cashLike());
         assertTrue(builder.constant(0, 23, 12), "excess exactly 0.25 in every row");
         assertFalse(builder.constant(1, 23, 12), "an ordinary asset");
         assertEquals(List.of("Q02", "Q03", "Q04", "Q05"), builder.build(23, 12).assets());
@@ -82,16 +87,7 @@ class DegenerateWindowTest {
     /** The same cash-like asset: its warning must not say its return is constant, since it is not. */
     @Test
     void constantExcessReturn_isWarnedAsSuch() {
-        ReturnPanel base = TestPanels.random(ROWS, ASSETS, 6);
-        double[] r = base.rawReturns().clone();
-        double[] m = new double[ROWS];
-        double[] rf = new double[ROWS];
-        for (int t = 0; t < ROWS; t++) {
-            m[t] = base.market(t);
-            rf[t] = t % 2 == 0 ? 0.25 : 0.5;
-            r[t * ASSETS] = rf[t] + 0.25;
-        }
-        ReturnPanel panel = new ReturnPanel(base.dates(), base.assets(), r, m, rf, "index", 12);
+        ReturnPanel panel = cashLike();
         WalkForwardSpec spec = new WalkForwardSpec(List.of(12), new RebalanceRule.EveryRows(1), Optional.empty(),
                 Optional.empty(), 0);
         List<ConstantSpan> spans = WindowScan.of(panel, Timeline.plan(panel, spec), List.of(12)).constantSpans();

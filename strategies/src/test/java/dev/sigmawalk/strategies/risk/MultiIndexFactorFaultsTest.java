@@ -21,16 +21,22 @@ class MultiIndexFactorFaultsTest {
      * it is rounding, and loadings fitted to rounding are noise however small the pivot check's
      * relative threshold. 0.01 is not a binary fraction, so its centred values are not all zero.
      */
-    @Test
-    void aFactorWithTheSameValueInEveryRow_isRefusedForTheWindow() {
-        EstimationWindow w = ReferenceData.window();
+    /** The window's market excess return beside a second factor that is 0.01 except {@code blip} (or nowhere, -1). */
+    private static double[] marketAndFlat(EstimationWindow w, int blip) {
         int len = w.length();
         double[] values = new double[len * 2];
         double[] m = w.marketExcess();
         for (int t = 0; t < len; t++) {
             values[t * 2] = m[t];
-            values[t * 2 + 1] = 0.01;
+            values[t * 2 + 1] = t == blip ? 0.02 : 0.01;
         }
+        return values;
+    }
+
+    @Test
+    void aFactorWithTheSameValueInEveryRow_isRefusedForTheWindow() {
+        EstimationWindow w = ReferenceData.window();
+        double[] values = marketAndFlat(w, -1);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> model("f.csv", values, List.of("market", "flat")).estimate(w));
         assertEquals("factor 'flat' has the same value (0.01) in every row of the window, so its loadings are"
@@ -40,14 +46,7 @@ class MultiIndexFactorFaultsTest {
     @Test
     void aFactorThatMovesOnce_isStillFitted() {
         EstimationWindow w = ReferenceData.window();
-        int len = w.length();
-        double[] values = new double[len * 2];
-        double[] m = w.marketExcess();
-        for (int t = 0; t < len; t++) {
-            values[t * 2] = m[t];
-            values[t * 2 + 1] = t == 7 ? 0.02 : 0.01;
-        }
-        FactorCovariance c = model("f.csv", values, List.of("market", "blip")).estimate(w);
+        FactorCovariance c = model("f.csv", marketAndFlat(w, 7), List.of("market", "blip")).estimate(w);
         assertEquals(ReferenceData.ASSETS, c.size());
     }
 }
