@@ -16,9 +16,17 @@ import java.util.Objects;
  * @param firstRebalance the first such rebalance date
  * @param lastRebalance the last such rebalance date
  * @param firstWindowStart the first row date of the first such window
+ * @param excessOnly whether, in some of those windows, the asset's own return varies and only
+ *                   its excess return is constant (cash at a fixed spread over the bill rate)
  */
 public record ConstantSpan(String series, boolean market, int window, int rebalances, LocalDate firstRebalance,
-                           LocalDate lastRebalance, LocalDate firstWindowStart) {
+                           LocalDate lastRebalance, LocalDate firstWindowStart, boolean excessOnly) {
+    /** A span whose return itself is constant (or the market, which is judged on excess returns). */
+    public ConstantSpan(String series, boolean market, int window, int rebalances, LocalDate firstRebalance,
+                        LocalDate lastRebalance, LocalDate firstWindowStart) {
+        this(series, market, window, rebalances, firstRebalance, lastRebalance, firstWindowStart, false);
+    }
+
     public ConstantSpan {
         Objects.requireNonNull(series, "series");
         Objects.requireNonNull(firstRebalance, "firstRebalance");
@@ -40,8 +48,8 @@ public record ConstantSpan(String series, boolean market, int window, int rebala
                     + " single-index expected returns) form no portfolio at those rebalances and the residual"
                     + " diagnostics are not computed";
         }
-        return "asset '" + series + "': its return is the same in every row of the " + where
-                + "; a series with zero variance (a suspended stock or a stale price) has no risk to estimate, so it"
+        return "asset '" + series + "': its " + (excessOnly ? "excess " : "") + "return is the same in every row of the "
+                + where + (excessOnly ? ", though its return moves with the risk-free rate" : "") + "; a series with zero variance (a suspended stock or a stale price) has no risk to estimate, so it"
                 + " is left out of the eligible assets at those rebalances, for every strategy";
     }
 }

@@ -88,6 +88,20 @@ final class WindowBuilder {
         return rawSame || excessSame;
     }
 
+    /** Whether the asset's own return (not only its excess return) is the same number in every row. */
+    boolean rawConstant(int col, int tau, int length) {
+        int n = panel.assetCount();
+        double[] r = panel.rawReturns();
+        int first = tau - length + 1;
+        double raw = r[first * n + col];
+        for (int t = first + 1; t <= tau; t++) {
+            if (r[t * n + col] != raw) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     /** Whether the market's excess return is the same number in every row of the window (zero variance). */
     boolean marketConstant(int tau, int length) {
         int first = tau - length + 1;

@@ -50,7 +50,7 @@ public final class WindowScan {
             int n = 0;
             for (int c : builder.complete(tau, length)) {
                 if (builder.constant(c, tau, length)) {
-                    assets.computeIfAbsent(c, k -> new Span(tau, length)).add(tau);
+                    assets.computeIfAbsent(c, k -> new Span(tau, length)).add(tau, !builder.rawConstant(c, tau, length));
                 } else {
                     n++;
                 }
@@ -58,7 +58,7 @@ public final class WindowScan {
             counts[j] = n;
             if (builder.marketConstant(tau, length)) {
                 market = market == null ? new Span(tau, length) : market;
-                market.add(tau);
+                market.add(tau, false);
             }
         }
         eligible.put(length, counts);
@@ -99,20 +99,22 @@ public final class WindowScan {
         private final int length;
         private int lastRow;
         private int rebalances;
+        private boolean excessOnly;
 
         Span(int firstRow, int length) {
             this.firstRow = firstRow;
             this.length = length;
         }
 
-        void add(int tau) {
+        void add(int tau, boolean onlyExcessConstant) {
             lastRow = tau;
             rebalances++;
+            excessOnly |= onlyExcessConstant;
         }
 
         ConstantSpan toSpan(String series, boolean isMarket, int window) {
             return new ConstantSpan(series, isMarket, window, rebalances, panel.date(firstRow), panel.date(lastRow),
-                    panel.date(firstRow - length + 1));
+                    panel.date(firstRow - length + 1), excessOnly);
         }
     }
 }

@@ -15,6 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.yaml.snakeyaml.error.MarkedYAMLException;
 
 /**
  * Reads a YAML file into {@link YamlNode}s through Jackson's streaming parser, which reports the
@@ -77,11 +78,30 @@ public final class YamlTree {
             return root;
         } catch (JsonProcessingException e) {
             JsonLocation at = e.getLocation();
-            throw InputException.at(file, at == null ? 0 : at.getLineNr(), at == null ? 0 : at.getColumnNr(),
-                    "not valid YAML (" + e.getOriginalMessage() + ")");
+            int line = at == null ? 0 : at.getLineNr();
+            int column = at == null ? 0 : at.getColumnNr();
+            // The YAML scanner knows where the problem is; the parser's location can be the token before.
+            if (e.getCause() instanceof MarkedYAMLException m && m.getProblemMark() != null) {
+                line = m.getProblemMark().getLine() + 1;
+                column = m.getProblemMark().getColumn() + 1;
+            }
+            throw InputException.at(file, line, column, "not valid YAML (" + oneLine(e.getOriginalMessage()) + ")");
         } catch (IOException e) {
             throw InputFile.unreadable(file, e);
         }
+    }
+
+    /**
+     * The scanner's message without the excerpt it appends (" in 'reader', line ..., column ...:"
+     * and the line with a caret), its remaining line breaks turned into "; ".
+     */
+    static String oneLine(String message) {
+        String text = message == null ? "" : message;
+        int excerpt = text.indexOf("\n in 'reader'");
+        if (excerpt >= 0) {
+            text = text.substring(0, excerpt);
+        }
+        return text.strip().replaceAll("\\s*\\R\\s*", "; ");
     }
 
     private YamlNode node(JsonToken token) throws IOException {

@@ -79,6 +79,31 @@ class DegenerateWindowTest {
         assertEquals(List.of("Q02", "Q03", "Q04", "Q05"), builder.build(23, 12).assets());
     }
 
+    /** The same cash-like asset: its warning must not say its return is constant, since it is not. */
+    @Test
+    void constantExcessReturn_isWarnedAsSuch() {
+        ReturnPanel base = TestPanels.random(ROWS, ASSETS, 6);
+        double[] r = base.rawReturns().clone();
+        double[] m = new double[ROWS];
+        double[] rf = new double[ROWS];
+        for (int t = 0; t < ROWS; t++) {
+            m[t] = base.market(t);
+            rf[t] = t % 2 == 0 ? 0.25 : 0.5;
+            r[t * ASSETS] = rf[t] + 0.25;
+        }
+        ReturnPanel panel = new ReturnPanel(base.dates(), base.assets(), r, m, rf, "index", 12);
+        WalkForwardSpec spec = new WalkForwardSpec(List.of(12), new RebalanceRule.EveryRows(1), Optional.empty(),
+                Optional.empty(), 0);
+        List<ConstantSpan> spans = WindowScan.of(panel, Timeline.plan(panel, spec), List.of(12)).constantSpans();
+        assertEquals(1, spans.size(), spans.toString());
+        LocalDate[] d = panel.dates();
+        assertEquals("asset 'Q01': its excess return is the same in every row of the 12-row window at 48 rebalances"
+                + " from " + d[11] + " to " + d[58] + " (first such window " + d[0] + " to " + d[11] + "), though its"
+                + " return moves with the risk-free rate; a series with zero variance (a suspended stock or a stale"
+                + " price) has no risk to estimate, so it is left out of the eligible assets at those rebalances,"
+                + " for every strategy", spans.get(0).warning());
+    }
+
     @Test
     void constantMarket_givesExactlyZeroMarketMoments_alsoFromRunningSums() {
         ReturnPanel panel = withRows(TestPanels.random(ROWS, ASSETS, 7), 0, 20, 45, 0.004, true);

@@ -258,4 +258,19 @@ class StudyFileFaultsTest {
         assertEquals("plain", StudyReader.read(write("---\n" + STUDY)).strategies().get(0).name());
         assertEquals("plain", StudyReader.read(write(STUDY + "---\n# nothing here\n")).strategies().get(0).name());
     }
+
+    /** Every failure is one line on standard error, at the line and column of the problem itself. */
+    @Test
+    void yamlSyntaxError_isOneLineAtTheProblem() throws IOException {
+        InputException e = fails(STUDY.replace("  values: returns", "\tvalues: returns"));
+        assertEquals("study.yaml line 3, column 1: not valid YAML (while scanning for the next token; found character"
+                + " '\\t(TAB)' that cannot start any token. (Do not use \\t(TAB) for indentation))", e.getMessage());
+    }
+
+    @Test
+    void yamlIndentError_isOneLine() throws IOException {
+        InputException e = fails(STUDY.replace("  values: returns", "   values: returns"));
+        assertEquals("study.yaml line 3, column 10: not valid YAML (mapping values are not allowed here)",
+                e.getMessage());
+    }
 }
