@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.yaml.snakeyaml.error.MarkedYAMLException;
 
@@ -113,7 +114,8 @@ public final class YamlTree {
             case START_ARRAY:
                 return sequence(line, column);
             case VALUE_STRING:
-                return new YamlNode.Scalar(parser.getText(), YamlNode.Scalar.Kind.STRING, line, column);
+                return new YamlNode.Scalar(wholeCharacters(parser.getText(), line, column), YamlNode.Scalar.Kind.STRING,
+                        line, column);
             case VALUE_NUMBER_INT:
                 return new YamlNode.Scalar(parser.getText(), YamlNode.Scalar.Kind.INTEGER, line, column);
             case VALUE_NUMBER_FLOAT:
@@ -128,12 +130,33 @@ public final class YamlTree {
         }
     }
 
+    /**
+     * {@code text} when every UTF-16 surrogate in it is half of a pair. A lone one (which a
+     * double-quoted YAML string can spell as an escape such as {@code \uD800}) is no character:
+     * no output file could hold it in UTF-8, so it is refused here, at its line and column,
+     * rather than when the first file is written.
+     */
+    private String wholeCharacters(String text, int line, int column) {
+        for (int k = 0; k < text.length(); k++) {
+            char c = text.charAt(k);
+            if (Character.isHighSurrogate(c) && k + 1 < text.length() && Character.isLowSurrogate(text.charAt(k + 1))) {
+                k++;
+            } else if (Character.isSurrogate(c)) {
+                throw InputException.at(file, line, column, String.format(Locale.ROOT, "the text holds a lone UTF-16"
+                        + " surrogate (U+%04X, character %d), which is half of a character and cannot be written to"
+                        + " any output file; expected whole characters: write the character itself, or both halves"
+                        + " of its escape pair", (int) c, k + 1));
+            }
+        }
+        return text;
+    }
+
     private YamlNode mapping(int line, int column) throws IOException {
         Map<String, YamlNode.Entry> entries = new LinkedHashMap<>();
         JsonToken token;
         while ((token = parser.nextToken()) == JsonToken.FIELD_NAME) {
             JsonLocation at = parser.currentTokenLocation();
-            String key = parser.currentName();
+            String key = wholeCharacters(parser.currentName(), at.getLineNr(), at.getColumnNr());
             YamlNode value = node(parser.nextToken());
             YamlNode.Entry earlier = entries.put(key, new YamlNode.Entry(key, at.getLineNr(), at.getColumnNr(), value));
             if (earlier != null) {

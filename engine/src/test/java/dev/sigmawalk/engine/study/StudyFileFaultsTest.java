@@ -56,6 +56,29 @@ class StudyFileFaultsTest {
                 e.getMessage());
     }
 
+    /**
+     * A double-quoted YAML escape can spell half a character (a lone surrogate): in a strategy
+     * name it used to end the run with an internal error when the first CSV file was written, in
+     * the title with an unmappable-character failure of the report. Refused at its line and column.
+     */
+    @Test
+    void loneSurrogateInAText_isRefusedAtItsCell() throws IOException {
+        InputException e = fails(STUDY.replace("  - name: plain", "  - name: \"pl\\uD800ain\""));
+        assertEquals("study.yaml line 10, column 11: the text holds a lone UTF-16 surrogate (U+D800, character 3),"
+                + " which is half of a character and cannot be written to any output file; expected whole characters:"
+                + " write the character itself, or both halves of its escape pair", e.getMessage());
+        InputException title = fails("title: \"risk \\uDC00\"\n" + STUDY);
+        assertTrue(title.getMessage().startsWith("study.yaml line 1, column 8: the text holds a lone UTF-16 surrogate"
+                + " (U+DC00, character 6)"), title.getMessage());
+    }
+
+    /** Both halves of a pair are one character (U+1D70E, mathematical italic small sigma): accepted. */
+    @Test
+    void surrogatePair_isOneCharacterAndAccepted() throws IOException {
+        Study s = StudyReader.read(write(STUDY.replace("  - name: plain", "  - name: \"\\uD835\\uDF0E-minvar\"")));
+        assertEquals("\uD835\uDF0E-minvar", s.strategies().get(0).name());
+    }
+
     @Test
     void yamlNotANumber_isRefused() throws IOException {
         InputException e = fails(STUDY.replace("bounds: [0, 0.1]", "bounds: [0, .NaN]"));
