@@ -188,13 +188,10 @@ final class IntakeChecks {
      * standing in for an index's returns looks like this.
      */
     void warnMarketBarelyVaries() {
-        double market = standardDeviation(t -> panel.market(t));
-        int n = panel.assetCount();
-        double[] sd = new double[n];
+        double market = marketStandardDeviation();
+        double[] sd = assetStandardDeviations();
         int counted = 0;
-        for (int j = 0; j < n; j++) {
-            int col = j;
-            double s = standardDeviation(t -> panel.value(t, col));
+        for (double s : sd) {
             if (!Double.isNaN(s)) {
                 sd[counted++] = s;
             }
@@ -213,12 +210,52 @@ final class IntakeChecks {
         }
     }
 
-    /** The sample standard deviation (divisor n − 1) of a series' non-missing values; NaN below two values. */
-    private double standardDeviation(java.util.function.IntToDoubleFunction value) {
+    /**
+     * Every asset's sample standard deviation (divisor n − 1) over its non-missing returns, NaN
+     * below two: two passes over the rows in storage order (means, then squared deviations), so
+     * a wide file is read the way it lies in memory.
+     */
+    private double[] assetStandardDeviations() {
+        int n = panel.assetCount();
+        double[] r = panel.rawReturns();
+        double[] sum = new double[n];
+        int[] count = new int[n];
+        for (int t = 0, at = 0; t < panel.rows(); t++) {
+            for (int j = 0; j < n; j++, at++) {
+                double v = r[at];
+                if (v == v) {
+                    sum[j] += v;
+                    count[j]++;
+                }
+            }
+        }
+        double[] mean = new double[n];
+        for (int j = 0; j < n; j++) {
+            mean[j] = sum[j] / count[j];
+        }
+        double[] squares = new double[n];
+        for (int t = 0, at = 0; t < panel.rows(); t++) {
+            for (int j = 0; j < n; j++, at++) {
+                double v = r[at];
+                if (v == v) {
+                    double d = v - mean[j];
+                    squares[j] += d * d;
+                }
+            }
+        }
+        double[] sd = new double[n];
+        for (int j = 0; j < n; j++) {
+            sd[j] = count[j] < 2 ? Double.NaN : Math.sqrt(squares[j] / (count[j] - 1));
+        }
+        return sd;
+    }
+
+    /** The market's sample standard deviation over its non-missing returns, NaN below two. */
+    private double marketStandardDeviation() {
         double sum = 0;
         int count = 0;
         for (int t = 0; t < panel.rows(); t++) {
-            double v = value.applyAsDouble(t);
+            double v = panel.market(t);
             if (!Double.isNaN(v)) {
                 sum += v;
                 count++;
@@ -230,7 +267,7 @@ final class IntakeChecks {
         double mean = sum / count;
         double squares = 0;
         for (int t = 0; t < panel.rows(); t++) {
-            double v = value.applyAsDouble(t);
+            double v = panel.market(t);
             if (!Double.isNaN(v)) {
                 squares += (v - mean) * (v - mean);
             }
