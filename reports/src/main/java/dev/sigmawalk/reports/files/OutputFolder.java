@@ -122,7 +122,8 @@ public final class OutputFolder implements AutoCloseable {
         try {
             Files.createDirectories(parent);
         } catch (IOException e) {
-            throw new InputException("output folder " + abs + " cannot be created: " + e);
+            throw new InputException("output folder " + abs + " cannot be created: " + FileProblem.describe(e)
+                    + "; choose another --out");
         }
     }
 
@@ -133,8 +134,8 @@ public final class OutputFolder implements AutoCloseable {
             throw new InputException("output folder " + target + ": cannot write in " + staging.getParent()
                     + " (permission denied); choose another --out");
         } catch (IOException e) {
-            throw new InputException("output folder " + target + ": cannot create the staging folder " + staging
-                    + ": " + e);
+            throw new InputException("output folder " + target + ": cannot create its staging folder beside it in "
+                    + staging.getParent() + ": " + FileProblem.describe(e) + "; choose another --out");
         }
         try {
             Runtime.getRuntime().addShutdownHook(hook);
@@ -147,7 +148,7 @@ public final class OutputFolder implements AutoCloseable {
         try {
             return p.toRealPath();
         } catch (IOException e) {
-            throw new InputException("output folder " + p + " cannot be resolved: " + e);
+            throw new InputException("output folder " + p + " cannot be resolved: " + FileProblem.describe(e));
         }
     }
 
@@ -163,7 +164,7 @@ public final class OutputFolder implements AutoCloseable {
         try (Stream<Path> s = Files.list(dir)) {
             return s.findAny().isEmpty();
         } catch (IOException e) {
-            throw new InputException("output folder " + dir + " cannot be listed: " + e);
+            throw new InputException("output folder " + dir + " cannot be listed: " + FileProblem.describe(e));
         }
     }
 
