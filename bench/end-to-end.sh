@@ -33,6 +33,8 @@
 #   --work DIR        folder for the data, the study and the outputs (default: a new temporary
 #                     folder); data already there are reused
 #   --rebuild         rebuild the jar even when reports/target/sigmawalk.jar exists
+#   --reruns N        afterwards, also time N reruns in one process: `sigmawalk watch --stop-after N+1`
+#                     while the study file is touched every half second; prints each run's own time
 #
 # Prints the wall time, the peak resident memory and the CPU time of the run (from
 # /usr/bin/time -v when it is installed; otherwise the wall time only), the load average before
@@ -45,6 +47,7 @@ jar=
 work=
 rebuild=no
 threads=
+reruns=0
 args=("$@")
 for ((k = 0; k < ${#args[@]}; k++)); do
   if [ "${args[$k]}" = --case ]; then case_name=${args[$((k + 1))]:-}; fi
@@ -70,7 +73,8 @@ while [ "$#" -gt 0 ]; do
     --jar) jar=$2; shift 2 ;;
     --work) work=$2; shift 2 ;;
     --rebuild) rebuild=yes; shift ;;
-    -h|--help) sed -n '2,45p' "$0"; exit 0 ;;
+    --reruns) reruns=$2; shift 2 ;;
+    -h|--help) sed -n '2,42p' "$0"; exit 0 ;;
     *) echo "unknown option '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
@@ -164,3 +168,19 @@ if [ -f "$out/manifest.json" ]; then
 fi
 echo "rebalances:  $(($(wc -l < "$out/rebalances.csv") - 1)) rows in $out/rebalances.csv"
 echo "outputs in:  $out"
+
+if [ "$reruns" -gt 0 ]; then
+  # Each save of the study file starts the next run once the one under way is done; the watch
+  # prints every run's own time (from its start to its published outputs, without the waiting).
+  (while sleep 0.5; do touch "$study"; done) &
+  toucher=$!
+  trap 'kill $toucher 2>/dev/null' EXIT
+  load_before=$(cut -d' ' -f1-3 /proc/loadavg)
+  times=$(java "-Xmx$heap" -jar "$jar" watch "$study" --out "$out" --quiet "${thread_option[@]}" \
+      --stop-after $((reruns + 1)) | sed -n 's/.* in \([0-9.]*\) s$/\1/p')
+  kill $toucher 2>/dev/null
+  first=$(echo "$times" | head -1)
+  rest=$(echo "$times" | tail -n +2 | tr '\n' ' ')
+  median=$(echo "$times" | tail -n +2 | sort -n | awk '{v[NR]=$1} END {print (NR % 2) ? v[(NR+1)/2] : (v[NR/2] + v[NR/2+1]) / 2}')
+  echo "watch:       first run $first s; reruns $rest(median $median s); load $load_before before, $(cut -d' ' -f1-3 /proc/loadavg) after"
+fi

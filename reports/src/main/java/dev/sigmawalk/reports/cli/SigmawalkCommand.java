@@ -14,7 +14,7 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = VersionProvider.class,
         description = "Walk-forward comparison of covariance estimates for portfolio construction.",
-        subcommands = {RunCommand.class, DemoCommand.class, CheckCommand.class, SweepCommand.class})
+        subcommands = {RunCommand.class, WatchCommand.class, DemoCommand.class, CheckCommand.class, SweepCommand.class})
 public final class SigmawalkCommand implements Runnable {
 
     /** Exit code for bad input of any kind. */
