@@ -128,7 +128,7 @@ final class StudyDataLoader {
             return SeriesColumn.fromColumn(role, assets, col);
         }
         Path file = ((SeriesSource.File) source).path();
-        return SeriesColumn.join(role, readWide(file, kind, null), assets, warnings);
+        return SeriesColumn.join(role, readWide(file, kind, null), assets, kind == ValueKind.RETURNS, warnings);
     }
 
     private int inferPeriods(WideTable table) {
