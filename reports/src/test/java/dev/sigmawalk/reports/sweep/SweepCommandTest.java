@@ -256,6 +256,9 @@ class SweepCommandTest {
         assertTrue(failed.contains(",failed,") && failed.contains("cannot make 72 weights sum to 1"), failed);
         assertTrue(Files.isRegularFile(target.resolve("points/001/summary.csv")), "point 001 finished");
         assertFalse(Files.exists(target.resolve("points/002")), "nothing half-written for the failed point");
+        assertTrue(Files.readString(target.resolve("sweep.html"), StandardCharsets.UTF_8).contains("Lowest realised"
+                + " volatility among the points that ran (1 of 2 failed, and their comparisons are in neither the search"
+                + " nor its corrections): "), "the best point is the best of the points that ran");
         try (var s = Files.list(target.resolve("points"))) {
             assertEquals(List.of("001"), s.map(p -> p.getFileName().toString()).sorted().toList(), "no staging left");
         }
