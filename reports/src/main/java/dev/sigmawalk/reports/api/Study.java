@@ -38,8 +38,12 @@ public final class Study {
      * Reads and validates a study file; paths in it are relative to the file.
      *
      * @throws dev.sigmawalk.engine.data.InputException naming the file, line, column and value when it is not valid
+     * @throws IllegalArgumentException when {@code file} is null
      */
     public static Study fromYaml(Path file) {
+        if (file == null) {
+            throw new IllegalArgumentException("the study file is null; expected the path of a study file");
+        }
         return new Study(StudyReader.read(file));
     }
 
@@ -76,8 +80,10 @@ public final class Study {
 
     /**
      * Builds a study with the keys of a study file. Each section is a map of keys to values as
-     * they would be written in YAML (numbers, text, booleans, lists, maps); a {@link Path} value
-     * stands for its absolute path and a {@link java.time.LocalDate} for its ISO text.
+     * they would be written in YAML (numbers, text, booleans, lists, maps); a {@link Path} (or
+     * {@link java.io.File}) value stands for its absolute path, a {@link java.time.LocalDate} for
+     * its ISO text and an option of the study's types ({@code RiskKind.SINGLE_INDEX}) for its
+     * spelling in a file ({@code single-index}). A null key or value is refused where it is given.
      */
     public static final class Builder {
         /**
@@ -98,13 +104,17 @@ public final class Study {
 
         /** {@code title:}. */
         public Builder title(String title) {
-            this.title = Objects.requireNonNull(title, "title");
+            if (title == null) {
+                throw new IllegalArgumentException("title is null; expected a text such as \"Index model against the"
+                        + " sample covariance\"");
+            }
+            this.title = title;
             return this;
         }
 
         /** One key of {@code data:}, for example {@code data("assets", Path.of("assets.csv"))}. */
         public Builder data(String key, Object value) {
-            data.put(key, checked("data." + key, value));
+            data.put(named("data", key, "assets"), checked("data." + key, value));
             return this;
         }
 
@@ -116,7 +126,7 @@ public final class Study {
 
         /** One key of {@code walkforward:}, for example {@code walkForward("cost_bps", 10)}. */
         public Builder walkForward(String key, Object value) {
-            walkForward.put(key, checked("walkforward." + key, value));
+            walkForward.put(named("walkforward", key, "cost_bps"), checked("walkforward." + key, value));
             return this;
         }
 
@@ -127,22 +137,36 @@ public final class Study {
          *                 {@code Map.of("risk", "single-index", "objective", "min-variance")}
          */
         public Builder strategy(String name, Map<String, ?> settings) {
+            if (name == null) {
+                throw new IllegalArgumentException("a strategy's name is null; expected a text such as \"index-model\"");
+            }
+            if (settings == null) {
+                throw new IllegalArgumentException("strategy " + name + ": its settings are null; expected a map of its"
+                        + " keys, such as Map.of(\"objective\", \"equal-weight\")");
+            }
             Map<String, Object> s = new LinkedHashMap<>();
-            s.put("name", Objects.requireNonNull(name, "name"));
-            settings.forEach((k, v) -> s.put(k, checked("strategy " + name + ": " + k, v)));
+            s.put("name", name);
+            settings.forEach((k, v) -> {
+                String key = named("strategy " + name, k, "objective");
+                if (key.equals("name") && !name.equals(v)) {
+                    throw new IllegalArgumentException("strategy " + name + ": its settings name it " + v + " too;"
+                            + " expected the name once, as strategy's first argument");
+                }
+                s.put(key, checked("strategy " + name + ": " + key, v));
+            });
             strategies.add(s);
             return this;
         }
 
         /** One key of {@code evidence:}, for example {@code evidence("resamples", 500)}. */
         public Builder evidence(String key, Object value) {
-            evidence.put(key, checked("evidence." + key, value));
+            evidence.put(named("evidence", key, "resamples"), checked("evidence." + key, value));
             return this;
         }
 
         /** One key of {@code report:}, for example {@code report("paper", "letter")}. */
         public Builder report(String key, Object value) {
-            report.put(key, checked("report." + key, value));
+            report.put(named("report", key, "paper"), checked("report." + key, value));
             return this;
         }
 
@@ -168,9 +192,20 @@ public final class Study {
             return new Study(StudyReader.read(Path.of(SOURCE_NAME), StudyTree.node("", root)));
         }
 
+        /** A value is checked when it is given, so the message points at the call that gave it. */
         private static Object checked(String key, Object value) {
-            Objects.requireNonNull(value, key);
+            if (value == null) {
+                throw new IllegalArgumentException(key + " is null; leave the key out to take its default");
+            }
             return value;
+        }
+
+        private static String named(String section, String key, String example) {
+            if (key == null) {
+                throw new IllegalArgumentException(section + ": a key is null; expected a key of a study file, such as "
+                        + example);
+            }
+            return key;
         }
     }
 }

@@ -1,6 +1,8 @@
 package dev.sigmawalk.reports.api;
 
+import dev.sigmawalk.engine.study.Spelled;
 import dev.sigmawalk.engine.study.YamlNode;
+import java.io.File;
 import java.lang.reflect.Array;
 import java.math.BigDecimal;
 import java.math.BigInteger;
@@ -29,6 +31,9 @@ final class StudyTree {
     static YamlNode node(String key, Object value) {
         if (value == null) {
             throw new IllegalArgumentException(key + " is null; leave the key out to take its default");
+        }
+        if (value instanceof File file) {
+            return node(key, file.toPath());
         }
         if (value instanceof Path path) {
             // A Path is also an Iterable of its names; it stands for one file.
@@ -76,6 +81,10 @@ final class StudyTree {
         if (value instanceof String text) {
             return new YamlNode.Scalar(text, YamlNode.Scalar.Kind.STRING, 0, 0);
         }
+        if (value instanceof Spelled option) {
+            // An option of the study's own types (RiskKind.SINGLE_INDEX) is the word a file spells it with.
+            return new YamlNode.Scalar(option.spelling(), YamlNode.Scalar.Kind.STRING, 0, 0);
+        }
         if (value instanceof LocalDate date) {
             return new YamlNode.Scalar(date.toString(), YamlNode.Scalar.Kind.STRING, 0, 0);
         }
@@ -93,7 +102,8 @@ final class StudyTree {
             return new YamlNode.Scalar(d.toString(), YamlNode.Scalar.Kind.DECIMAL, 0, 0);
         }
         throw new IllegalArgumentException(key + " is a " + value.getClass().getName()
-                + "; expected text, a number, a boolean, a Path, a LocalDate, a list or a map");
+                + "; expected text, a number, a boolean, a Path or File, a LocalDate, one of the study's options"
+                + " (such as RiskKind.SAMPLE), a list or a map");
     }
 
     /**

@@ -7,6 +7,7 @@ import dev.sigmawalk.engine.study.YamlNode;
 import dev.sigmawalk.engine.study.YamlTree;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -32,41 +33,102 @@ public final class SweepPlanner {
         Path outAbs = out.toAbsolutePath().normalize();
         Study base = StudyReader.read(sweep.study());
         YamlNode.Mapping tree = (YamlNode.Mapping) YamlTree.parse(base.file());
-        for (Axis axis : sweep.axes()) {
-            for (YamlNode value : axis.values()) {
-                checkAlone(sweep, base, tree, axis, value);
+        List<List<String>> places = places(sweep, tree);
+        for (int a = 0; a < places.size(); a++) {
+            for (YamlNode value : sweep.axes().get(a).values()) {
+                checkAlone(sweep, base, tree, sweep.axes().get(a), places.get(a), value);
             }
         }
         int width = Math.max(3, String.valueOf(sweep.size()).length());
         List<GridPoint> points = new ArrayList<>();
+        Map<List<Object>, Integer> studies = new HashMap<>();
         for (int p = 0; p < sweep.size(); p++) {
-            points.add(point(sweep, base, tree, p, width, outAbs));
+            Derived d = point(sweep, base, tree, places, p, width, outAbs);
+            Integer same = studies.putIfAbsent(d.meaning(), p);
+            if (same != null) {
+                throw sameStudy(sweep, same, p);
+            }
+            points.add(d.point());
         }
         return new SweepPlan(sweep, base, outAbs, points);
     }
 
-    private static void checkAlone(SweepFile sweep, Study base, YamlNode.Mapping tree, Axis axis, YamlNode value) {
+    /** A grid point and what its study means, without its title: equal meanings run the same walk. */
+    private record Derived(GridPoint point, List<Object> meaning) {
+    }
+
+    /**
+     * Where each axis writes in the base study, list steps as positions. Two axes writing the same
+     * place, or one inside the other's value, would make the later one silently overrule the earlier
+     * in every point, so the grid's labels would claim values its studies never had.
+     */
+    private static List<List<String>> places(SweepFile sweep, YamlNode.Mapping tree) {
+        List<List<String>> places = new ArrayList<>();
+        for (Axis axis : sweep.axes()) {
+            List<String> place;
+            try {
+                place = TreeEdit.positions(tree, axis.segments());
+            } catch (IllegalArgumentException e) {
+                throw InputException.at(sweep.file(), axis.line(), axis.column(), "vary key '" + axis.key() + "': "
+                        + e.getMessage());
+            }
+            for (int b = 0; b < places.size(); b++) {
+                List<String> other = places.get(b);
+                Axis earlier = sweep.axes().get(b);
+                if (startsWith(place, other) || startsWith(other, place)) {
+                    String how = place.size() == other.size() ? "names the same study value as"
+                            : place.size() > other.size() ? "lies inside" : "holds";
+                    throw InputException.at(sweep.file(), axis.line(), axis.column(), "vary key '" + axis.key() + "' "
+                            + how + " '" + earlier.key() + "' (line " + earlier.line() + "), so one would overrule the"
+                            + " other at every point; expected keys that set separate values (vary only one of them)");
+                }
+            }
+            places.add(place);
+        }
+        return places;
+    }
+
+    private static boolean startsWith(List<String> path, List<String> prefix) {
+        return path.size() >= prefix.size() && path.subList(0, prefix.size()).equals(prefix);
+    }
+
+    /** Points {@code first} and {@code second} (0-based) derive the same study: at the first axis they differ on. */
+    private static InputException sameStudy(SweepFile sweep, int first, int second) {
+        int[] a = sweep.coordinates(first);
+        int[] b = sweep.coordinates(second);
+        int axis = 0;
+        while (a[axis] == b[axis]) {
+            axis++;
+        }
+        Axis x = sweep.axes().get(axis);
+        YamlNode value = x.values().get(b[axis]);
+        return InputException.at(sweep.file(), value.line(), value.column(), "vary." + x.key() + ": "
+                + x.label(b[axis]) + " gives the same study as " + x.label(a[axis])
+                + " (grid points " + (first + 1) + " and " + (second + 1) + " would be one walk run twice);"
+                + " expected values that differ in meaning, not only in how they are written");
+    }
+
+    private static void checkAlone(SweepFile sweep, Study base, YamlNode.Mapping tree, Axis axis, List<String> place,
+                                   YamlNode value) {
         String shown = YamlText.flow(value);
+        YamlNode.Mapping changed = TreeEdit.set(tree, place, value);
         try {
-            YamlNode.Mapping changed = TreeEdit.set(tree, axis.segments(), value);
             StudyReader.read(base.file(), YamlText.document(changed));
-        } catch (IllegalArgumentException e) {
-            throw InputException.at(sweep.file(), axis.line(), axis.column(), "vary key '" + axis.key() + "': "
-                    + e.getMessage());
         } catch (InputException e) {
             throw InputException.at(sweep.file(), value.line(), value.column(), "vary." + axis.key() + " = " + shown
                     + " makes the base study " + base.file().getFileName() + " invalid: " + problem(e, base.file()));
         }
     }
 
-    private static GridPoint point(SweepFile sweep, Study base, YamlNode.Mapping tree, int p, int width, Path out) {
+    private static Derived point(SweepFile sweep, Study base, YamlNode.Mapping tree, List<List<String>> places, int p,
+                                 int width, Path out) {
         int[] at = sweep.coordinates(p);
         YamlNode.Mapping changed = tree;
         List<String> values = new ArrayList<>();
         Map<String, String> shown = new LinkedHashMap<>();
         for (int a = 0; a < at.length; a++) {
             Axis axis = sweep.axes().get(a);
-            changed = TreeEdit.set(changed, axis.segments(), axis.values().get(at[a]));
+            changed = TreeEdit.set(changed, places.get(a), axis.values().get(at[a]));
             values.add(axis.label(at[a]));
             shown.put(axis.key(), axis.label(at[a]));
         }
@@ -85,7 +147,8 @@ public final class SweepPlanner {
         String yaml = header(sweep, label, shown) + YamlText.document(
                 new PathRebase(base.file().getParent(), folder).apply(changed));
         requireSame(here, StudyReader.read(folder.resolve(PointRunner.STUDY_FILE), yaml), label);
-        return new GridPoint(p + 1, label, values, folder, yaml);
+        return new Derived(new GridPoint(p + 1, label, values, folder, yaml),
+                List.of(here.data(), here.walkForward(), here.strategies(), here.evidence(), here.report()));
     }
 
     private static YamlNode title(String text) {

@@ -21,7 +21,39 @@ final class TreeEdit {
      * @throws IllegalArgumentException naming the step of {@code segments} that does not exist
      */
     static YamlNode.Mapping set(YamlNode.Mapping root, List<String> segments, YamlNode value) {
-        return (YamlNode.Mapping) at(root, segments, 0, old -> value);
+        return (YamlNode.Mapping) at(root, positions(root, segments), 0, old -> value);
+    }
+
+    /**
+     * The path of {@code segments} in {@code root} with every list step written as a position:
+     * {@code strategies.plain.bounds} becomes {@code strategies.1.bounds}. Two keys that spell the
+     * same place differently then compare equal, and a point that renames a strategy still finds
+     * the strategy another key names, since every key is resolved against the base study.
+     *
+     * @throws IllegalArgumentException naming the step of {@code segments} that does not exist
+     */
+    static List<String> positions(YamlNode.Mapping root, List<String> segments) {
+        List<String> path = new ArrayList<>(segments);
+        YamlNode node = root;
+        for (int depth = 0; depth < segments.size() && node != null; depth++) {
+            String step = segments.get(depth);
+            if (node instanceof YamlNode.Mapping m) {
+                YamlNode.Entry e = m.entries().get(step);
+                if (e == null && depth < segments.size() - 1) {
+                    throw new IllegalArgumentException("the base study has no '"
+                            + String.join(".", segments.subList(0, depth + 1)) + "' to look into");
+                }
+                node = e == null ? null : e.value();
+            } else if (node instanceof YamlNode.Sequence q) {
+                int i = itemIndex(q, step, segments, depth);
+                path.set(depth, String.valueOf(i));
+                node = q.items().get(i);
+            } else {
+                throw new IllegalArgumentException("'" + String.join(".", segments.subList(0, depth)) + "' is a single"
+                        + " value in the base study; it has no '" + step + "' inside");
+            }
+        }
+        return List.copyOf(path);
     }
 
     /** {@code root} with {@code key} (a top-level key) removed, when present. */
@@ -31,33 +63,31 @@ final class TreeEdit {
         return new YamlNode.Mapping(entries, root.line(), root.column());
     }
 
-    /** Applies {@code change} to the node at {@code segments} (from {@code depth} on) and rebuilds the parents. */
-    static YamlNode at(YamlNode node, List<String> segments, int depth, UnaryOperator<YamlNode> change) {
-        if (depth == segments.size()) {
+    /**
+     * Applies {@code change} to the node at {@code path} (from {@code depth} on) and rebuilds the
+     * parents. {@code path} gives list steps as positions (see {@link #positions}); every step
+     * before the last exists.
+     */
+    static YamlNode at(YamlNode node, List<String> path, int depth, UnaryOperator<YamlNode> change) {
+        if (depth == path.size()) {
             return change.apply(node);
         }
-        String step = segments.get(depth);
+        String step = path.get(depth);
         if (node instanceof YamlNode.Mapping m) {
             YamlNode.Entry e = m.entries().get(step);
-            if (e == null && depth < segments.size() - 1) {
-                throw new IllegalArgumentException("the base study has no '" + String.join(".", segments.subList(0, depth + 1))
-                        + "' to look into");
-            }
-            YamlNode child = e == null ? null : e.value();
-            YamlNode changed = child == null ? change.apply(null) : at(child, segments, depth + 1, change);
+            YamlNode changed = e == null ? change.apply(null) : at(e.value(), path, depth + 1, change);
             Map<String, YamlNode.Entry> entries = new LinkedHashMap<>(m.entries());
             entries.put(step, e == null ? new YamlNode.Entry(step, m.line(), m.column(), changed)
                     : new YamlNode.Entry(step, e.line(), e.column(), changed));
             return new YamlNode.Mapping(entries, m.line(), m.column());
         }
         if (node instanceof YamlNode.Sequence q) {
-            int i = itemIndex(q, step, segments, depth);
+            int i = Integer.parseInt(step);
             List<YamlNode> items = new ArrayList<>(q.items());
-            items.set(i, at(items.get(i), segments, depth + 1, change));
+            items.set(i, at(items.get(i), path, depth + 1, change));
             return new YamlNode.Sequence(items, q.line(), q.column());
         }
-        throw new IllegalArgumentException("'" + String.join(".", segments.subList(0, depth)) + "' is a single value in the"
-                + " base study; it has no '" + step + "' inside");
+        throw new IllegalStateException("'" + String.join(".", path.subList(0, depth)) + "' holds no '" + step + "'");
     }
 
     private static int itemIndex(YamlNode.Sequence q, String step, List<String> segments, int depth) {

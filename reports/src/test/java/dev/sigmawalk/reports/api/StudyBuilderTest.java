@@ -128,4 +128,77 @@ class StudyBuilderTest {
                 () -> base().walkForward("cost_bps", new StringBuilder("10")).build());
         assertTrue(e.getMessage().startsWith("walkforward.cost_bps is a java.lang.StringBuilder"), e.getMessage());
     }
+
+    /** A null reaches no NullPointerException: each is refused by the call that gave it, naming what it was. */
+    @Test
+    void nulls_areRefusedWhereTheyAreGiven_withTheKey() {
+        record Case(String message, org.junit.jupiter.api.function.Executable call) {
+        }
+        java.util.Map<String, Object> nullRisk = new java.util.HashMap<>();
+        nullRisk.put("risk", null);
+        java.util.Map<String, Object> nullKey = new java.util.HashMap<>();
+        nullKey.put(null, "sample");
+        List<Case> cases = List.of(
+                new Case("data.assets is null; leave the key out to take its default",
+                        () -> Study.builder().data("assets", null)),
+                new Case("data: a key is null; expected a key of a study file, such as assets",
+                        () -> Study.builder().data(null, "x.csv")),
+                new Case("walkforward.cost_bps is null; leave the key out to take its default",
+                        () -> Study.builder().walkForward("cost_bps", null)),
+                new Case("evidence: a key is null; expected a key of a study file, such as resamples",
+                        () -> Study.builder().evidence(null, 500)),
+                new Case("report.paper is null; leave the key out to take its default",
+                        () -> Study.builder().report("paper", null)),
+                new Case("title is null; expected a text such as \"Index model against the sample covariance\"",
+                        () -> Study.builder().title(null)),
+                new Case("a strategy's name is null; expected a text such as \"index-model\"",
+                        () -> Study.builder().strategy(null, Map.of("objective", "equal-weight"))),
+                new Case("strategy s: its settings are null; expected a map of its keys, such as"
+                        + " Map.of(\"objective\", \"equal-weight\")", () -> Study.builder().strategy("s", null)),
+                new Case("strategy s: risk is null; leave the key out to take its default",
+                        () -> Study.builder().strategy("s", nullRisk)),
+                new Case("strategy s: a key is null; expected a key of a study file, such as objective",
+                        () -> Study.builder().strategy("s", nullKey)),
+                new Case("the study file is null; expected the path of a study file", () -> Study.fromYaml(null)));
+        for (Case c : cases) {
+            IllegalArgumentException e = assertThrows(IllegalArgumentException.class, c.call(), c.message());
+            assertEquals(c.message(), e.getMessage());
+        }
+    }
+
+    /** A name in the settings that differs from the strategy's own would rename it without a word. */
+    @Test
+    void secondNameInTheSettings_isRefused_andTheSameNameIsHarmless() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> base().strategy("third", Map.of("name", "fourth", "objective", "equal-weight")));
+        assertEquals("strategy third: its settings name it fourth too; expected the name once, as strategy's first"
+                + " argument", e.getMessage());
+        var spec = base().strategy("third", Map.of("name", "third", "objective", "equal-weight")).build().spec();
+        assertEquals("third", spec.strategies().get(2).name());
+    }
+
+    /** The study's own option types and a File read as a file spells them; the result is the file's study. */
+    @Test
+    void optionsAndFiles_standForTheirSpelling() throws IOException {
+        var code = Study.builder()
+                .title("From code")
+                .data("assets", dir.resolve("assets.csv").toFile())
+                .data("values", dev.sigmawalk.engine.study.ValueKind.RETURNS)
+                .data("market", dir.resolve("market.csv").toFile())
+                .data("riskfree", 0.02)
+                .windows(36, 60)
+                .walkForward("cost_bps", 12.5)
+                .walkForward("start", LocalDate.of(2006, 1, 31))
+                .strategy("index", Map.of("risk", dev.sigmawalk.engine.study.RiskKind.SINGLE_INDEX,
+                        "objective", dev.sigmawalk.engine.study.Objective.MIN_VARIANCE, "bounds", List.of(0, 0.1)))
+                .strategy("tilted", Map.of("risk", "shrinkage", "shrinkage_target",
+                        dev.sigmawalk.engine.study.ShrinkageTarget.IDENTITY, "objective", "mean-variance",
+                        "risk_aversion", 4))
+                .report("paper", dev.sigmawalk.engine.study.Paper.LETTER)
+                .build().spec();
+        var file = fromFile(baseYaml());
+        assertEquals(file.data(), code.data());
+        assertEquals(file.strategies(), code.strategies());
+        assertEquals(file.report(), code.report());
+    }
 }

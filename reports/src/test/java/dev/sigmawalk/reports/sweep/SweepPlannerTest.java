@@ -1,0 +1,102 @@
+package dev.sigmawalk.reports.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.study.Bounds;
+import dev.sigmawalk.engine.study.Study;
+import dev.sigmawalk.engine.study.StudyReader;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.List;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * How the grid's keys combine: keys resolve against the base study (so a renamed strategy is
+ * still found), two keys may not set the same value, and two points may not be the same study.
+ * Planning reads no data, so these run without walking anything.
+ */
+class SweepPlannerTest {
+    @TempDir
+    static Path dir;
+
+    @BeforeAll
+    static void base() throws IOException {
+        SweepFixture.baseStudy(dir);
+    }
+
+    private static SweepPlan plan(String... vary) throws IOException {
+        SweepFile sweep = SweepReader.read(SweepFixture.sweepFile(dir, "grid.yaml", vary));
+        return SweepPlanner.plan(sweep, dir.resolve("out"));
+    }
+
+    private static void assertRefused(String message, String... vary) {
+        InputException e = assertThrows(InputException.class, () -> plan(vary));
+        assertEquals(message, e.getMessage());
+    }
+
+    private static Study point(SweepPlan plan, int i) {
+        GridPoint p = plan.points().get(i);
+        return StudyReader.read(p.studyFile(), p.yaml());
+    }
+
+    @Test
+    void keyNamingARenamedStrategy_findsItInEveryPoint() throws IOException {
+        SweepPlan plan = plan("strategies.plain.name: [p2, p3]", "strategies.plain.bounds: [[0, 0.1], [0, 0.2]]");
+        assertEquals(4, plan.points().size());
+        Study last = point(plan, 3);
+        assertEquals("p3", last.strategies().get(1).name());
+        assertEquals(new Bounds(0, 0.2), last.strategies().get(1).bounds().orElseThrow());
+        assertEquals("index-model", last.strategies().get(0).name(), "the other strategy is untouched");
+    }
+
+    @Test
+    void twoKeysForOneValue_areRefusedAtTheSecond() {
+        assertRefused("grid.yaml line 5, column 3: vary key 'strategies.1.bounds' names the same study value as"
+                        + " 'strategies.plain.bounds' (line 4), so one would overrule the other at every point; expected"
+                        + " keys that set separate values (vary only one of them)",
+                "strategies.plain.bounds: [[0, 0.1], [0, 0.2]]", "strategies.1.bounds: [[0, 0.05]]");
+    }
+
+    @Test
+    void keyInsideAnotherKeysValue_isRefused_inEitherOrder() {
+        assertRefused("grid.yaml line 5, column 3: vary key 'walkforward' holds 'walkforward.cost_bps' (line 4), so one"
+                        + " would overrule the other at every point; expected keys that set separate values (vary only"
+                        + " one of them)",
+                "walkforward.cost_bps: [5, 20]", "walkforward: [{windows: [24], cost_bps: 1}]");
+        assertRefused("grid.yaml line 5, column 3: vary key 'strategies.index-model.bounds' lies inside"
+                        + " 'strategies.0' (line 4), so one would overrule the other at every point; expected keys that"
+                        + " set separate values (vary only one of them)",
+                "strategies.0: [{name: a, objective: equal-weight}]", "strategies.index-model.bounds: [[0, 0.2]]");
+    }
+
+    @Test
+    void valuesThatMeanTheSame_areRefusedAtTheRepeat() {
+        assertRefused("grid.yaml line 4, column 29: vary.walkforward.cost_bps: 5.0 gives the same study as 5 (grid"
+                        + " points 1 and 2 would be one walk run twice); expected values that differ in meaning, not"
+                        + " only in how they are written",
+                "walkforward.cost_bps: [5, 5.0]");
+        assertRefused("grid.yaml line 4, column 37: vary.data.assets: ./assets-monthly.csv gives the same study as"
+                        + " assets-monthly.csv (grid points 1 and 2 would be one walk run twice); expected values that"
+                        + " differ in meaning, not only in how they are written",
+                "data.assets: [assets-monthly.csv, ./assets-monthly.csv]");
+    }
+
+    @Test
+    void repeatOnTheSecondAxis_isPlacedThere() {
+        assertRefused("grid.yaml line 5, column 30: vary.walkforward.cost_bps: 1e1 gives the same study as 10 (grid"
+                        + " points 1 and 2 would be one walk run twice); expected values that differ in meaning, not"
+                        + " only in how they are written",
+                "walkforward.rebalance_every: [1, 3]", "walkforward.cost_bps: [10, 1e1]");
+    }
+
+    @Test
+    void distinctValues_giveOnePointEach() throws IOException {
+        SweepPlan plan = plan("walkforward.cost_bps: [5, 20]", "walkforward.rebalance_every: [1, 3]");
+        assertEquals(List.of("001", "002", "003", "004"), plan.points().stream().map(GridPoint::label).toList());
+        assertEquals(20.0, point(plan, 2).walkForward().costBps());
+    }
+}
