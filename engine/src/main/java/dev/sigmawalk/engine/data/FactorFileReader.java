@@ -17,8 +17,8 @@ final class FactorFileReader {
      * @param panel the cut panel
      * @param firstNeeded the first panel row any window reads (τ_0 − L_max + 1)
      * @param firstRebalance τ_0, for the message
-     * @throws InputException at the first needed date the file has no row for, or its first empty
-     *                        cell on a needed row
+     * @throws InputException at the first needed date the file has no row for, its first empty
+     *                        cell on a needed row, or its first row inside a needed period ({@link InsidePeriod})
      */
     static FactorTable read(Path file, WideTable assets, int offset, ReturnPanel panel, int firstNeeded,
                             int firstRebalance) {
@@ -33,6 +33,10 @@ final class FactorFileReader {
         for (int t = firstNeeded; t < panel.rows(); t++) {
             LocalDate want = panel.date(t);
             while (r < have.length && have[r].isBefore(want)) {
+                if (t > 0 && have[r].isAfter(panel.date(t - 1))) {
+                    throw InsidePeriod.refusal(file, f.lines()[r], have[r], panel.date(t - 1), want,
+                            assets.file());
+                }
                 r++;
             }
             if (r == have.length || !have[r].equals(want)) {

@@ -15,11 +15,11 @@ final class SectorMap {
     }
 
     /**
-     * Every row of the file, asset to sector. An asset listed twice, an empty asset or an empty
+     * Every row of the file, asset to sector, in the file's order. An asset listed twice, an empty asset or an empty
      * sector is an input error naming file, line, column and value.
      */
     static Map<String, String> read(Path file) {
-        Map<String, String> sectors = new HashMap<>();
+        Map<String, String> sectors = new LinkedHashMap<>();
         Map<String, Integer> firstLine = new HashMap<>();
         try (CsvSource source = CsvSource.open(file)) {
             LongCsv.requireHeader(source, HEADER);
@@ -34,7 +34,7 @@ final class SectorMap {
                 Integer earlier = firstLine.putIfAbsent(asset, line);
                 if (earlier != null) {
                     throw new InputException(new InputException.Location(file, line, "asset"),
-                            "'" + asset + "' is already given a sector on line " + earlier);
+                            "'" + asset + "' is already given a sector on line " + earlier + "; expected each asset on one line");
                 }
                 sectors.put(asset, sector);
             }

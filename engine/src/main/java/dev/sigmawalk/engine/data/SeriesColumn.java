@@ -24,11 +24,15 @@ record SeriesColumn(String role, Path file, String column, double[] values, int[
 
     /**
      * A one-column file {@code date,<name>} joined on the assets' dates: every asset date must
-     * have a row there (further rows are ignored and counted in {@code ignored}).
+     * have a row there. Further rows before the first or after the last asset date are ignored
+     * and counted in a warning; with {@code perPeriod} values a row between two asset dates is
+     * refused ({@link InsidePeriod}), while prices may hold any further dates.
      *
-     * @throws InputException at the first asset date the series has no row for
+     * @param perPeriod whether the values are returns or rates over the period ending on their date
+     * @throws InputException at the first asset date the series has no row for, or the first row
+     *                        of per-period values inside a period
      */
-    static SeriesColumn join(String role, WideTable series, WideTable assets, List<String> warnings) {
+    static SeriesColumn join(String role, WideTable series, WideTable assets, boolean perPeriod, List<String> warnings) {
         if (series.columnCount() != 1) {
             throw new InputException(new InputException.Location(series.file(), 1, null),
                     "the " + role + " file has " + series.columnCount() + " value columns; expected one, as in 'date,<name>'");
@@ -40,6 +44,10 @@ record SeriesColumn(String role, Path file, String column, double[] values, int[
         int k = 0;
         for (int t = 0; t < want.length; t++) {
             while (k < have.length && have[k].isBefore(want[t])) {
+                if (perPeriod && t > 0 && have[k].isAfter(want[t - 1])) {
+                    throw InsidePeriod.refusal(series.file(), series.lines()[k], have[k], want[t - 1], want[t],
+                            assets.file());
+                }
                 k++;
             }
             if (k == have.length || !have[k].equals(want[t])) {

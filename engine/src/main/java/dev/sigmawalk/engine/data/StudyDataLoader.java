@@ -128,7 +128,7 @@ final class StudyDataLoader {
             return SeriesColumn.fromColumn(role, assets, col);
         }
         Path file = ((SeriesSource.File) source).path();
-        return SeriesColumn.join(role, readWide(file, kind, null), assets, warnings);
+        return SeriesColumn.join(role, readWide(file, kind, null), assets, kind == ValueKind.RETURNS, warnings);
     }
 
     private int inferPeriods(WideTable table) {
@@ -260,9 +260,17 @@ final class StudyDataLoader {
         Map<String, String> all = SectorMap.read(file);
         fingerprints.add(FileFingerprint.of(file));
         Map<String, String> sectors = SectorMap.restrictTo(all, panel.assets());
-        int without = panel.assetCount() - sectors.size();
-        if (without > 0) {
-            warnings.add(file.getFileName() + " gives no sector for " + without + " of " + panel.assetCount() + " assets");
+        List<String> without = panel.assets().stream().filter(a -> !sectors.containsKey(a)).toList();
+        if (!without.isEmpty()) {
+            warnings.add(file.getFileName() + " gives no sector for " + without.size() + " of " + panel.assetCount()
+                    + " assets: " + listed(without));
+        }
+        // A name the universe does not hold is most often a misspelt asset, which the line above then lists too.
+        List<String> unknown = all.keySet().stream().filter(a -> panel.assetColumn(a) < 0).toList();
+        if (!unknown.isEmpty()) {
+            warnings.add(file.getFileName() + " gives a sector for " + unknown.size() + " asset"
+                    + (unknown.size() == 1 ? "" : "s") + " not in the universe, which "
+                    + (unknown.size() == 1 ? "is" : "are") + " ignored: " + listed(unknown));
         }
         return sectors;
     }
@@ -303,11 +311,15 @@ final class StudyDataLoader {
             }
         }
         if (!unknown.isEmpty()) {
-            int shown = Math.min(unknown.size(), UNKNOWN_SHOWN);
             warnings.add(file.getFileName() + " gives alphas for " + unknown.size() + " asset"
-                    + (unknown.size() == 1 ? "" : "s") + " not in the universe, which are ignored: "
-                    + String.join(", ", unknown.subList(0, shown)) + (shown < unknown.size() ? ", ..." : ""));
+                    + (unknown.size() == 1 ? "" : "s") + " not in the universe, which are ignored: " + listed(unknown));
         }
+    }
+
+    /** The first few names, then "..." when there are more. */
+    private static String listed(List<String> names) {
+        int shown = Math.min(names.size(), UNKNOWN_SHOWN);
+        return String.join(", ", names.subList(0, shown)) + (shown < names.size() ? ", ..." : "");
     }
 
     /**

@@ -172,7 +172,9 @@ class DataIntakeTest {
                         "    risk: single-index\n    objective: max-sharpe\n    alphas: alphas.csv");
         StudyData d = f.load();
         assertEquals(Map.of("A01", "Harbour", "A02", "Harbour"), d.sectors());
-        assertTrue(d.warnings().contains("sectors.csv gives no sector for 1 of 3 assets"), d.warnings().toString());
+        assertTrue(d.warnings().contains("sectors.csv gives no sector for 1 of 3 assets: A03"), d.warnings().toString());
+        assertTrue(d.warnings().contains("sectors.csv gives a sector for 1 asset not in the universe, which is ignored:"
+                + " Z99"), d.warnings().toString());
         AlphaTable alphas = d.alphasFor(f.study().strategies().get(0));
         assertEquals(0.0, alphas.latest("A01", LocalDate.of(2019, 12, 31)), 0.0, "before the first alpha");
         assertEquals(0.001, alphas.latest("A01", LocalDate.of(2020, 1, 31)), 0.0, "on its date");
