@@ -121,6 +121,49 @@ final class RejectionRates {
     }
 
     /**
+     * The difference tests when the two series do not share one volatility path, as in the
+     * family's design below: a_t = ρ u_t + √(1 - ρ²) w_t, where u and the baseline b come from one
+     * pair of the null model (one volatility path under GARCH) and w from another (its own path),
+     * so both have variance 1, the same mean and the same Sharpe ratio, and under GARCH the
+     * difference of their squares keeps the slowly decaying autocorrelation of volatility
+     * clustering that a shared path cancels.
+     *
+     * @param blockLength the bootstrap's block length, 0 for the data-driven one (Method §9)
+     */
+    static Difference separatePaths(NullModel model, int periods, int draws, int bootstrapDraws, int resamples,
+                                    int blockLength, long seed) {
+        SplittableRandom random = new SplittableRandom(seed);
+        DifferenceTests hacOnly = new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(100, seed, blockLength));
+        int[] counts = new int[5];
+        int bootstrapped = Math.max(1, bootstrapDraws);
+        double rest = Math.sqrt(1 - PAIR_CORRELATION * PAIR_CORRELATION);
+        for (int k = 0; k < draws; k++) {
+            double[][] p = model.pair(random, periods, PAIR_CORRELATION);
+            double[][] q = model.pair(random, periods, PAIR_CORRELATION);
+            double[] a = new double[periods];
+            double[] b = new double[periods];
+            for (int t = 0; t < periods; t++) {
+                a[t] = PAIR_CORRELATION * p[0][t] + rest * q[1][t] + MEAN;
+                b[t] = p[1][t] + MEAN;
+            }
+            boolean withBootstrap = k < bootstrapDraws;
+            DifferenceTests tests = withBootstrap
+                    ? new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(resamples, seed + k, blockLength)) : hacOnly;
+            DifferenceTest sharpe = tests.sharpeRatio(a, b);
+            DifferenceTest variance = tests.variance(a, b);
+            counts[0] += sharpe.hacPValue() <= LEVEL ? 1 : 0;
+            counts[2] += variance.hacPValue() <= LEVEL ? 1 : 0;
+            if (withBootstrap) {
+                counts[1] += sharpe.bootstrapPValue() <= LEVEL ? 1 : 0;
+                counts[3] += variance.bootstrapPValue() <= LEVEL ? 1 : 0;
+            }
+            counts[4] += JobsonKorkieMemmel.test(a, b).pValue() <= LEVEL ? 1 : 0;
+        }
+        return new Difference((double) counts[0] / draws, (double) counts[1] / bootstrapped,
+                (double) counts[2] / draws, (double) counts[3] / bootstrapped, (double) counts[4] / draws);
+    }
+
+    /**
      * The family correction under the global null: {@code strategies} strategies, each compared with
      * one common baseline on both measures (2 × strategies tests, correlated through the baseline
      * and the shared volatility), as the report's family is. Family-wise error rate with and

@@ -75,6 +75,24 @@ public final class SizeAndPower {
                         bootMonthly, 499, seed + 17)))
                 .append(" | ").append(difference(RejectionRates.difference(NullModel.NORMAL, DAILY_PERIODS, 0.9, 0.15,
                         hacDaily, bootDaily, 199, seed + 19))).append(" |\n\n");
+        out.append("Difference tests when the two series have their own volatility paths (the family's design), the same "
+                + "columns and draws; the block length is the data-driven one unless given:\n\n| null | T = ")
+                .append(MONTHLY_PERIODS).append(" (monthly) | T = ").append(DAILY_PERIODS).append(" (daily) |\n|---|---|---|\n");
+        out.append("| iid normal | ")
+                .append(difference(RejectionRates.separatePaths(NullModel.NORMAL, MONTHLY_PERIODS, hacMonthly, bootMonthly,
+                        499, 0, seed + 31)))
+                .append(" | ").append(difference(RejectionRates.separatePaths(NullModel.NORMAL, DAILY_PERIODS, hacDaily,
+                        bootDaily, 199, 0, seed + 37))).append(" |\n");
+        out.append("| GARCH(1,1) | ")
+                .append(difference(RejectionRates.separatePaths(NullModel.GARCH, MONTHLY_PERIODS, hacMonthly, bootMonthly,
+                        499, 0, seed + 41)))
+                .append(" | ").append(difference(RejectionRates.separatePaths(NullModel.GARCH, DAILY_PERIODS, hacDaily,
+                        bootDaily, 199, 0, seed + 43))).append(" |\n");
+        out.append("| GARCH(1,1), block length 20 (monthly) and 40 (daily) | ")
+                .append(difference(RejectionRates.separatePaths(NullModel.GARCH, MONTHLY_PERIODS, hacMonthly, bootMonthly,
+                        499, 20, seed + 41)))
+                .append(" | ").append(difference(RejectionRates.separatePaths(NullModel.GARCH, DAILY_PERIODS, hacDaily,
+                        bootDaily, 199, 40, seed + 43))).append(" |\n\n");
         out.append("Family of 6 (3 strategies against one baseline, Sharpe and variance), any rejection at 5 % "
                 + "(uncorrected bootstrap / Romano-Wolf), ").append(familyMonthly).append(" draws with 199 resamples (monthly), ")
                 .append(familyDaily).append(" with 199 (daily):\n\n| null | T = ").append(MONTHLY_PERIODS)

@@ -70,6 +70,11 @@ class ReportWriterTest {
             assertNotNull(doc.getElementById(id), "section " + id);
             assertFalse(doc.getElementById(id).text().isBlank(), "section " + id + " has text");
         }
+        // The simulated size of the variance tests with separate volatility paths (15-23 % at a
+        // stated 5 %, the developer guide's size tables) is said where the committee reads.
+        String cautions = doc.getElementById("cautions").text();
+        assertTrue(cautions.contains("volatilities rise and fall together") && cautions.contains("15 to 23 %"),
+                cautions);
     }
 
     @Test
