@@ -1,8 +1,6 @@
 package dev.sigmawalk.reports.cli;
 
-import dev.sigmawalk.engine.data.InputException;
 import dev.sigmawalk.reports.sweep.SweepReader;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -36,10 +34,7 @@ public final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (Files.isRegularFile(studyFile) && SweepReader.isSweep(studyFile)) {
-            throw new InputException(studyFile.getFileName() + " is a sweep file (it has vary:); `sigmawalk run` runs a"
-                    + " study file, and `sigmawalk sweep " + studyFile.getFileName() + "` runs a sweep");
-        }
+        SweepReader.requireStudy(studyFile, "`sigmawalk run`");
         StudyRun.Options options = new StudyRun.Options(Optional.ofNullable(out), force, quiet,
                 threads == null ? Runtime.getRuntime().availableProcessors() : threads);
         StudyRun.Outcome outcome = StudyRun.execute(studyFile, options, System.err,

@@ -36,6 +36,19 @@ public final class SweepReader {
     }
 
     /**
+     * Refuses a sweep file where a study file is expected, saying which command runs it.
+     *
+     * @param taker what expected a study file, such as {@code `sigmawalk run`}
+     * @throws InputException when {@code file} is a sweep file
+     */
+    public static void requireStudy(Path file, String taker) {
+        if (Files.isRegularFile(file) && isSweep(file)) {
+            throw new InputException(file.getFileName() + " is a sweep file (it has vary:); " + taker + " takes a study"
+                    + " file, and `sigmawalk sweep " + file.getFileName() + "` runs a sweep");
+        }
+    }
+
+    /**
      * @throws InputException naming the sweep file, line and column of the first problem
      */
     public static SweepFile read(Path sweepFile) {

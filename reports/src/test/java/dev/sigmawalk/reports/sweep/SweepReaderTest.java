@@ -75,8 +75,11 @@ class SweepReaderTest {
         Path sweep = write("study: b.yaml\nvary:\n  a.b: [1, 2]\n");
         SweepFixture.Result r = SweepFixture.sigmawalk("run", sweep.toString(), "--out", dir.resolve("out").toString());
         assertEquals(2, r.code(), r.err());
-        assertEquals("sigmawalk: s.yaml is a sweep file (it has vary:); `sigmawalk run` runs a study file, and"
+        assertEquals("sigmawalk: s.yaml is a sweep file (it has vary:); `sigmawalk run` takes a study file, and"
                 + " `sigmawalk sweep s.yaml` runs a sweep", r.err().strip());
         assertTrue(Files.notExists(dir.resolve("out")));
+        InputException e = assertThrows(InputException.class, () -> dev.sigmawalk.reports.api.Study.fromYaml(sweep));
+        assertEquals("s.yaml is a sweep file (it has vary:); Study.fromYaml takes a study file, and `sigmawalk sweep"
+                + " s.yaml` runs a sweep", e.getMessage());
     }
 }
