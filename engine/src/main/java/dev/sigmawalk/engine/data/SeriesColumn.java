@@ -2,6 +2,7 @@ package dev.sigmawalk.engine.data;
 
 import java.nio.file.Path;
 import java.time.LocalDate;
+import java.time.YearMonth;
 import java.util.List;
 
 /**
@@ -53,7 +54,8 @@ record SeriesColumn(String role, Path file, String column, double[] values, int[
             if (k == have.length || !have[k].equals(want[t])) {
                 throw new InputException(new InputException.Location(assets.file(), assets.lines()[t], "date"),
                         "'" + want[t] + "' has no row in " + series.file().getFileName() + "; the " + role
-                                + " must have a row for every date of the assets file");
+                                + " must have a row for every date of the assets file"
+                                + sameMonthHint(series, have, want, t, assets.file()));
             }
             values[t] = series.value(k, 0);
             lines[t] = series.lines()[k];
@@ -63,5 +65,31 @@ record SeriesColumn(String role, Path file, String column, double[] values, int[
             warnings.add(series.file().getFileName() + ": " + ignored + " dates that the assets file lacks were ignored");
         }
         return new SeriesColumn(role, series.file(), series.columns().get(0), values, lines);
+    }
+
+    /**
+     * A hint when both files hold one row a month and the series has this month under another day:
+     * monthly series from different sources often date a month differently (its first day, its
+     * last calendar day, its last trading day), and the fix is to give both files the same dates,
+     * not to fill a gap. Daily files, which hold many rows a month, get no hint.
+     */
+    private static String sameMonthHint(WideTable series, LocalDate[] have, LocalDate[] want, int t, Path assetsFile) {
+        YearMonth month = YearMonth.from(want[t]);
+        boolean assetsMonthly = (t == 0 || !YearMonth.from(want[t - 1]).equals(month))
+                && (t + 1 == want.length || !YearMonth.from(want[t + 1]).equals(month));
+        int found = -1;
+        int inMonth = 0;
+        for (int k = 0; k < have.length; k++) {
+            if (YearMonth.from(have[k]).equals(month)) {
+                found = k;
+                inMonth++;
+            }
+        }
+        if (!assetsMonthly || inMonth != 1) {
+            return "";
+        }
+        return "; " + series.file().getFileName() + " has '" + have[found] + "' (line " + series.lines()[found]
+                + ") in that month: the two files date their months differently; give "
+                + series.file().getFileName() + " the dates of " + assetsFile.getFileName();
     }
 }

@@ -2,6 +2,7 @@ package dev.sigmawalk.engine.data;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -103,6 +104,23 @@ class DataIntakeErrorTest {
         InputException e = loadFails(new StudyFixture(dir).edit("market.csv", "2020-06-30,-0.006\n", ""));
         assertAt(e, "assets.csv", 7, "date");
         assertTrue(e.getMessage().contains("'2020-06-30' has no row in market.csv"), e.getMessage());
+        assertFalse(e.getMessage().contains("date their months differently"), "June has no row at all: " + e.getMessage());
+    }
+
+    /**
+     * Monthly series from different sources often date a month on its first day where returns are
+     * dated on its last (common practice of public rate tables, from memory): the message says so
+     * and names the fix, instead of only a missing row.
+     */
+    @Test
+    void riskFreeDatedOnTheFirstOfEachMonth_isNamedAsADatingMismatch() {
+        InputException e = loadFails(new StudyFixture(dir).write("riskfree.csv", String.join("\n", "date,rf",
+                "2020-01-01,0.001", "2020-02-01,0.001", "2020-03-01,0.001", "2020-04-01,0.001", "2020-05-01,0.001",
+                "2020-06-01,0.001", "2020-07-01,0.001", "2020-08-01,0.001", "")));
+        assertAt(e, "assets.csv", 2, "date");
+        assertTrue(e.getMessage().contains("'2020-01-31' has no row in riskfree.csv; the risk-free must have a row for"
+                + " every date of the assets file; riskfree.csv has '2020-01-01' (line 2) in that month: the two files"
+                + " date their months differently; give riskfree.csv the dates of assets.csv"), e.getMessage());
     }
 
     @Test
