@@ -5,9 +5,11 @@ import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Objects;
 import java.util.TreeMap;
 
@@ -53,6 +55,11 @@ public final class AlphaTable {
         List<String> out = new ArrayList<>(byAsset.keySet());
         Collections.sort(out);
         return out;
+    }
+
+    /** The earliest date of any alpha; empty for a table with none. */
+    public Optional<LocalDate> firstDate() {
+        return byAsset.values().stream().map(s -> s.dates[0]).min(Comparator.naturalOrder());
     }
 
     /** Number of (date, asset) entries. */

@@ -98,7 +98,7 @@ final class StudyDataLoader {
 
         warnFewResamples();
         Map<Path, FactorTable> factors = factorFiles(table, offset, panel, firstNeeded, schedule.firstRebalance());
-        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(panel), factors, fingerprints, warnings,
+        return new StudyData(panel, schedule, inferred, sectors(panel), alphas(panel, schedule), factors, fingerprints, warnings,
                 AssetCoverage.of(panel, checks.stats()));
     }
 
@@ -288,7 +288,7 @@ final class StudyDataLoader {
         return out;
     }
 
-    private Map<Path, AlphaTable> alphas(ReturnPanel panel) {
+    private Map<Path, AlphaTable> alphas(ReturnPanel panel, Schedule schedule) {
         Map<Path, AlphaTable> out = new LinkedHashMap<>();
         for (StrategySpec s : study.strategies()) {
             if (s.alphas().isPresent() && !out.containsKey(s.alphas().get())) {
@@ -297,6 +297,7 @@ final class StudyDataLoader {
                 out.put(file, table);
                 fingerprints.add(FileFingerprint.of(file));
                 warnUnknownAlphaAssets(file, table, panel);
+                warnAlphasNeverUsed(file, table, panel.date(schedule.rebalanceRow(schedule.count() - 1)));
             }
         }
         return out;
@@ -314,6 +315,17 @@ final class StudyDataLoader {
             warnings.add(file.getFileName() + " gives alphas for " + unknown.size() + " asset"
                     + (unknown.size() == 1 ? "" : "s") + " not in the universe, which are ignored: " + listed(unknown));
         }
+    }
+
+    /**
+     * Method §4: a rebalance uses the latest alpha dated on or before it, so a file whose alphas
+     * all come after the last rebalance (dated in another year or century by mistake) changes
+     * nothing, which the run would otherwise not show.
+     */
+    private void warnAlphasNeverUsed(Path file, AlphaTable table, LocalDate lastRebalance) {
+        table.firstDate().filter(first -> first.isAfter(lastRebalance)).ifPresent(first -> warnings.add(
+                file.getFileName() + ": its first alpha is dated " + first + ", after the last rebalance ("
+                        + lastRebalance + "), so no rebalance uses any of its alphas"));
     }
 
     /** The first few names, then "..." when there are more. */

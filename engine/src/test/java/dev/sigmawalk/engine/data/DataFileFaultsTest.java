@@ -298,6 +298,21 @@ class DataFileFaultsTest {
                 w.toString());
     }
 
+    /** The fixture's last rebalance is 2020-07-31 (window 3, every row, 8 rows): alphas dated later change nothing. */
+    @Test
+    void alphasAllDatedAfterTheLastRebalance_areWarnedAsNeverUsed() {
+        String never = "alphas.csv: its first alpha is dated 2020-08-31, after the last rebalance (2020-07-31), so no"
+                + " rebalance uses any of its alphas";
+        StudyFixture f = new StudyFixture(dir)
+                .write("alphas.csv", "date,asset,alpha\n2021-01-31,A01,0.001\n2020-08-31,A02,0.002\n")
+                .edit("study.yaml", "    risk: sample\n    objective: min-variance",
+                        "    risk: single-index\n    objective: max-sharpe\n    alphas: alphas.csv");
+        assertTrue(f.load().warnings().contains(never), f.load().warnings().toString());
+        f.write("alphas.csv", "date,asset,alpha\n2021-01-31,A01,0.001\n2020-07-31,A02,0.002\n");
+        assertTrue(f.load().warnings().stream().noneMatch(w -> w.startsWith("alphas.csv")),
+                "one alpha on the last rebalance is used: " + f.load().warnings());
+    }
+
     @Test
     void fewResamples_warnAboutCoarsePValues() {
         List<String> w = new StudyFixture(dir).edit("study.yaml", "strategies:", "evidence:\n  resamples: 200\nstrategies:")

@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.reports.sweep.SweepReader;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -45,6 +46,7 @@ public final class Study {
         if (file == null) {
             throw new IllegalArgumentException("the study file is null; expected the path of a study file");
         }
+        SweepReader.requireStudy(file, "Study.fromYaml");
         return new Study(StudyReader.read(file));
     }
 

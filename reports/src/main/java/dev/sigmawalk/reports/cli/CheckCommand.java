@@ -17,6 +17,7 @@ import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.engine.timeline.Schedule;
 import dev.sigmawalk.reports.api.RunPreview;
+import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.strategies.StrategyCatalog;
 import dev.sigmawalk.reports.sweep.SweepCheck;
 import dev.sigmawalk.reports.sweep.SweepReader;
@@ -26,6 +27,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -71,10 +73,23 @@ public final class CheckCommand implements Callable<Integer> {
         printList(out, "Defaults applied (keys this study leaves out)", applied.isEmpty() ? List.of("none") : applied);
         List<String> warnings = new ArrayList<>(data.warnings());
         warnings.addAll(preview.warnings());
+        outputProblem(study, data).ifPresent(warnings::add);
         printList(out, "Warnings", warnings.isEmpty() ? List.of("none") : warnings);
         out.println("Study is valid: " + study.file().getFileName());
         out.flush();
         return 0;
+    }
+
+    /**
+     * Whether {@code sigmawalk run} without {@code --out} or {@code --force} could write the
+     * study's output folder: a warning, not an error, since a run may name another folder.
+     */
+    private static Optional<String> outputProblem(Study study, StudyData data) {
+        List<Path> inputs = new ArrayList<>();
+        inputs.add(study.file());
+        data.fingerprints().forEach(f -> inputs.add(f.path()));
+        return OutputFolder.problem(study.output(), inputs)
+                .map(p -> "output: a run without --out would stop here: " + p);
     }
 
     private static void printData(PrintWriter out, Study study, StudyData data) {

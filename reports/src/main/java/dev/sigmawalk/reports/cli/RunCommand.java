@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.cli;
 
+import dev.sigmawalk.reports.sweep.SweepReader;
 import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
@@ -33,6 +34,7 @@ public final class RunCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        SweepReader.requireStudy(studyFile, "`sigmawalk run`");
         StudyRun.Options options = new StudyRun.Options(Optional.ofNullable(out), force, quiet,
                 threads == null ? Runtime.getRuntime().availableProcessors() : threads);
         StudyRun.Outcome outcome = StudyRun.execute(studyFile, options, System.err,

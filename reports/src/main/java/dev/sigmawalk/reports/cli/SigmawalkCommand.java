@@ -1,6 +1,7 @@
 package dev.sigmawalk.reports.cli;
 
 import dev.sigmawalk.engine.data.InputException;
+import java.nio.file.Path;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -38,11 +39,24 @@ public final class SigmawalkCommand implements Runnable {
     /** Builds the command line with failure traces written to the given log. */
     static CommandLine commandLine(CrashLog log) {
         CommandLine cl = new CommandLine(new SigmawalkCommand());
+        cl.registerConverter(Path.class, SigmawalkCommand::path);
         cl.addSubcommand("help", new CommandLine.HelpCommand());
         CommandHelp.addToEverySubcommand(cl);
         cl.setExitCodeExceptionMapper(SigmawalkCommand::exitCodeFor);
         cl.setExecutionExceptionHandler(new FailureHandler(log));
         return cl;
+    }
+
+    /**
+     * An empty argument would name the working folder, so {@code --out "$OUT"} with the variable
+     * unset (and {@code --force}) would write there; it is refused instead.
+     */
+    private static Path path(String text) {
+        if (text.isBlank()) {
+            throw new CommandLine.TypeConversionException("'" + text + "' is an empty path; expected the name of a file"
+                    + " or folder (is a variable in the command empty?)");
+        }
+        return Path.of(text);
     }
 
     private static int exitCodeFor(Throwable ex) {

@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
@@ -68,6 +69,31 @@ public final class OutputFolder implements AutoCloseable {
      */
     public static OutputFolder prepare(Path target, boolean force, List<Path> inputs, FileOps ops) {
         Path abs = target.toAbsolutePath().normalize();
+        Path resolved = requireAllowed(abs, force, inputs);
+        if (!Files.isDirectory(resolved)) {
+            createParents(abs);
+        }
+        WorkFolders.removeAbandoned(resolved);
+        OutputFolder folder = new OutputFolder(resolved, WorkFolders.newSuffix(), inputs, ops);
+        folder.createStaging();
+        return folder;
+    }
+
+    /**
+     * Why {@link #prepare} without {@code --force} would refuse {@code target}, found without
+     * writing anything (for {@code sigmawalk check}); empty when a run could write there.
+     */
+    public static Optional<String> problem(Path target, List<Path> inputs) {
+        try {
+            requireAllowed(target.toAbsolutePath().normalize(), false, inputs);
+            return Optional.empty();
+        } catch (InputException e) {
+            return Optional.of(e.getMessage());
+        }
+    }
+
+    /** Every rule on the target that needs no writing; returns the target with links resolved. */
+    private static Path requireAllowed(Path abs, boolean force, List<Path> inputs) {
         if (Files.isSymbolicLink(abs) && !Files.exists(abs)) {
             throw new InputException("output folder " + abs + " is a symbolic link to " + linkTarget(abs)
                     + ", which does not exist; create that folder or choose another --out");
@@ -80,12 +106,9 @@ public final class OutputFolder implements AutoCloseable {
         if (Files.isDirectory(resolved)) {
             requireUsable(resolved, force);
         } else {
-            createParents(abs);
+            requireCreatable(abs);
         }
-        WorkFolders.removeAbandoned(resolved);
-        OutputFolder folder = new OutputFolder(resolved, WorkFolders.newSuffix(), inputs, ops);
-        folder.createStaging();
-        return folder;
+        return resolved;
     }
 
     private static void requireUsable(Path dir, boolean force) {
@@ -104,10 +127,9 @@ public final class OutputFolder implements AutoCloseable {
         }
     }
 
-    /** Creates the missing folders above the target, naming a file or a read-only folder in the way. */
-    private static void createParents(Path abs) {
-        Path parent = abs.getParent();
-        Path existing = parent;
+    /** Names a file or a read-only folder in the way of the missing folders above the target. */
+    private static void requireCreatable(Path abs) {
+        Path existing = abs.getParent();
         while (existing != null && !Files.exists(existing)) {
             existing = existing.getParent();
         }
@@ -119,8 +141,12 @@ public final class OutputFolder implements AutoCloseable {
             throw new InputException("output folder " + abs + " cannot be created: folder " + existing
                     + " is not writable; choose another --out");
         }
+    }
+
+    /** Creates the missing folders above the target (checked by {@link #requireCreatable}). */
+    private static void createParents(Path abs) {
         try {
-            Files.createDirectories(parent);
+            Files.createDirectories(abs.getParent());
         } catch (IOException e) {
             throw new InputException("output folder " + abs + " cannot be created: " + FileProblem.describe(e)
                     + "; choose another --out");

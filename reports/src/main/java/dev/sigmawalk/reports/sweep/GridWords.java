@@ -17,12 +17,19 @@ final class GridWords {
     private GridWords() {
     }
 
-    static String answer(SweepPlan plan, GridEvidence e) {
+    /**
+     * @param failed points that failed: their comparisons are missing from the search, so the
+     *               sentence says the best is the best of the points that ran
+     */
+    static String answer(SweepPlan plan, GridEvidence e, long failed) {
         if (e.best().isEmpty()) {
             return "No point has a strategy tested against a baseline, so the grid names no best point.";
         }
         PointRow best = e.best().get();
-        StringBuilder s = new StringBuilder("Lowest realised volatility in the grid: ").append(best.strategy())
+        StringBuilder s = new StringBuilder(failed == 0 ? "Lowest realised volatility in the grid: "
+                : "Lowest realised volatility among the points that ran (" + failed + " of " + plan.points().size()
+                        + " failed, and their comparisons are in neither the search nor its corrections): ")
+                .append(best.strategy())
                 .append(", window ").append(best.window()).append(", at point ").append(best.point().label())
                 .append(" (").append(values(plan, best.point())).append("): ").append(percent(best.volatility()))
                 .append(" a year");

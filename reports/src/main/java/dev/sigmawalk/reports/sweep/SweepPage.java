@@ -66,7 +66,7 @@ final class SweepPage {
                 + ", run " + c.engine() + ".";
         List<String> leftOut = GridWords.leftOut(c.evidence());
         return new SweepView(style(), plan.sweep().title(), subtitle, axes, counts(c.outcomes()),
-                GridWords.answer(plan, c.evidence()), GridWords.method(c.evidence()), !leftOut.isEmpty(), leftOut, maps,
+                GridWords.answer(plan, c.evidence(), failed(c.outcomes())), GridWords.method(c.evidence()), !leftOut.isEmpty(), leftOut, maps,
                 points, c.started().toString(), c.finished().toString());
     }
 
@@ -81,8 +81,12 @@ final class SweepPage {
     private static String counts(List<PointOutcome> outcomes) {
         long ran = outcomes.stream().filter(o -> o.status() == PointOutcome.Status.RAN).count();
         long reused = outcomes.stream().filter(o -> o.status() == PointOutcome.Status.REUSED).count();
-        long failed = outcomes.stream().filter(o -> o.status() == PointOutcome.Status.FAILED).count();
-        return ran + " ran, " + reused + " reused from an earlier run of the same study and inputs, " + failed + " failed.";
+        return ran + " ran, " + reused + " reused from an earlier run of the same study and inputs, " + failed(outcomes)
+                + " failed.";
+    }
+
+    private static long failed(List<PointOutcome> outcomes) {
+        return outcomes.stream().filter(o -> o.status() == PointOutcome.Status.FAILED).count();
     }
 
     static String count(long n, String noun) {

@@ -3,6 +3,7 @@ package dev.sigmawalk.reports.sweep;
 import dev.sigmawalk.engine.data.InputException;
 import dev.sigmawalk.engine.study.YamlNode;
 import dev.sigmawalk.engine.study.YamlTree;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -18,6 +19,8 @@ public final class SweepReader {
     /** Grids larger than this are almost certainly a typing slip, and would fill a disk. */
     static final int MAX_POINTS = 100_000;
     private static final Set<String> ROOT = Set.of("title", "study", "vary", "output");
+    /** Keys only a study file has at its top level: a file with them and no vary: is a study. */
+    private static final Set<String> STUDY_KEYS = Set.of("data", "walkforward", "strategies");
     /** Keys the sweep itself sets in every point. */
     private static final Set<String> RESERVED = Set.of("title", "output");
     private static final Pattern KEY = Pattern.compile("[A-Za-z0-9_-]+(\\.[A-Za-z0-9_-]+)*");
@@ -33,6 +36,19 @@ public final class SweepReader {
     }
 
     /**
+     * Refuses a sweep file where a study file is expected, saying which command runs it.
+     *
+     * @param taker what expected a study file, such as {@code `sigmawalk run`}
+     * @throws InputException when {@code file} is a sweep file
+     */
+    public static void requireStudy(Path file, String taker) {
+        if (Files.isRegularFile(file) && isSweep(file)) {
+            throw new InputException(file.getFileName() + " is a sweep file (it has vary:); " + taker + " takes a study"
+                    + " file, and `sigmawalk sweep " + file.getFileName() + "` runs a sweep");
+        }
+    }
+
+    /**
      * @throws InputException naming the sweep file, line and column of the first problem
      */
     public static SweepFile read(Path sweepFile) {
@@ -41,6 +57,11 @@ public final class SweepReader {
         if (!(root instanceof YamlNode.Mapping m)) {
             throw InputException.at(file, root.line(), root.column(), "the sweep file is " + root.describe()
                     + "; expected keys title, study, vary, output");
+        }
+        if (!m.entries().containsKey("vary") && STUDY_KEYS.stream().anyMatch(m.entries()::containsKey)) {
+            throw InputException.at(file, m.line(), m.column(), "this is a study file, not a sweep (it has no vary:);"
+                    + " `sigmawalk run " + file.getFileName() + "` runs it, or a sweep file names it as its study: "
+                    + file.getFileName());
         }
         for (YamlNode.Entry e : m.entries().values()) {
             if (!ROOT.contains(e.key())) {
@@ -51,6 +72,10 @@ public final class SweepReader {
         String title = m.entries().containsKey("title") ? text(file, m.entries().get("title")) : "Sweep";
         YamlNode.Entry study = required(file, m, "study");
         Path base = file.getParent().resolve(text(file, study)).normalize();
+        if (Files.isRegularFile(base) && isSweep(base)) {
+            throw InputException.at(file, study.value().line(), study.value().column(), "study: " + text(file, study)
+                    + " is itself a sweep file (it has vary:); expected a study file, the one study a sweep varies");
+        }
         List<Axis> axes = axes(file, required(file, m, "vary"));
         String output = m.entries().containsKey("output") ? text(file, m.entries().get("output")) : DEFAULT_OUTPUT;
         requireSize(file, m.entries().get("vary").value(), axes);

@@ -6,7 +6,9 @@ import dev.sigmawalk.engine.evidence.HacKernel;
 import dev.sigmawalk.reports.cli.VersionProvider;
 import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.reports.files.SweepFiles;
+import java.io.IOException;
 import java.io.PrintStream;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -102,6 +104,15 @@ public final class SweepRun {
         }
     }
 
+    private static void retractStale(SweepPlan plan, List<PointOutcome> outcomes, List<Path> inputs) {
+        try {
+            StalePoints.retract(plan, outcomes, inputs);
+        } catch (IOException | UncheckedIOException e) {
+            // The grid is published and its files name only its own points; a folder of an earlier
+            // grid that cannot be removed stays as it was, and the next sweep here tries again.
+        }
+    }
+
     private static Consumer<PointOutcome> progress(PrintStream err, SweepPlan plan, int total) {
         int[] done = {0};
         return o -> {
@@ -138,6 +149,7 @@ public final class SweepRun {
             SweepManifest.write(dir.resolve("manifest.json"), new SweepManifest.Content(VersionProvider.version(), plan,
                     outcomes, evidence, engine.describe(), started, finished));
             folder.commit();
+            retractStale(plan, outcomes, inputs);
             return new Outcome(folder.target(), outcomes, evidence);
         }
     }

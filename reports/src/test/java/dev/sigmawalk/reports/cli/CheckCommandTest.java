@@ -194,6 +194,21 @@ class CheckCommandTest {
         assertTrue(out.toString().contains("  assets.csv line 3, column 'A01': a return of 7.0 is above +500 %"), out.toString());
     }
 
+    /** What a run without --out would refuse is a warning of check, which still writes nothing. */
+    @Test
+    void outputFolderARunWouldRefuse_isAWarning() {
+        edit("study.yaml", "title: Invented harbour study", "title: Invented harbour study\noutput: assets.csv");
+        assertEquals(0, check());
+        assertTrue(out.toString().contains("  output: a run without --out would stop here: output " + dir.resolve("assets.csv")
+                + " is a file, not a folder; choose another --out"), out.toString());
+        write("study.yaml", STUDY + "output: .\n");
+        write("summary.csv", "mine\n");
+        out.getBuffer().setLength(0);
+        assertEquals(0, check());
+        assertTrue(out.toString().contains("  output: a run without --out would stop here: output folder " + dir
+                + " is not empty and was not written by sigmawalk"), out.toString());
+    }
+
     @Test
     void nonIsoDate_exitsTwo() {
         edit("assets.csv", "2020-04-30", "30.04.2020");

@@ -231,6 +231,18 @@ class RunCommandTest {
         }
     }
 
+    /** An empty --out (an unset variable in "$OUT") would be the working folder; every command refuses it. */
+    @Test
+    void emptyPath_isRefusedBeforeAnyWork() {
+        for (String[] args : List.of(new String[] {"run", study.toString(), "--out", "", "--force"},
+                new String[] {"demo", "--out", " "}, new String[] {"check", ""})) {
+            Result r = sigmawalk(args);
+            assertEquals(SigmawalkCommand.EXIT_BAD_INPUT, r.code(), String.join(" ", args));
+            assertTrue(r.err().contains("is an empty path; expected the name of a file or folder (is a variable in"
+                    + " the command empty?)"), r.err());
+        }
+    }
+
     @Test
     void rerunIntoItsOwnFolder_isAllowedWithoutForce(@TempDir Path out) {
         assertEquals(0, sigmawalk("run", study.toString(), "--out", out.toString(), "--quiet").code());

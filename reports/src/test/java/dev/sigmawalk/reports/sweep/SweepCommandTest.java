@@ -256,9 +256,48 @@ class SweepCommandTest {
         assertTrue(failed.contains(",failed,") && failed.contains("cannot make 72 weights sum to 1"), failed);
         assertTrue(Files.isRegularFile(target.resolve("points/001/summary.csv")), "point 001 finished");
         assertFalse(Files.exists(target.resolve("points/002")), "nothing half-written for the failed point");
+        assertTrue(Files.readString(target.resolve("sweep.html"), StandardCharsets.UTF_8).contains("Lowest realised"
+                + " volatility among the points that ran (1 of 2 failed, and their comparisons are in neither the search"
+                + " nor its corrections): "), "the best point is the best of the points that ran");
         try (var s = Files.list(target.resolve("points"))) {
             assertEquals(List.of("001"), s.map(p -> p.getFileName().toString()).sorted().toList(), "no staging left");
         }
+    }
+
+    /** A smaller grid into the same folder takes back the points it no longer has, keeping the user's files. */
+    @Test
+    void smallerGridIntoTheSameFolder_retractsTheOldPoints_keepingTheUsersFiles() throws IOException {
+        Path target = data.resolve("shrink-out");
+        Path sweep = SweepFixture.sweepFile(data, "shrink.yaml", "walkforward.cost_bps: [5, 20, 40]");
+        assertEquals(0, SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet").code());
+        Files.writeString(target.resolve("points/002/notes.txt"), "mine", StandardCharsets.UTF_8);
+        SweepFixture.sweepFile(data, "shrink.yaml", "walkforward.cost_bps: [5]");
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet");
+        assertEquals(0, r.code(), r.err());
+        try (var s = Files.walk(target.resolve("points"))) {
+            assertEquals(List.of("002/notes.txt"), s.filter(Files::isRegularFile).map(p -> target.resolve("points")
+                    .relativize(p).toString()).filter(p -> !p.startsWith("001/")).sorted().toList(),
+                    "point 003 is gone, and of point 002 only the user's file is left");
+        }
+        assertEquals("mine", Files.readString(target.resolve("points/002/notes.txt"), StandardCharsets.UTF_8));
+        assertTrue(SweepFixture.lines(target.resolve("sweep.csv")).get(1).contains(",reused,"), "point 001 kept");
+        assertTrue(Files.isRegularFile(target.resolve("points/001/summary.csv")));
+    }
+
+    /** A point that fails now leaves no earlier results under its number to pass for this grid's. */
+    @Test
+    void pointThatFailsOnARerun_losesItsEarlierResults() throws IOException {
+        Path copy = data.resolve("assets-copy.csv");
+        Files.copy(data.resolve("assets-monthly.csv"), copy);
+        Path target = data.resolve("refail-out");
+        Path sweep = SweepFixture.sweepFile(data, "refail.yaml", "data.assets: [assets-monthly.csv, assets-copy.csv]");
+        assertEquals(0, SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet").code());
+        assertTrue(Files.isRegularFile(target.resolve("points/002/summary.csv")));
+        Files.writeString(copy, "date,A\n2020-01-31,x\n", StandardCharsets.UTF_8);
+        SweepFixture.Result r = SweepFixture.sigmawalk("sweep", sweep.toString(), "--out", target.toString(), "--quiet");
+        assertEquals(1, r.code(), r.err());
+        assertFalse(Files.exists(target.resolve("points/002")), "the failed point's old folder is taken back");
+        assertTrue(Files.isRegularFile(target.resolve("points/001/summary.csv")));
     }
 
     @Test

@@ -55,4 +55,31 @@ class SweepReaderTest {
         assertProblem("study: b.yaml\nvary:\n  output: [a, b]\n", "s.yaml line 3, column 3", "cannot be varied");
         assertProblem("study: b.yaml\nvary:\n  a..b: [1]\n", "s.yaml line 3, column 3", "not a dotted study key");
     }
+
+    /** A study given where a sweep is expected, or a sweep as the base study, is named as such. */
+    @Test
+    void studyAndSweepFiles_mistakenForEachOther_areNamed() throws IOException {
+        assertProblem("title: t\ndata:\n  assets: a.csv\nstrategies: []\n", "s.yaml line 1, column 1",
+                "this is a study file, not a sweep (it has no vary:); `sigmawalk run s.yaml` runs it, or a sweep file"
+                        + " names it as its study: s.yaml");
+        Files.writeString(dir.resolve("inner.yaml"), "study: b.yaml\nvary:\n  a.b: [1]\n", StandardCharsets.UTF_8);
+        assertProblem("study: inner.yaml\nvary:\n  a.b: [1, 2]\n", "s.yaml line 1, column 8",
+                "study: inner.yaml is itself a sweep file (it has vary:); expected a study file, the one study a sweep"
+                        + " varies");
+        assertProblem("study: s.yaml\nvary:\n  a.b: [1, 2]\n", "s.yaml line 1, column 8",
+                "study: s.yaml is itself a sweep file");
+    }
+
+    @Test
+    void runOnASweepFile_pointsToTheSweepCommand() throws IOException {
+        Path sweep = write("study: b.yaml\nvary:\n  a.b: [1, 2]\n");
+        SweepFixture.Result r = SweepFixture.sigmawalk("run", sweep.toString(), "--out", dir.resolve("out").toString());
+        assertEquals(2, r.code(), r.err());
+        assertEquals("sigmawalk: s.yaml is a sweep file (it has vary:); `sigmawalk run` takes a study file, and"
+                + " `sigmawalk sweep s.yaml` runs a sweep", r.err().strip());
+        assertTrue(Files.notExists(dir.resolve("out")));
+        InputException e = assertThrows(InputException.class, () -> dev.sigmawalk.reports.api.Study.fromYaml(sweep));
+        assertEquals("s.yaml is a sweep file (it has vary:); Study.fromYaml takes a study file, and `sigmawalk sweep"
+                + " s.yaml` runs a sweep", e.getMessage());
+    }
 }
