@@ -20,10 +20,13 @@ import java.util.Objects;
  * @param bandwidth the HAC bandwidth S used, >= 0
  * @param blockLength the bootstrap's block length, >= 1
  * @param resamples the bootstrap's resample count, >= 1
+ * @param lingering how far the influence series' autocorrelation exceeds what the bandwidth rule
+ *        assumes ({@link LingeringDependence}); NaN where the series is too short to tell
  */
 public record DifferenceTest(DifferenceMeasure measure, HacKernel kernel, int periods, double first, double second,
                              double difference, double standardError, double statistic, double hacPValue,
-                             double bootstrapPValue, double bandwidth, int blockLength, int resamples) {
+                             double bootstrapPValue, double bandwidth, int blockLength, int resamples,
+                             double lingering) {
     public DifferenceTest {
         Objects.requireNonNull(measure, "measure");
         Objects.requireNonNull(kernel, "kernel");
@@ -44,6 +47,22 @@ public record DifferenceTest(DifferenceMeasure measure, HacKernel kernel, int pe
             throw new IllegalArgumentException(measure.label() + " test: periods (" + periods + "), block length ("
                     + blockLength + "), resamples (" + resamples + ") must be >= 1 and bandwidth (" + bandwidth + ") >= 0");
         }
+    }
+
+    /** A test without the check of lingering dependence. */
+    public DifferenceTest(DifferenceMeasure measure, HacKernel kernel, int periods, double first, double second,
+                          double difference, double standardError, double statistic, double hacPValue,
+                          double bootstrapPValue, double bandwidth, int blockLength, int resamples) {
+        this(measure, kernel, periods, first, second, difference, standardError, statistic, hacPValue, bootstrapPValue,
+                bandwidth, blockLength, resamples, Double.NaN);
+    }
+
+    /**
+     * Whether the influence series keeps more autocorrelation than the bandwidth rule covers, so
+     * that the p-values may be too small (Method §9).
+     */
+    public boolean dependenceExceedsBandwidth() {
+        return lingering > LingeringDependence.THRESHOLD;
     }
 
     /** A one-line account of how the p-values were obtained, for the tests file and report. */

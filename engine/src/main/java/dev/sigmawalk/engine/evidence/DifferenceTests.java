@@ -93,9 +93,10 @@ public final class DifferenceTests {
         double quadratic = psi.quadraticForm(gradient) * length / (length - MOMENTS);
         double standardError = Math.sqrt(Math.max(0.0, quadratic) / length);
         int block = blockLength(influence);
+        double lingering = LingeringDependence.of(influence[0]);
         if (Math.abs(difference) <= ZERO_DIFFERENCE * Math.max(1.0, Math.abs(first) + Math.abs(second))) {
             return new DifferenceTest(measure, kernel, length, first, second, 0.0, standardError, 0.0, 1.0, 1.0,
-                    psi.bandwidth(), block, evidence.resamples());
+                    psi.bandwidth(), block, evidence.resamples(), lingering);
         }
         if (!(standardError > 0)) {
             throw new IllegalArgumentException(measure.label() + " test: difference " + difference
@@ -106,7 +107,8 @@ public final class DifferenceTests {
                 new StudentisedBlockBootstrap(measure, block, evidence.resamples(), evidence.seed());
         double bootstrapP = bootstrap.pValue(a, b, difference, Math.abs(statistic));
         return new DifferenceTest(measure, kernel, length, first, second, difference, standardError, statistic,
-                TailProbabilities.twoSidedNormal(statistic), bootstrapP, psi.bandwidth(), block, evidence.resamples());
+                TailProbabilities.twoSidedNormal(statistic), bootstrapP, psi.bandwidth(), block, evidence.resamples(),
+                lingering);
     }
 
     /**

@@ -83,6 +83,30 @@ public final class Runs {
     }
 
     /**
+     * The warning that variance tests may reject too often: those whose influence series keeps
+     * more autocorrelation than the bandwidth rule covers (Method §9), as volatility clustering
+     * does when the compared strategies' volatilities move apart. One line naming each such
+     * comparison, or none.
+     */
+    public static List<String> warningsOfTests(List<Comparison> comparisons) {
+        List<String> flagged = new ArrayList<>();
+        for (Comparison c : comparisons) {
+            if (c.variance().isPresent() && c.variance().get().dependenceExceedsBandwidth()) {
+                flagged.add("'" + c.strategy() + "' against '" + c.baseline() + "' (window " + c.window() + ")");
+            }
+        }
+        if (flagged.isEmpty()) {
+            return List.of();
+        }
+        boolean one = flagged.size() == 1;
+        return List.of((one ? "the variance test of " : "the variance tests of ") + String.join(", ", flagged)
+                + (one ? " finds" : " find") + " more autocorrelation in the two strategies' squared returns than"
+                + (one ? " its" : " their") + " bandwidth covers, as when their volatilities move apart (Method §9): "
+                + (one ? "its p-values" : "their p-values") + " may be too small; treat " + (one ? "it" : "them")
+                + " as borderline, or check with a longer evidence.block_length");
+    }
+
+    /**
      * The warnings of the results: what the residual diagnostics left out, then one line per path
      * whose allocation failed at some rebalance and one per path with rebalance notes.
      */

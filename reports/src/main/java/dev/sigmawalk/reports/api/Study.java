@@ -1,5 +1,6 @@
 package dev.sigmawalk.reports.api;
 
+import dev.sigmawalk.engine.compare.Comparison;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.run.ProgressListener;
 import dev.sigmawalk.engine.study.StudyReader;
@@ -77,7 +78,9 @@ public final class Study {
         var run = Runs.walk(spec, data, threads, ProgressListener.NONE);
         List<String> warnings = new ArrayList<>(Runs.warningsBeforeWalk(spec, data));
         warnings.addAll(Runs.warningsOfResults(run));
-        return new Results(spec, run, Runs.summaries(run), Runs.comparisons(spec, run, threads), warnings);
+        List<Comparison> comparisons = Runs.comparisons(spec, run, threads);
+        warnings.addAll(Runs.warningsOfTests(comparisons));
+        return new Results(spec, run, Runs.summaries(run), comparisons, warnings);
     }
 
     /**

@@ -128,7 +128,8 @@ public final class StudyRun {
                     });
             summaries = Runs.summaries(run);
             comparisons = Runs.comparisons(study, run, threads);
-            List<String> found = Runs.warningsOfResults(run);
+            List<String> found = new ArrayList<>(Runs.warningsOfResults(run));
+            found.addAll(Runs.warningsOfTests(comparisons));
             found.forEach(warn);
             warnings.addAll(found);
             ResultFiles.writeSummary(dir.resolve("summary.csv"), summaries);
