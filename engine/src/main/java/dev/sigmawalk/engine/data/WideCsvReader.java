@@ -376,7 +376,8 @@ final class WideCsvReader {
             Names.requireInert(name, file, 1, null, "column");
             if (!seen.add(name)) {
                 throw new InputException(new InputException.Location(file, 1, name),
-                        "'" + name + "' names two columns; asset names must be distinct");
+                        "'" + name + "' names two columns; expected each column's name once (an asset's, a series'"
+                                + " or a factor's)");
             }
             names.add(name);
         }

@@ -234,7 +234,8 @@ class CheckCommandTest {
     @Test
     void duplicateAssetName_exitsTwo() {
         edit("assets.csv", "A01,A02,A03", "A01,A03,A03");
-        assertRejected("assets.csv line 1, column 'A03': 'A03' names two columns; asset names must be distinct");
+        assertRejected("assets.csv line 1, column 'A03': 'A03' names two columns; expected each column's name once"
+                + " (an asset's, a series' or a factor's)");
     }
 
     @Test
