@@ -1,6 +1,9 @@
 package dev.sigmawalk.reports.sweep;
 
 import dev.sigmawalk.engine.data.InputException;
+import dev.sigmawalk.engine.study.FactorSource;
+import dev.sigmawalk.engine.study.RiskSettings;
+import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
 import dev.sigmawalk.engine.study.YamlNode;
@@ -11,6 +14,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 /**
  * Derives every grid point's study from the base study and validates all of them before any
@@ -148,7 +152,7 @@ public final class SweepPlanner {
                 new PathRebase(base.file().getParent(), folder).apply(changed));
         requireSame(here, StudyReader.read(folder.resolve(PointRunner.STUDY_FILE), yaml), label);
         return new Derived(new GridPoint(p + 1, label, values, folder, yaml),
-                List.of(here.data(), here.walkForward(), here.strategies(), here.evidence(), here.report()));
+                List.of(here.data(), here.walkForward(), located(here.strategies()), here.evidence(), here.report()));
     }
 
     private static YamlNode title(String text) {
@@ -165,11 +169,30 @@ public final class SweepPlanner {
     /** The point read where it will stand must be the point read beside the base study. */
     private static void requireSame(Study beside, Study standing, String label) {
         if (!beside.data().equals(standing.data()) || !beside.walkForward().equals(standing.walkForward())
-                || !beside.strategies().equals(standing.strategies()) || !beside.evidence().equals(standing.evidence())
+                || !located(beside.strategies()).equals(located(standing.strategies()))
+                || !beside.evidence().equals(standing.evidence())
                 || !beside.title().equals(standing.title())) {
             throw new IllegalStateException("point " + label + ": the study written to point.yaml does not read back"
                     + " as the derived study (a file path the sweep does not know how to move?)");
         }
+    }
+
+    /**
+     * The strategies with each factor file known by its path alone: the text that names it
+     * differs between the base study's folder and the point's ({@code f.csv}, {@code ../../f.csv})
+     * while the file, and so the walk, is the same.
+     */
+    private static List<StrategySpec> located(List<StrategySpec> strategies) {
+        List<StrategySpec> out = new ArrayList<>();
+        for (StrategySpec s : strategies) {
+            RiskSettings r = s.riskSettings();
+            Optional<FactorSource> factors = r.factors().map(f -> f instanceof FactorSource.File file
+                    ? new FactorSource.File(file.path(), file.path().toString()) : f);
+            out.add(new StrategySpec(s.name(), s.risk(), s.shrinkageTarget(), s.objective(), s.bounds(),
+                    s.riskAversion(), s.expectedReturns(), s.alphas(), s.marketPremium(), s.baseline(),
+                    new RiskSettings(factors, r.components(), r.halfLife())));
+        }
+        return out;
     }
 
     /** The message of a problem in generated text, without the generated text's line and column. */

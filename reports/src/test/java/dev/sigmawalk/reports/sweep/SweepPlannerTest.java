@@ -53,6 +53,25 @@ class SweepPlannerTest {
         assertEquals("index-model", last.strategies().get(0).name(), "the other strategy is untouched");
     }
 
+    /**
+     * The reader takes any factors text but "sectors" as a file, so point.yaml must name it from its
+     * own folder, a .csv file too (which planning once refused as an internal error).
+     */
+    @Test
+    void factorFileWithoutCsvEnding_isNamedFromThePointFolder() throws IOException {
+        java.nio.file.Files.copy(dir.resolve("market-monthly.csv"), dir.resolve("factors.txt"),
+                java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        String strategy = "{name: plain, risk: multi-index, objective: min-variance, factors: ";
+        SweepPlan plan = plan("strategies.plain: [" + strategy + "factors.txt}, " + strategy + "sectors}, " + strategy
+                + "market-monthly.csv}]");
+        assertEquals(new dev.sigmawalk.engine.study.FactorSource.File(dir.resolve("factors.txt"), "../../../factors.txt"),
+                point(plan, 0).strategies().get(1).riskSettings().factors().orElseThrow());
+        assertEquals(dev.sigmawalk.engine.study.StudyDefaults.FACTORS,
+                point(plan, 1).strategies().get(1).riskSettings().factors().orElseThrow());
+        assertEquals(new dev.sigmawalk.engine.study.FactorSource.File(dir.resolve("market-monthly.csv"),
+                "../../../market-monthly.csv"), point(plan, 2).strategies().get(1).riskSettings().factors().orElseThrow());
+    }
+
     @Test
     void twoKeysForOneValue_areRefusedAtTheSecond() {
         assertRefused("grid.yaml line 5, column 3: vary key 'strategies.1.bounds' names the same study value as"
