@@ -1,9 +1,9 @@
 package dev.sigmawalk.reports.cli;
 
+import dev.sigmawalk.reports.files.ScratchFolder;
 import dev.sigmawalk.sample.SampleUniverse;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.Paths;
 import java.util.Optional;
@@ -20,6 +20,9 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "demo", description = "Run the built-in study on the fictional sample universe.")
 public final class DemoCommand implements Callable<Integer> {
+    /** The demo unpacks the sample data into a folder of the system's temporary folder named so. */
+    static final String SAMPLE_PREFIX = "sigmawalk-sample-";
+
     @Option(names = "--out", paramLabel = "DIR", description = "Output folder (default: sigmawalk-demo).")
     Path out;
 
@@ -39,7 +42,7 @@ public final class DemoCommand implements Callable<Integer> {
     public Integer call() {
         Path unpacked;
         try {
-            unpacked = Files.createTempDirectory("sigmawalk-sample-");
+            unpacked = ScratchFolder.create(Path.of(System.getProperty("java.io.tmpdir")), SAMPLE_PREFIX);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot create a temporary folder for the sample data", e);
         }

@@ -23,7 +23,12 @@ final class GridWords {
      */
     static String answer(SweepPlan plan, GridEvidence e, long failed) {
         if (e.best().isEmpty()) {
-            return "No point has a strategy tested against a baseline, so the grid names no best point.";
+            if (failed == plan.points().size()) {
+                return "Every point failed (the reasons are listed below), so the grid names no best point.";
+            }
+            return "No point " + (failed == 0 ? "" : "that ran ") + "has a strategy tested against a baseline"
+                    + (failed == 0 ? "" : " (" + failed + " of " + plan.points().size() + " failed)")
+                    + ", so the grid names no best point.";
         }
         PointRow best = e.best().get();
         StringBuilder s = new StringBuilder(failed == 0 ? "Lowest realised volatility in the grid: "

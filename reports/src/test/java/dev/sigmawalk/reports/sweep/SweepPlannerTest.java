@@ -99,4 +99,18 @@ class SweepPlannerTest {
         assertEquals(List.of("001", "002", "003", "004"), plan.points().stream().map(GridPoint::label).toList());
         assertEquals(20.0, point(plan, 2).walkForward().costBps());
     }
+
+    /** With no best point the page says whether that is because points failed, not that none was compared. */
+    @Test
+    void noBestPoint_isExplainedByTheFailedPoints() throws IOException {
+        SweepPlan plan = plan("walkforward.cost_bps: [5, 20]");
+        GridEvidence none = GridEvidence.of(List.of(), List.of(), new dev.sigmawalk.engine.evidence.DifferenceTests(
+                dev.sigmawalk.engine.evidence.HacKernel.PARZEN, plan.base().evidence()));
+        assertEquals("Every point failed (the reasons are listed below), so the grid names no best point.",
+                GridWords.answer(plan, none, 2));
+        assertEquals("No point that ran has a strategy tested against a baseline (1 of 2 failed), so the grid names no"
+                + " best point.", GridWords.answer(plan, none, 1));
+        assertEquals("No point has a strategy tested against a baseline, so the grid names no best point.",
+                GridWords.answer(plan, none, 0));
+    }
 }
