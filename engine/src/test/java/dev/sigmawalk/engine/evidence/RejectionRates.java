@@ -104,18 +104,26 @@ final class RejectionRates {
                 b[t] = p[1][t] + MEAN;
             }
             boolean withBootstrap = k < bootstrapDraws;
-            DifferenceTests tests = withBootstrap
-                    ? new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(resamples, seed + k, 0)) : hacOnly;
-            DifferenceTest sharpe = tests.sharpeRatio(a, b);
-            DifferenceTest variance = tests.variance(a, b);
-            counts[0] += sharpe.hacPValue() <= LEVEL ? 1 : 0;
-            counts[2] += variance.hacPValue() <= LEVEL ? 1 : 0;
-            if (withBootstrap) {
-                counts[1] += sharpe.bootstrapPValue() <= LEVEL ? 1 : 0;
-                counts[3] += variance.bootstrapPValue() <= LEVEL ? 1 : 0;
-            }
-            counts[4] += JobsonKorkieMemmel.test(a, b).pValue() <= LEVEL ? 1 : 0;
+            count(withBootstrap ? new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(resamples, seed + k, 0))
+                    : hacOnly, a, b, withBootstrap, counts);
         }
+        return rates(counts, draws, bootstrapped);
+    }
+
+    /** Adds the rejections at 5 % of every difference test of one draw to {@code counts}. */
+    private static void count(DifferenceTests tests, double[] a, double[] b, boolean withBootstrap, int[] counts) {
+        DifferenceTest sharpe = tests.sharpeRatio(a, b);
+        DifferenceTest variance = tests.variance(a, b);
+        counts[0] += sharpe.hacPValue() <= LEVEL ? 1 : 0;
+        counts[2] += variance.hacPValue() <= LEVEL ? 1 : 0;
+        if (withBootstrap) {
+            counts[1] += sharpe.bootstrapPValue() <= LEVEL ? 1 : 0;
+            counts[3] += variance.bootstrapPValue() <= LEVEL ? 1 : 0;
+        }
+        counts[4] += JobsonKorkieMemmel.test(a, b).pValue() <= LEVEL ? 1 : 0;
+    }
+
+    private static Difference rates(int[] counts, int draws, int bootstrapped) {
         return new Difference((double) counts[0] / draws, (double) counts[1] / bootstrapped,
                 (double) counts[2] / draws, (double) counts[3] / bootstrapped, (double) counts[4] / draws);
     }
@@ -147,20 +155,10 @@ final class RejectionRates {
                 b[t] = p[1][t] + MEAN;
             }
             boolean withBootstrap = k < bootstrapDraws;
-            DifferenceTests tests = withBootstrap
-                    ? new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(resamples, seed + k, blockLength)) : hacOnly;
-            DifferenceTest sharpe = tests.sharpeRatio(a, b);
-            DifferenceTest variance = tests.variance(a, b);
-            counts[0] += sharpe.hacPValue() <= LEVEL ? 1 : 0;
-            counts[2] += variance.hacPValue() <= LEVEL ? 1 : 0;
-            if (withBootstrap) {
-                counts[1] += sharpe.bootstrapPValue() <= LEVEL ? 1 : 0;
-                counts[3] += variance.bootstrapPValue() <= LEVEL ? 1 : 0;
-            }
-            counts[4] += JobsonKorkieMemmel.test(a, b).pValue() <= LEVEL ? 1 : 0;
+            count(withBootstrap ? new DifferenceTests(HacKernel.PARZEN, new EvidenceSpec(resamples, seed + k,
+                    blockLength)) : hacOnly, a, b, withBootstrap, counts);
         }
-        return new Difference((double) counts[0] / draws, (double) counts[1] / bootstrapped,
-                (double) counts[2] / draws, (double) counts[3] / bootstrapped, (double) counts[4] / draws);
+        return rates(counts, draws, bootstrapped);
     }
 
     /**

@@ -9,10 +9,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -25,7 +25,8 @@ import picocli.CommandLine.Spec;
  * {@code run} would, and the command waits for the next save; the output folder keeps the last
  * run that succeeded, since a run publishes its outputs only when all of them are written.
  */
-@Command(name = "watch", description = "Run a study, then run it again each time its study file or a data file is saved.")
+@Command(name = "watch", description = {"Run a study, then run it again each time its study file or a data file is saved.",
+        "With --quiet, no notes about watching either."})
 public final class WatchCommand implements Callable<Integer> {
     /** Time between two looks at the files. */
     static final long POLL_MILLIS = 300;
@@ -33,18 +34,8 @@ public final class WatchCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "STUDY.yaml", description = "The study file.")
     Path studyFile;
 
-    @Option(names = "--out", paramLabel = "DIR", description = "Output folder (overrides the study's output:).")
-    Path out;
-
-    @Option(names = "--force", description = "Write into a non-empty folder sigmawalk did not write"
-            + ", beside its files (a file sigmawalk did not write is never replaced: a clash of names is refused).")
-    boolean force;
-
-    @Option(names = "--quiet", description = "No progress line, no warnings and no watching notes on standard error.")
-    boolean quiet;
-
-    @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all cores).")
-    Integer threads;
+    @Mixin
+    StudyOptions choices;
 
     @Option(names = "--stop-after", paramLabel = "N", description = "Stop after N runs, failed or not, with the"
             + " last run's exit code (default: run until stopped with Ctrl-C).")
@@ -70,8 +61,8 @@ public final class WatchCommand implements Callable<Integer> {
             throw new InputException(study + " is a sweep file (it has vary:); watch runs a study file, and"
                     + " `sigmawalk sweep` runs a sweep");
         }
-        StudyRun.Options options = new StudyRun.Options(Optional.ofNullable(out), force, quiet,
-                threads == null ? Runtime.getRuntime().availableProcessors() : threads);
+        StudyRun.Options options = choices.toRun();
+        boolean quiet = choices.quiet;
         PrintWriter err = spec.commandLine().getErr();
         StudyWatch watch = new StudyWatch(POLL_MILLIS, Thread::sleep, line -> {
             if (!quiet) {
@@ -90,7 +81,7 @@ public final class WatchCommand implements Callable<Integer> {
         long begin = System.nanoTime();
         try {
             StudyRun.Outcome outcome = StudyRun.execute(study, options, System.err,
-                    WarningLines.to(cl.getErr(), quiet));
+                    WarningLines.to(cl.getErr(), options.quiet()));
             cl.getOut().println("sigmawalk: wrote " + outcome.folder().resolve("report.html")
                     + String.format(Locale.ROOT, " in %.1f s", (System.nanoTime() - begin) / 1e9));
             cl.getOut().flush();
