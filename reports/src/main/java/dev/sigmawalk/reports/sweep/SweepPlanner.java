@@ -18,9 +18,11 @@ import java.util.Optional;
 
 /**
  * Derives every grid point's study from the base study and validates all of them before any
- * work, as strictly as {@code sigmawalk run} validates one study. A value that makes the study
- * invalid on its own is reported at that value in the sweep file; a combination that is invalid
- * (a start date after an end date) is reported at {@code vary:} with the point's values.
+ * work, as strictly as {@code sigmawalk run} validates one study. When a point is invalid, a
+ * value of it that makes the base study invalid on its own is reported at that value in the
+ * sweep file; otherwise the combination (a start date after an end date) is reported at
+ * {@code vary:} with the point's values. Values valid only together (a factor file and
+ * {@code risk: multi-index}) are accepted.
  *
  * <p>Relative paths in the varied values resolve like the base study's own, against the base
  * study's folder: a point is the base study with its values written in.
@@ -38,11 +40,6 @@ public final class SweepPlanner {
         Study base = StudyReader.read(sweep.study());
         YamlNode.Mapping tree = (YamlNode.Mapping) YamlTree.parse(base.file());
         List<List<String>> places = places(sweep, tree);
-        for (int a = 0; a < places.size(); a++) {
-            for (YamlNode value : sweep.axes().get(a).values()) {
-                checkAlone(sweep, base, tree, sweep.axes().get(a), places.get(a), value);
-            }
-        }
         int width = Math.max(3, String.valueOf(sweep.size()).length());
         List<GridPoint> points = new ArrayList<>();
         Map<List<Object>, Integer> studies = new HashMap<>();
@@ -143,6 +140,12 @@ public final class SweepPlanner {
         try {
             here = StudyReader.read(base.file(), YamlText.document(changed));
         } catch (InputException e) {
+            // A value that is wrong on its own is reported where it stands; only a point whose
+            // values are each fine alone is a bad combination (a value may need another, as
+            // factors needs risk: multi-index, so none is refused merely for failing alone).
+            for (int a = 0; a < at.length; a++) {
+                checkAlone(sweep, base, tree, sweep.axes().get(a), places.get(a), sweep.axes().get(a).values().get(at[a]));
+            }
             Axis first = sweep.axes().get(0);
             throw InputException.at(sweep.file(), first.line(), first.column(), "vary: point " + label + " " + shown
                     + " is not a valid study: " + problem(e, base.file()));

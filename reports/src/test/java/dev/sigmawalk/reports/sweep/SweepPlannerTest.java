@@ -72,6 +72,16 @@ class SweepPlannerTest {
                 "../../../market-monthly.csv"), point(plan, 2).strategies().get(1).riskSettings().factors().orElseThrow());
     }
 
+    /** factors alone would be refused on a sample-covariance strategy; with risk: multi-index beside it, it is valid. */
+    @Test
+    void valuesValidOnlyTogether_areAccepted_andAValueWrongAloneIsStillPlacedAtItself() throws IOException {
+        SweepPlan plan = plan("strategies.plain.risk: [multi-index]", "strategies.plain.factors: [market-monthly.csv]");
+        assertEquals(dev.sigmawalk.engine.study.RiskKind.MULTI_INDEX, point(plan, 0).strategies().get(1).risk());
+        assertRefused("grid.yaml line 5, column 29: vary.walkforward.cost_bps = -3 makes the base study base.yaml"
+                        + " invalid: walkforward.cost_bps: -3 is negative; expected a cost >= 0 in basis points",
+                "strategies.plain.risk: [multi-index]", "walkforward.cost_bps: [5, -3]");
+    }
+
     @Test
     void twoKeysForOneValue_areRefusedAtTheSecond() {
         assertRefused("grid.yaml line 5, column 3: vary key 'strategies.1.bounds' names the same study value as"
