@@ -4,6 +4,7 @@ import dev.sigmawalk.engine.data.InputException;
 import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.study.Study;
 import dev.sigmawalk.engine.study.StudyReader;
+import dev.sigmawalk.reports.files.OutputFolder;
 import dev.sigmawalk.strategies.StrategyCatalog;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -35,6 +36,8 @@ public final class SweepCheck {
             out.println("  vary " + a.key() + ": " + String.join("; ", shown));
         }
         out.println("Grid: " + SweepPage.count(plan.points().size(), "point") + ", output " + plan.out());
+        OutputFolder.problem(plan.out(), List.of(sweep.file(), plan.base().file()))
+                .ifPresent(p -> out.println("  warning: a sweep without --out would stop here: " + p));
         List<String> problems = new ArrayList<>();
         for (GridPoint p : plan.points()) {
             out.println("  point " + p.label() + " " + String.join(", ", p.values()) + ": " + describe(p, problems));

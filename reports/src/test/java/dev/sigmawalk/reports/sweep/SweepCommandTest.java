@@ -341,6 +341,16 @@ class SweepCommandTest {
         assertTrue(bad.err().contains("1 point of 2 cannot run; first: point 002"), bad.err());
     }
 
+    @Test
+    void check_warnsOfAnOutputFolderASweepWouldRefuse() throws IOException {
+        Path sweep = SweepFixture.sweepFile(data, "check-out.yaml", "walkforward.cost_bps: [5]");
+        Files.writeString(sweep, "output: base.yaml\n", StandardCharsets.UTF_8, java.nio.file.StandardOpenOption.APPEND);
+        SweepFixture.Result r = SweepFixture.sigmawalk("check", sweep.toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("  warning: a sweep without --out would stop here: output " + data.resolve("base.yaml")
+                + " is a file, not a folder; choose another --out"), r.out());
+    }
+
     private static int indexOf(String[] header, String column) {
         for (int i = 0; i < header.length; i++) {
             if (header[i].equals(column)) {
