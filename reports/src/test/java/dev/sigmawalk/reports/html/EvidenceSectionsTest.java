@@ -71,6 +71,43 @@ class EvidenceSectionsTest {
     }
 
     /**
+     * A variance test whose dependence outlasts its bandwidth (Method §9) is marked in its row's
+     * note, and the notes under the table say what the mark means; the fixture's own tests (a
+     * monthly history too short for the check) carry no mark.
+     */
+    @Test
+    void varianceTestsWhoseDependenceOutlastsTheBandwidth_areMarked(@TempDir Path dir) throws Exception {
+        Elements plain = doc.getElementById("differences").select("tbody tr");
+        for (Element row : plain) {
+            assertFalse(row.text().contains(EvidenceSections.LINGERING_NOTE), row.text());
+        }
+        java.util.List<Comparison> marked = new java.util.ArrayList<>();
+        for (Comparison c : data.evidence().comparisons()) {
+            marked.add(c.variance().isPresent() && marked.isEmpty() && c.skipped().isEmpty() ? flagged(c) : c);
+        }
+        ReportEvidence e = data.evidence();
+        Document flaggedDoc = render(new ReportData(data.study(), data.run(), data.summaries(), data.record(),
+                new ReportEvidence(e.diagnostics(), marked, e.inputList(), e.factorDiagnostics())), dir);
+        Element section = flaggedDoc.getElementById("differences");
+        Elements rows = section.select("tbody tr");
+        assertEquals(EvidenceSections.LINGERING_NOTE, rows.get(0).select("td").last().text());
+        for (int k = 1; k < rows.size(); k++) {
+            assertFalse(rows.get(k).text().contains(EvidenceSections.LINGERING_NOTE), rows.get(k).text());
+        }
+        assertTrue(section.select("p.sub").text().contains("Marked \"variance p-values may be too small\": in 1 of"
+                + " these comparisons"), section.select("p.sub").text());
+    }
+
+    private static Comparison flagged(Comparison c) {
+        var v = c.variance().orElseThrow();
+        var t = new dev.sigmawalk.engine.evidence.DifferenceTest(v.measure(), v.kernel(), v.periods(), v.first(),
+                v.second(), v.difference(), v.standardError(), v.statistic(), v.hacPValue(), v.bootstrapPValue(),
+                v.bandwidth(), v.blockLength(), v.resamples(), 5.0);
+        return new Comparison(c.strategy(), c.baseline(), c.window(), c.sharpe(), java.util.Optional.of(t),
+                c.jobsonKorkie(), c.holmSharpe(), c.holmVariance(), c.skipped(), c.familySharpe(), c.familyVariance());
+    }
+
+    /**
      * Counts of rejections at 5 % in the diagnostics table agree with the diagnostics given: CD and
      * the adjusted LM first, Breusch-Pagan last (over-sized, shown for continuity).
      */
