@@ -25,6 +25,8 @@ public final class RunPreview {
     }
 
     public static RunPreview of(Study study, StudyData data) {
+        Given.study(study);
+        Given.data(data);
         List<Integer> windows = study.walkForward().windows();
         WindowScan scan = WindowScan.of(data.panel(), data.schedule(), windows);
         RunPreview p = new RunPreview();

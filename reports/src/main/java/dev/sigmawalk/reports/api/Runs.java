@@ -38,6 +38,8 @@ public final class Runs {
     /** Walks forward every strategy of the study with every window (Method §2). */
     public static RunResult<WindowEvidence> walk(dev.sigmawalk.engine.study.Study study, StudyData data, int threads,
                                                  ProgressListener progress) {
+        Given.study(study);
+        Given.data(data);
         return walk(study, data, StrategyCatalog.build(study, data), threads, progress);
     }
 
@@ -45,6 +47,10 @@ public final class Runs {
     public static RunResult<WindowEvidence> walk(dev.sigmawalk.engine.study.Study study, StudyData data,
                                                  List<StrategyDefinition> strategies, int threads,
                                                  ProgressListener progress) {
+        Given.study(study);
+        Given.data(data);
+        Given.required(strategies, "the list of strategies", "StrategyCatalog.build(study, data)");
+        Given.required(progress, "the progress listener", "ProgressListener.NONE for none");
         return new WalkForward<>(data.panel(), data.schedule(), strategies, study.walkForward().windows(),
                 study.walkForward().costBps(), new WindowEvidenceProbe(data.sectors(), LARGEST_PAIRS,
                         PairScanPlan.of(data.schedule())))
@@ -53,6 +59,7 @@ public final class Runs {
 
     /** One summary per path in run order, then the market's (Method §7). */
     public static List<Summary> summaries(RunResult<?> run) {
+        Given.run(run);
         PerformanceMeasures measures = new PerformanceMeasures(run.riskFree(), run.market(), run.periodsPerYear());
         List<Summary> out = new ArrayList<>();
         for (PathResult p : run.paths()) {
@@ -67,6 +74,8 @@ public final class Runs {
      * {@code threads} threads (the values do not depend on it).
      */
     public static List<Comparison> comparisons(dev.sigmawalk.engine.study.Study study, RunResult<?> run, int threads) {
+        Given.study(study);
+        Given.run(run);
         return Comparisons.of(run, Baselines.of(study.strategies()), study.walkForward().windows(),
                 new DifferenceTests(HacKernel.PARZEN, study.evidence()), ScannedPair.lowestVolatility(run), threads);
     }
@@ -77,6 +86,7 @@ public final class Runs {
      * eligible asset, bounds that cannot be met).
      */
     public static List<String> warningsBeforeWalk(dev.sigmawalk.engine.study.Study study, StudyData data) {
+        Given.data(data);
         List<String> out = new ArrayList<>(data.warnings());
         out.addAll(RunPreview.of(study, data).warnings());
         return out;
@@ -111,6 +121,7 @@ public final class Runs {
      * whose allocation failed at some rebalance and one per path with rebalance notes.
      */
     public static List<String> warningsOfResults(RunResult<WindowEvidence> run) {
+        Given.run(run);
         List<String> out = new ArrayList<>(EvidenceNotes.warnings(run.probes()));
         for (PathResult p : run.paths()) {
             List<RebalanceRecord> failed = p.rebalances().stream().filter(r -> r.failure().isPresent()).toList();

@@ -125,6 +125,7 @@ public final class Study {
 
         /** {@code walkforward.windows:}. */
         public Builder windows(int... windows) {
+            Given.required(windows, "the list of windows", "window lengths such as windows(36, 60)");
             walkForward.put("windows", Arrays.stream(windows).boxed().toList());
             return this;
         }
