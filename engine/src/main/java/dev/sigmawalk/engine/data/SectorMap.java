@@ -34,7 +34,8 @@ final class SectorMap {
                 Integer earlier = firstLine.putIfAbsent(asset, line);
                 if (earlier != null) {
                     throw new InputException(new InputException.Location(file, line, "asset"),
-                            "'" + asset + "' is already given a sector on line " + earlier + "; expected each asset on one line");
+                            "'" + asset + "' is already given a sector on line " + earlier
+                                    + "; expected each asset on one line");
                 }
                 sectors.put(asset, sector);
             }

@@ -33,7 +33,8 @@ record SeriesColumn(String role, Path file, String column, double[] values, int[
      * @throws InputException at the first asset date the series has no row for, or the first row
      *                        of per-period values inside a period
      */
-    static SeriesColumn join(String role, WideTable series, WideTable assets, boolean perPeriod, List<String> warnings) {
+    static SeriesColumn join(String role, WideTable series, WideTable assets, boolean perPeriod,
+                             List<String> warnings) {
         if (series.columnCount() != 1) {
             throw new InputException(new InputException.Location(series.file(), 1, null),
                     "the " + role + " file has " + series.columnCount() + " value columns; expected one, as in 'date,<name>'");
