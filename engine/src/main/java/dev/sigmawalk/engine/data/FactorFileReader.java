@@ -52,6 +52,31 @@ final class FactorFileReader {
                 values[t * k + a] = v;
             }
         }
+        requireDistinct(file, f, values, firstNeeded, panel.rows(), span);
         return new FactorTable(file, f.columns(), values);
+    }
+
+    /**
+     * Two factors with the same return on every row a window reads (a column pasted twice) make
+     * every regression's loadings unidentified (Method §11), so every rebalance of the model
+     * would fail; the file is refused at the second column instead.
+     */
+    private static void requireDistinct(Path file, WideTable f, double[] values, int firstNeeded, int rows,
+                                        String span) {
+        int k = f.columnCount();
+        for (int b = 1; b < k; b++) {
+            for (int a = 0; a < b; a++) {
+                boolean same = true;
+                for (int t = firstNeeded; t < rows && same; t++) {
+                    same = values[t * k + a] == values[t * k + b];
+                }
+                if (same) {
+                    throw new InputException(new InputException.Location(file, 1, f.columns().get(b)),
+                            "factor '" + f.columns().get(b) + "' has the same return as '" + f.columns().get(a) + "'"
+                                    + span + ", so no model can tell their loadings apart; expected distinct"
+                                    + " factors: remove one of the two columns");
+                }
+            }
+        }
     }
 }

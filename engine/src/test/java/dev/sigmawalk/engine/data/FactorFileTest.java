@@ -62,4 +62,23 @@ class FactorFileTest {
         assertTrue(e.getMessage().contains("'2020-06-30' has no row in factors.csv"), e.getMessage());
         assertEquals(7, e.location().line(), e.getMessage());
     }
+
+    /** A column pasted twice: every regression's loadings would be unidentified, so the file is refused. */
+    @Test
+    void factorRepeatingAnother_isRefusedAtItsColumn() {
+        StringBuilder twin = new StringBuilder("date,size,copy\n");
+        FACTORS.lines().skip(1).forEach(l -> twin.append(l, 0, l.lastIndexOf(',')).append(',')
+                .append(l.substring(11, l.lastIndexOf(','))).append('\n'));
+        StudyFixture f = fixture().write("factors.csv", twin.toString());
+        InputException e = assertThrows(InputException.class, f::load);
+        assertEquals(new InputException.Location(dir.resolve("factors.csv").toAbsolutePath().normalize(), 1, "copy"),
+                e.location());
+        assertTrue(e.getMessage().endsWith("factor 'copy' has the same return as 'size' on every date from 2020-01-31"
+                + " (the start of the longest window before the first rebalance on 2020-03-31) to 2020-08-31, so no model"
+                + " can tell their loadings apart; expected distinct factors: remove one of the two columns"),
+                e.getMessage());
+        f.write("factors.csv", twin.toString().replace("2020-08-31,0.000,0.000", "2020-08-31,0.000,0.001"));
+        assertEquals(List.of("size", "copy"), f.load().factorsFor((FactorSource.File) f.study().strategies().get(0)
+                .riskSettings().factors().orElseThrow()).names(), "one differing row is enough");
+    }
 }
