@@ -70,7 +70,8 @@ public final class WatchCommand implements Callable<Integer> {
                 err.flush();
             }
         });
-        return watch.watch(List.of(study), () -> runOnce(study, options), stopAfter);
+        // The files are known before the first run, so a data file saved during it counts too.
+        return watch.watch(named(study, List.of()), () -> runOnce(study, options), stopAfter);
     }
 
     /** One run, reported as {@code run} reports it; a failure is reported and does not end the watch. */
