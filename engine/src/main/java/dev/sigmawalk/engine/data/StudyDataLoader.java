@@ -260,6 +260,15 @@ final class StudyDataLoader {
         Map<String, String> all = SectorMap.read(file);
         fingerprints.add(FileFingerprint.of(file));
         Map<String, String> sectors = SectorMap.restrictTo(all, panel.assets());
+        if (sectors.isEmpty() && !all.isEmpty()) {
+            // Not one name matches (another universe's file, or names spelt another way): the
+            // sector models would quietly become the single-index model.
+            String first = all.keySet().iterator().next();
+            throw new InputException(new InputException.Location(file, 0, null), "none of the " + all.size()
+                    + " assets named here is in the universe of " + spec.assets().getFileName() + " (the first is '"
+                    + first + "', the universe's first is '" + panel.assets().get(0) + "'); expected the asset names"
+                    + " of " + spec.assets().getFileName());
+        }
         List<String> without = panel.assets().stream().filter(a -> !sectors.containsKey(a)).toList();
         if (!without.isEmpty()) {
             warnings.add(file.getFileName() + " gives no sector for " + without.size() + " of " + panel.assetCount()

@@ -2,6 +2,7 @@ package dev.sigmawalk.engine.data;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -160,6 +161,17 @@ class DataIntakeTest {
         AssetCoverage a01 = d.coverage().get(0);
         assertEquals(new AssetCoverage("A01", LocalDate.of(2020, 2, 29), LocalDate.of(2020, 8, 31), 6, 2, 1), a01);
         assertFalse(d.coverage().get(1).hasMissingRows());
+    }
+
+    /** A sectors file of another universe would turn every sector model into the single-index model without a word. */
+    @Test
+    void sectorsFileNamingNoAssetOfTheUniverse_isRefused() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("sectors.csv", "asset,sector\nZ98,Harbour\nZ99,Orchard\n")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: riskfree.csv\n  sectors: sectors.csv");
+        InputException e = assertThrows(InputException.class, f::load);
+        assertEquals("sectors.csv: none of the 2 assets named here is in the universe of assets.csv (the first is 'Z98',"
+                + " the universe's first is 'A01'); expected the asset names of assets.csv", e.getMessage());
     }
 
     @Test
