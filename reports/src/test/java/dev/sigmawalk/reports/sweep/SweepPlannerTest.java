@@ -82,6 +82,14 @@ class SweepPlannerTest {
                 "strategies.plain.risk: [multi-index]", "walkforward.cost_bps: [5, -3]");
     }
 
+    /** null leaves the base's key out, so a point can switch from a row count to calendar ends. */
+    @Test
+    void nullValue_leavesTheBaseKeyOut() throws IOException {
+        SweepPlan plan = plan("walkforward.rebalance_every: [null]", "walkforward.rebalance: [quarter-end]");
+        assertEquals(new dev.sigmawalk.engine.study.RebalanceRule.CalendarEnd(
+                dev.sigmawalk.engine.study.Calendar.QUARTER_END), point(plan, 0).walkForward().rebalance());
+    }
+
     @Test
     void twoKeysForOneValue_areRefusedAtTheSecond() {
         assertRefused("grid.yaml line 5, column 3: vary key 'strategies.1.bounds' names the same study value as"
