@@ -58,8 +58,10 @@ public final class WatchCommand implements Callable<Integer> {
             throw new InputException("study file " + study + (Files.exists(study) ? " is not a file" : " does not exist"));
         }
         if (isSweep(study)) {
-            throw new InputException(study + " is a sweep file (it has vary:); watch runs a study file, and"
-                    + " `sigmawalk sweep` runs a sweep");
+            // SweepReader.requireStudy's words; its YAML errors are left to the first run, whose
+            // message the watch reports before waiting for a fix.
+            throw new InputException(study.getFileName() + " is a sweep file (it has vary:); `sigmawalk watch` takes a"
+                    + " study file, and `sigmawalk sweep " + study.getFileName() + "` runs a sweep");
         }
         StudyRun.Options options = choices.toRun();
         boolean quiet = choices.quiet;
