@@ -58,7 +58,8 @@ final class IntakeChecks {
      * @param column where the series came from
      * @param seriesKind prices for a market read as prices; returns otherwise
      * @param perRow the series per panel row (may be longer than the cut panel)
-     * @throws InputException at the empty cell that causes the first gap
+     * @throws InputException at the empty cell that causes the first gap, or at the assets file's
+     *                        line of the first needed date that the series' own file has no row for
      */
     void requireComplete(SeriesColumn column, ValueKind seriesKind, double[] perRow, int firstNeeded, int firstRebalance) {
         for (int t = firstNeeded; t < panel.rows(); t++) {
@@ -67,13 +68,17 @@ final class IntakeChecks {
                 boolean earlierPrice = seriesKind == ValueKind.PRICES && !Double.isNaN(column.values()[fileRow]);
                 int cellRow = earlierPrice ? fileRow - 1 : fileRow;
                 int line = column.lines()[cellRow];
+                String span = " on every date from " + panel.date(firstNeeded) + " (the start of the longest window"
+                        + " before the first rebalance on " + panel.date(firstRebalance) + ") to "
+                        + panel.date(panel.rows() - 1);
+                if (line == 0 && column.joinedTo().isPresent()) {
+                    throw column.noRow(cellRow, span);
+                }
                 String missing = line > 0 ? "'' is missing"
                         : "no row of the file gives '" + column.column() + "' the value for the return to " + panel.date(t);
                 throw new InputException(new InputException.Location(column.file(), line, column.column()),
                         missing + (earlierPrice ? ", so the return to " + panel.date(t) + " cannot be computed" : "")
-                                + "; the " + column.role() + " needs a value on every date from " + panel.date(firstNeeded)
-                                + " (the start of the longest window before the first rebalance on "
-                                + panel.date(firstRebalance) + ") to " + panel.date(panel.rows() - 1));
+                                + "; the " + column.role() + " needs a value" + span);
             }
         }
     }
