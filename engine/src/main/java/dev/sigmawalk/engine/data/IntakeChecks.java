@@ -1,6 +1,7 @@
 package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.ValueKind;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 
@@ -11,6 +12,13 @@ import java.util.Locale;
 final class IntakeChecks {
     /** A period return above +500 % is implausible for any listed asset. */
     static final double IMPLAUSIBLE_RETURN = 5.0;
+    /**
+     * A period return at or below −75 % (a price falling to a quarter or less) is most often a
+     * split of 4-for-1 or more that the prices or returns do not adjust for, a change of unit or
+     * a bad tick. Common practice, no source: real falls that deep in one period are rare enough
+     * that a warning asking for a look costs the user little.
+     */
+    static final double COLLAPSE_RETURN = -0.75;
     /** A risk-free rate above 100 % a year is implausible. */
     static final double IMPLAUSIBLE_ANNUAL_RATE = 1.0;
     /** Method §1: the market "equals" the assets' mean when every row agrees within this. */
@@ -43,7 +51,7 @@ final class IntakeChecks {
         this.kind = kind;
         this.offset = offset;
         this.warnings = warnings;
-        this.stats = PanelStats.of(panel, IMPLAUSIBLE_RETURN, PERCENT_MEDIAN);
+        this.stats = PanelStats.of(panel, IMPLAUSIBLE_RETURN, COLLAPSE_RETURN, PERCENT_MEDIAN);
     }
 
     /** The counts the checks used, for the coverage report. */
@@ -118,16 +126,70 @@ final class IntakeChecks {
     /** Warns once per column about period returns above +500 %, naming the first one. */
     void warnImplausibleReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
         for (int k = 0; k < kept.size(); k++) {
-            int count = stats.aboveImplausible[k];
-            if (count > 0) {
-                int first = stats.firstImplausible[k];
+            if (stats.aboveImplausible[k] > 0) {
                 int col = assetCols.get(kept.get(k));
-                warnings.add(table.file().getFileName() + " line " + table.line(first + offset, col) + ", column '"
-                        + table.columns().get(col) + "': a return of " + panel.value(first, k) + " is above +500 % in one period"
-                        + (count > 1 ? " (" + count + " such rows in this column)" : "")
-                        + (kind == ValueKind.PRICES ? "; check the prices" : "; check that returns are decimals, not percent"));
+                warnings.add(outlier(table.file(), table.line(stats.firstImplausible[k] + offset, col),
+                        table.columns().get(col), "a return of ", panel.value(stats.firstImplausible[k], k),
+                        stats.aboveImplausible[k], " in this column"));
             }
         }
+    }
+
+    /** Warns once per column about period returns at or below −75 %, naming the first one. */
+    void warnCollapsedReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        for (int k = 0; k < kept.size(); k++) {
+            if (stats.collapsed[k] > 0) {
+                int col = assetCols.get(kept.get(k));
+                warnings.add(outlier(table.file(), table.line(stats.firstCollapse[k] + offset, col),
+                        table.columns().get(col), "a return of ", panel.value(stats.firstCollapse[k], k),
+                        stats.collapsed[k], " in this column"));
+            }
+        }
+    }
+
+    /**
+     * The same two warnings for the market's returns: a bad tick or an unadjusted level shift in
+     * the index moves every beta, every single-index forecast and every tracking error.
+     */
+    void warnMarketOutliers(SeriesColumn column) {
+        int above = 0;
+        int firstAbove = -1;
+        int below = 0;
+        int firstBelow = -1;
+        for (int t = 0; t < panel.rows(); t++) {
+            double m = panel.market(t);
+            if (m > IMPLAUSIBLE_RETURN && above++ == 0) {
+                firstAbove = t;
+            }
+            if (m <= COLLAPSE_RETURN && below++ == 0) {
+                firstBelow = t;
+            }
+        }
+        if (above > 0) {
+            warnings.add(outlier(column.file(), column.lines()[firstAbove + offset], column.column(),
+                    "a market return of ", panel.market(firstAbove), above, ""));
+        }
+        if (below > 0) {
+            warnings.add(outlier(column.file(), column.lines()[firstBelow + offset], column.column(),
+                    "a market return of ", panel.market(firstBelow), below, ""));
+        }
+    }
+
+    /**
+     * One warning of a return above +500 % or at or below −75 %, at its line (the later price's
+     * line with prices).
+     *
+     * @param count the rows beyond the same limit
+     * @param where what the count covers, after "such rows"
+     */
+    private String outlier(Path file, int line, String column, String what, double r, int count, String where) {
+        String unit = kind == ValueKind.PRICES ? "prices" : "returns";
+        boolean up = r > 0;
+        return file.getFileName() + " line " + line + ", column '" + column + "': " + what + r
+                + (up ? " is above +500 % in one period" : " is a fall of 75 % or more in one period")
+                + (count > 1 ? " (" + count + " such rows" + where + ")" : "") + "; "
+                + (!up ? "check for a split or a change of unit that the " + unit + " do not adjust for, or a bad value"
+                        : kind == ValueKind.PRICES ? "check the prices" : "check that returns are decimals, not percent");
     }
 
     /** Warns about per-period risk-free rates worth more than 100 % a year, (1 + rf)^p − 1 > 1. */

@@ -91,6 +91,8 @@ final class StudyDataLoader {
         checks.requireDecimalScale(table, assetCols, kept);
         checks.warnManyReturnsBeyondOne(table, assetCols, kept);
         checks.warnImplausibleReturns(table, assetCols, kept);
+        checks.warnCollapsedReturns(table, assetCols, kept);
+        checks.warnMarketOutliers(market);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
         checks.warnMarketIsAssetMean();
         checks.warnMarketBarelyVaries();

@@ -138,6 +138,43 @@ class DataIntakeTest {
         assertTrue(w.get(0).startsWith("assets.csv line 5, column 'A01': a return of 6.5 is above +500 %"), w.get(0));
     }
 
+    /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
+    @Test
+    void implausibleMarketReturn_warnsWithLineAndColumn() {
+        List<String> w = new StudyFixture(dir).edit("market.csv", "2020-04-30,0.021", "2020-04-30,50").load().warnings();
+        assertTrue(w.contains("market.csv line 5, column 'IDX': a market return of 50.0 is above +500 % in one period;"
+                + " check that returns are decimals, not percent"), w.toString());
+    }
+
+    /**
+     * A 10-for-1 split the prices do not adjust for: 20 then 2 is a return of 2/20 − 1 = −0.9,
+     * which the run would otherwise take as a real loss of 90 %.
+     */
+    @Test
+    void unadjustedSplitInPrices_warnsAtTheLaterPrice() {
+        List<String> w = new StudyFixture(dir)
+                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,2\n"
+                        + "2020-04-30,11,2.1\n2020-05-31,12,2.2\n2020-06-30,13,2.1\n2020-07-31,12,2.3\n"
+                        + "2020-08-31,13,2.2\n2020-09-30,14,2.4\n")
+                .write("market.csv", "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,99\n2020-04-30,102\n"
+                        + "2020-05-31,103\n2020-06-30,101\n2020-07-31,104\n2020-08-31,105\n2020-09-30,103\n")
+                .edit("study.yaml", "values: returns", "values: prices")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
+                .load().warnings();
+        assertEquals(List.of("assets.csv line 4, column 'A02': a return of " + (2.0 / 21 - 1) + " is a fall of 75 % or"
+                + " more in one period; check for a split or a change of unit that the prices do not adjust for, or a"
+                + " bad value"), w);
+    }
+
+    @Test
+    void collapsedReturns_areCountedPerColumn() {
+        List<String> w = new StudyFixture(dir).edit("assets.csv", "2020-03-31,-0.03", "2020-03-31,-0.8")
+                .edit("assets.csv", "2020-06-30,-0.02", "2020-06-30,-0.75").load().warnings();
+        assertEquals(List.of("assets.csv line 4, column 'A01': a return of -0.8 is a fall of 75 % or more in one period"
+                + " (2 such rows in this column); check for a split or a change of unit that the returns do not adjust"
+                + " for, or a bad value"), w);
+    }
+
     /** 0.07 a month compounds to 1.07^12 − 1 ≈ 1.252 (125 % a year, hand computation), above 100 %. */
     @Test
     void implausibleRiskFree_warns() {
