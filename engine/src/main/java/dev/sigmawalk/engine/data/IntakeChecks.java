@@ -21,6 +21,12 @@ final class IntakeChecks {
     static final double COLLAPSE_RETURN = -0.75;
     /** A risk-free rate above 100 % a year is implausible. */
     static final double IMPLAUSIBLE_ANNUAL_RATE = 1.0;
+    /**
+     * A risk-free rate below −50 % a year is implausible: no deposit or bill rate has been near it
+     * (common practice, from memory: the most negative policy rates were about −1 % a year), while
+     * a rate of −1 per period would turn every excess return into r + 1.
+     */
+    static final double IMPLAUSIBLE_NEGATIVE_ANNUAL_RATE = -0.5;
     /** Method §1: the market "equals" the assets' mean when every row agrees within this. */
     static final double MEAN_MARKET_TOLERANCE = 1e-10;
     /** Decimal returns above this in size in most rows mean the file holds percent. */
@@ -192,23 +198,37 @@ final class IntakeChecks {
                         : kind == ValueKind.PRICES ? "check the prices" : "check that returns are decimals, not percent");
     }
 
-    /** Warns about per-period risk-free rates worth more than 100 % a year, (1 + rf)^p − 1 > 1. */
+    /**
+     * Warns about per-period risk-free rates worth more than 100 % a year, (1 + rf)^p − 1 > 1, and
+     * about rates worth less than −50 % a year, each once, naming the first.
+     */
     void warnImplausibleRiskFree(SeriesColumn column) {
         int p = panel.periodsPerYear();
-        int count = 0;
-        int first = -1;
+        int high = 0;
+        int firstHigh = -1;
+        int low = 0;
+        int firstLow = -1;
         for (int t = 0; t < panel.rows(); t++) {
             double annual = Math.pow(1.0 + panel.riskFree(t), p) - 1.0;
-            if (annual > IMPLAUSIBLE_ANNUAL_RATE) {
-                count++;
-                first = first < 0 ? t : first;
+            if (annual > IMPLAUSIBLE_ANNUAL_RATE && high++ == 0) {
+                firstHigh = t;
+            }
+            if (annual < IMPLAUSIBLE_NEGATIVE_ANNUAL_RATE && low++ == 0) {
+                firstLow = t;
             }
         }
-        if (count > 0) {
-            warnings.add(column.file().getFileName() + " line " + column.lines()[first + offset] + ", column '"
-                    + column.column() + "': a risk-free rate of " + panel.riskFree(first) + " per period is above 100 % a year"
-                    + (count > 1 ? " (" + count + " such rows)" : "") + "; rates must be per period and decimal");
+        if (high > 0) {
+            warnings.add(implausibleRate(column, firstHigh, "above 100 %", high));
         }
+        if (low > 0) {
+            warnings.add(implausibleRate(column, firstLow, "below -50 %", low));
+        }
+    }
+
+    private String implausibleRate(SeriesColumn column, int t, String limit, int count) {
+        return column.file().getFileName() + " line " + column.lines()[t + offset] + ", column '" + column.column()
+                + "': a risk-free rate of " + panel.riskFree(t) + " per period is " + limit + " a year"
+                + (count > 1 ? " (" + count + " such rows)" : "") + "; rates must be per period and decimal";
     }
 
     /**

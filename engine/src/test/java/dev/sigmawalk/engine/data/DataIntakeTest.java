@@ -175,6 +175,21 @@ class DataIntakeTest {
                 + " for, or a bad value"), w);
     }
 
+    /** A rate of −1 a period would make every excess return r + 1; (1 − 1)^12 − 1 = −100 % a year. */
+    @Test
+    void riskFreeOfMinusOnePerPeriod_warns() {
+        List<String> w = new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,-1").load().warnings();
+        assertEquals(List.of("riskfree.csv line 4, column 'rf': a risk-free rate of -1.0 per period is below -50 % a year;"
+                + " rates must be per period and decimal"), w);
+    }
+
+    /** A mildly negative rate, as some bill markets paid, is no warning: 0.9995^12 − 1 ≈ −0.6 % a year. */
+    @Test
+    void mildlyNegativeRiskFree_doesNotWarn() {
+        List<String> w = new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,-0.0005").load().warnings();
+        assertEquals(List.of(), w);
+    }
+
     /** 0.07 a month compounds to 1.07^12 − 1 ≈ 1.252 (125 % a year, hand computation), above 100 %. */
     @Test
     void implausibleRiskFree_warns() {
