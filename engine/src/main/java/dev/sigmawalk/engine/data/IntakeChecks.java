@@ -37,6 +37,13 @@ final class IntakeChecks {
      * order of a half to one times a typical member's, never a hundredth of it.
      */
     static final double BARELY_VARYING_MARKET = 0.01;
+    /**
+     * A market whose standard deviation is above this multiple of the median asset's is not an
+     * index's decimal returns either: percent returns (or returns ten times too large) beside
+     * decimal assets divide every beta by that factor. Common practice, no source: an index
+     * averages its members' idiosyncratic moves away, so it varies less than a typical member.
+     */
+    static final double FAR_MORE_VARYING_MARKET = 10;
     /** Fewer returns beyond ±100 % in a column are left to the +500 % warning. */
     static final int MANY_BEYOND_ONE = 3;
 
@@ -272,9 +279,11 @@ final class IntakeChecks {
      * {@value #BARELY_VARYING_MARKET} of the median of the assets' (each over its own returns):
      * betas against such a series are enormous and mean nothing, while windows where it does not
      * vary at all are already refused by the models (Method §3). A rate or a stale series
-     * standing in for an index's returns looks like this.
+     * standing in for an index's returns looks like this. Warns too when it is above
+     * {@value #FAR_MORE_VARYING_MARKET} times that median: an index in percent beside decimal
+     * assets, whose betas come out a hundred times too small.
      */
-    void warnMarketBarelyVaries() {
+    void warnMarketScale() {
         double market = marketStandardDeviation();
         double[] sd = assetStandardDeviations();
         int counted = 0;
@@ -294,6 +303,12 @@ final class IntakeChecks {
                     + " %.3g per period against a median of %.3g for the assets (%.2g %% of it); betas measured"
                     + " against it are enormous and mean nothing: check that the column holds an index's returns,"
                     + " not a rate or a stale series", panel.marketName(), market, median, 100 * market / median));
+        } else if (market > FAR_MORE_VARYING_MARKET * median) {
+            warnings.add(String.format(Locale.ROOT, "the market '%s' varies far more than the assets: its returns'"
+                    + " standard deviation is %.3g per period against a median of %.3g for the assets (%.3g times it),"
+                    + " while an index varies less than a typical member; betas measured against it are too small by"
+                    + " about that factor: check that the market holds decimal returns, not percent, in the units of"
+                    + " the assets", panel.marketName(), market, median, market / median));
         }
     }
 

@@ -95,7 +95,7 @@ final class StudyDataLoader {
         checks.warnMarketOutliers(market);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
         checks.warnMarketIsAssetMean();
-        checks.warnMarketBarelyVaries();
+        checks.warnMarketScale();
         requireFeasibleBounds(panel.assetCount());
 
         warnFewResamples();

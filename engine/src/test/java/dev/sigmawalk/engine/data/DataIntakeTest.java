@@ -190,6 +190,25 @@ class DataIntakeTest {
         assertEquals(List.of(), w);
     }
 
+    /**
+     * The fixture's market times 30 (an index in units thirty times the assets'): its standard
+     * deviation is 0.32269 against the assets' median 0.016036, 20.12 times it; times 10 gives
+     * 6.71 times, under the limit of 10 (numpy.std with ddof=1 on the fixture's columns).
+     */
+    @Test
+    void marketVaryingFarMoreThanTheAssets_warns() {
+        String times30 = "date,IDX\n2020-01-31,0.33\n2020-02-29,0.12\n2020-03-31,-0.36\n2020-04-30,0.63\n"
+                + "2020-05-31,0.09\n2020-06-30,-0.18\n2020-07-31,0.45\n2020-08-31,0.21\n";
+        List<String> w = new StudyFixture(dir).write("market.csv", times30).load().warnings();
+        assertEquals(List.of("the market 'IDX' varies far more than the assets: its returns' standard deviation is 0.323"
+                + " per period against a median of 0.0160 for the assets (20.1 times it), while an index varies less"
+                + " than a typical member; betas measured against it are too small by about that factor: check that"
+                + " the market holds decimal returns, not percent, in the units of the assets"), w);
+        String times10 = "date,IDX\n2020-01-31,0.11\n2020-02-29,0.04\n2020-03-31,-0.12\n2020-04-30,0.21\n"
+                + "2020-05-31,0.03\n2020-06-30,-0.06\n2020-07-31,0.15\n2020-08-31,0.07\n";
+        assertEquals(List.of(), new StudyFixture(dir).write("market.csv", times10).load().warnings());
+    }
+
     /** 0.07 a month compounds to 1.07^12 − 1 ≈ 1.252 (125 % a year, hand computation), above 100 %. */
     @Test
     void implausibleRiskFree_warns() {
