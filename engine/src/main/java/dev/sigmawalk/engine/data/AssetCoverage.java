@@ -36,7 +36,7 @@ public record AssetCoverage(String asset, LocalDate first, LocalDate last, int p
 
     /** Coverage of every asset column of {@code panel}; assets with no return at all are skipped. */
     public static List<AssetCoverage> of(ReturnPanel panel) {
-        return of(panel, PanelStats.of(panel, Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY));
+        return of(panel, PanelStats.of(panel, Double.POSITIVE_INFINITY, Double.NEGATIVE_INFINITY, Double.POSITIVE_INFINITY));
     }
 
     /** Coverage from counts already gathered over {@code panel}. */

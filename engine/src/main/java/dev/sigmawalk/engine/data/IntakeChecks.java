@@ -1,6 +1,7 @@
 package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.ValueKind;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 
@@ -11,8 +12,21 @@ import java.util.Locale;
 final class IntakeChecks {
     /** A period return above +500 % is implausible for any listed asset. */
     static final double IMPLAUSIBLE_RETURN = 5.0;
+    /**
+     * A period return at or below −75 % (a price falling to a quarter or less) is most often a
+     * split of 4-for-1 or more that the prices or returns do not adjust for, a change of unit or
+     * a bad tick. Common practice, no source: real falls that deep in one period are rare enough
+     * that a warning asking for a look costs the user little.
+     */
+    static final double COLLAPSE_RETURN = -0.75;
     /** A risk-free rate above 100 % a year is implausible. */
     static final double IMPLAUSIBLE_ANNUAL_RATE = 1.0;
+    /**
+     * A risk-free rate below −50 % a year is implausible: no deposit or bill rate has been near it
+     * (common practice, from memory: the most negative policy rates were about −1 % a year), while
+     * a rate of −1 per period would turn every excess return into r + 1.
+     */
+    static final double IMPLAUSIBLE_NEGATIVE_ANNUAL_RATE = -0.5;
     /** Method §1: the market "equals" the assets' mean when every row agrees within this. */
     static final double MEAN_MARKET_TOLERANCE = 1e-10;
     /** Decimal returns above this in size in most rows mean the file holds percent. */
@@ -23,6 +37,13 @@ final class IntakeChecks {
      * order of a half to one times a typical member's, never a hundredth of it.
      */
     static final double BARELY_VARYING_MARKET = 0.01;
+    /**
+     * A market whose standard deviation is above this multiple of the median asset's is not an
+     * index's decimal returns either: percent returns (or returns ten times too large) beside
+     * decimal assets divide every beta by that factor. Common practice, no source: an index
+     * averages its members' idiosyncratic moves away, so it varies less than a typical member.
+     */
+    static final double FAR_MORE_VARYING_MARKET = 10;
     /** Fewer returns beyond ±100 % in a column are left to the +500 % warning. */
     static final int MANY_BEYOND_ONE = 3;
 
@@ -43,7 +64,7 @@ final class IntakeChecks {
         this.kind = kind;
         this.offset = offset;
         this.warnings = warnings;
-        this.stats = PanelStats.of(panel, IMPLAUSIBLE_RETURN, PERCENT_MEDIAN);
+        this.stats = PanelStats.of(panel, IMPLAUSIBLE_RETURN, COLLAPSE_RETURN, PERCENT_MEDIAN);
     }
 
     /** The counts the checks used, for the coverage report. */
@@ -58,7 +79,8 @@ final class IntakeChecks {
      * @param column where the series came from
      * @param seriesKind prices for a market read as prices; returns otherwise
      * @param perRow the series per panel row (may be longer than the cut panel)
-     * @throws InputException at the empty cell that causes the first gap
+     * @throws InputException at the empty cell that causes the first gap, or at the assets file's
+     *                        line of the first needed date that the series' own file has no row for
      */
     void requireComplete(SeriesColumn column, ValueKind seriesKind, double[] perRow, int firstNeeded, int firstRebalance) {
         for (int t = firstNeeded; t < panel.rows(); t++) {
@@ -67,13 +89,17 @@ final class IntakeChecks {
                 boolean earlierPrice = seriesKind == ValueKind.PRICES && !Double.isNaN(column.values()[fileRow]);
                 int cellRow = earlierPrice ? fileRow - 1 : fileRow;
                 int line = column.lines()[cellRow];
+                String span = " on every date from " + panel.date(firstNeeded) + " (the start of the longest window"
+                        + " before the first rebalance on " + panel.date(firstRebalance) + ") to "
+                        + panel.date(panel.rows() - 1);
+                if (line == 0 && column.joinedTo().isPresent()) {
+                    throw column.noRow(cellRow, span);
+                }
                 String missing = line > 0 ? "'' is missing"
                         : "no row of the file gives '" + column.column() + "' the value for the return to " + panel.date(t);
                 throw new InputException(new InputException.Location(column.file(), line, column.column()),
                         missing + (earlierPrice ? ", so the return to " + panel.date(t) + " cannot be computed" : "")
-                                + "; the " + column.role() + " needs a value on every date from " + panel.date(firstNeeded)
-                                + " (the start of the longest window before the first rebalance on "
-                                + panel.date(firstRebalance) + ") to " + panel.date(panel.rows() - 1));
+                                + "; the " + column.role() + " needs a value" + span);
             }
         }
     }
@@ -113,35 +139,103 @@ final class IntakeChecks {
     /** Warns once per column about period returns above +500 %, naming the first one. */
     void warnImplausibleReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
         for (int k = 0; k < kept.size(); k++) {
-            int count = stats.aboveImplausible[k];
-            if (count > 0) {
-                int first = stats.firstImplausible[k];
+            if (stats.aboveImplausible[k] > 0) {
                 int col = assetCols.get(kept.get(k));
-                warnings.add(table.file().getFileName() + " line " + table.line(first + offset, col) + ", column '"
-                        + table.columns().get(col) + "': a return of " + panel.value(first, k) + " is above +500 % in one period"
-                        + (count > 1 ? " (" + count + " such rows in this column)" : "")
-                        + (kind == ValueKind.PRICES ? "; check the prices" : "; check that returns are decimals, not percent"));
+                warnings.add(outlier(table.file(), table.line(stats.firstImplausible[k] + offset, col),
+                        table.columns().get(col), "a return of ", panel.value(stats.firstImplausible[k], k),
+                        stats.aboveImplausible[k], " in this column"));
             }
         }
     }
 
-    /** Warns about per-period risk-free rates worth more than 100 % a year, (1 + rf)^p − 1 > 1. */
-    void warnImplausibleRiskFree(SeriesColumn column) {
-        int p = panel.periodsPerYear();
-        int count = 0;
-        int first = -1;
-        for (int t = 0; t < panel.rows(); t++) {
-            double annual = Math.pow(1.0 + panel.riskFree(t), p) - 1.0;
-            if (annual > IMPLAUSIBLE_ANNUAL_RATE) {
-                count++;
-                first = first < 0 ? t : first;
+    /** Warns once per column about period returns at or below −75 %, naming the first one. */
+    void warnCollapsedReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        for (int k = 0; k < kept.size(); k++) {
+            if (stats.collapsed[k] > 0) {
+                int col = assetCols.get(kept.get(k));
+                warnings.add(outlier(table.file(), table.line(stats.firstCollapse[k] + offset, col),
+                        table.columns().get(col), "a return of ", panel.value(stats.firstCollapse[k], k),
+                        stats.collapsed[k], " in this column"));
             }
         }
-        if (count > 0) {
-            warnings.add(column.file().getFileName() + " line " + column.lines()[first + offset] + ", column '"
-                    + column.column() + "': a risk-free rate of " + panel.riskFree(first) + " per period is above 100 % a year"
-                    + (count > 1 ? " (" + count + " such rows)" : "") + "; rates must be per period and decimal");
+    }
+
+    /**
+     * The same two warnings for the market's returns: a bad tick or an unadjusted level shift in
+     * the index moves every beta, every single-index forecast and every tracking error.
+     */
+    void warnMarketOutliers(SeriesColumn column) {
+        int above = 0;
+        int firstAbove = -1;
+        int below = 0;
+        int firstBelow = -1;
+        for (int t = 0; t < panel.rows(); t++) {
+            double m = panel.market(t);
+            if (m > IMPLAUSIBLE_RETURN && above++ == 0) {
+                firstAbove = t;
+            }
+            if (m <= COLLAPSE_RETURN && below++ == 0) {
+                firstBelow = t;
+            }
         }
+        if (above > 0) {
+            warnings.add(outlier(column.file(), column.lines()[firstAbove + offset], column.column(),
+                    "a market return of ", panel.market(firstAbove), above, ""));
+        }
+        if (below > 0) {
+            warnings.add(outlier(column.file(), column.lines()[firstBelow + offset], column.column(),
+                    "a market return of ", panel.market(firstBelow), below, ""));
+        }
+    }
+
+    /**
+     * One warning of a return above +500 % or at or below −75 %, at its line (the later price's
+     * line with prices).
+     *
+     * @param count the rows beyond the same limit
+     * @param where what the count covers, after "such rows"
+     */
+    private String outlier(Path file, int line, String column, String what, double r, int count, String where) {
+        String unit = kind == ValueKind.PRICES ? "prices" : "returns";
+        boolean up = r > 0;
+        return file.getFileName() + " line " + line + ", column '" + column + "': " + what + r
+                + (up ? " is above +500 % in one period" : " is a fall of 75 % or more in one period")
+                + (count > 1 ? " (" + count + " such rows" + where + ")" : "") + "; "
+                + (!up ? "check for a split or a change of unit that the " + unit + " do not adjust for, or a bad value"
+                        : kind == ValueKind.PRICES ? "check the prices" : "check that returns are decimals, not percent");
+    }
+
+    /**
+     * Warns about per-period risk-free rates worth more than 100 % a year, (1 + rf)^p − 1 > 1, and
+     * about rates worth less than −50 % a year, each once, naming the first.
+     */
+    void warnImplausibleRiskFree(SeriesColumn column) {
+        int p = panel.periodsPerYear();
+        int high = 0;
+        int firstHigh = -1;
+        int low = 0;
+        int firstLow = -1;
+        for (int t = 0; t < panel.rows(); t++) {
+            double annual = Math.pow(1.0 + panel.riskFree(t), p) - 1.0;
+            if (annual > IMPLAUSIBLE_ANNUAL_RATE && high++ == 0) {
+                firstHigh = t;
+            }
+            if (annual < IMPLAUSIBLE_NEGATIVE_ANNUAL_RATE && low++ == 0) {
+                firstLow = t;
+            }
+        }
+        if (high > 0) {
+            warnings.add(implausibleRate(column, firstHigh, "above 100 %", high));
+        }
+        if (low > 0) {
+            warnings.add(implausibleRate(column, firstLow, "below -50 %", low));
+        }
+    }
+
+    private String implausibleRate(SeriesColumn column, int t, String limit, int count) {
+        return column.file().getFileName() + " line " + column.lines()[t + offset] + ", column '" + column.column()
+                + "': a risk-free rate of " + panel.riskFree(t) + " per period is " + limit + " a year"
+                + (count > 1 ? " (" + count + " such rows)" : "") + "; rates must be per period and decimal";
     }
 
     /**
@@ -185,9 +279,11 @@ final class IntakeChecks {
      * {@value #BARELY_VARYING_MARKET} of the median of the assets' (each over its own returns):
      * betas against such a series are enormous and mean nothing, while windows where it does not
      * vary at all are already refused by the models (Method §3). A rate or a stale series
-     * standing in for an index's returns looks like this.
+     * standing in for an index's returns looks like this. Warns too when it is above
+     * {@value #FAR_MORE_VARYING_MARKET} times that median: an index in percent beside decimal
+     * assets, whose betas come out a hundred times too small.
      */
-    void warnMarketBarelyVaries() {
+    void warnMarketScale() {
         double market = marketStandardDeviation();
         double[] sd = assetStandardDeviations();
         int counted = 0;
@@ -207,6 +303,12 @@ final class IntakeChecks {
                     + " %.3g per period against a median of %.3g for the assets (%.2g %% of it); betas measured"
                     + " against it are enormous and mean nothing: check that the column holds an index's returns,"
                     + " not a rate or a stale series", panel.marketName(), market, median, 100 * market / median));
+        } else if (market > FAR_MORE_VARYING_MARKET * median) {
+            warnings.add(String.format(Locale.ROOT, "the market '%s' varies far more than the assets: its returns'"
+                    + " standard deviation is %.3g per period against a median of %.3g for the assets (%.3g times it),"
+                    + " while an index varies less than a typical member; betas measured against it are too small by"
+                    + " about that factor: check that the market holds decimal returns, not percent, in the units of"
+                    + " the assets", panel.marketName(), market, median, market / median));
         }
     }
 

@@ -18,6 +18,9 @@ final class PanelStats {
     /** Returns above {@code implausible}, per asset, and the first such row (-1 without any). */
     final int[] aboveImplausible;
     final int[] firstImplausible;
+    /** Returns at or below {@code collapse}, per asset, and the first such row (-1 without any). */
+    final int[] collapsed;
+    final int[] firstCollapse;
     /** Returns above {@code large} in size over the whole panel, and the first one's row and asset. */
     long largeCount;
     int firstLargeRow = -1;
@@ -32,6 +35,9 @@ final class PanelStats {
         beyondOne = new int[assets];
         aboveImplausible = new int[assets];
         firstImplausible = new int[assets];
+        collapsed = new int[assets];
+        firstCollapse = new int[assets];
+        Arrays.fill(firstCollapse, -1);
         Arrays.fill(first, -1);
         Arrays.fill(last, -1);
         Arrays.fill(firstImplausible, -1);
@@ -39,9 +45,10 @@ final class PanelStats {
 
     /**
      * @param implausible a return above which is counted as implausible
+     * @param collapse a return at or below which is counted as a collapse
      * @param large a size above which a return counts toward the percent check
      */
-    static PanelStats of(ReturnPanel panel, double implausible, double large) {
+    static PanelStats of(ReturnPanel panel, double implausible, double collapse, double large) {
         int n = panel.assetCount();
         PanelStats s = new PanelStats(n);
         double[] r = panel.rawReturns();
@@ -62,6 +69,9 @@ final class PanelStats {
                 }
                 if (v > implausible && s.aboveImplausible[j]++ == 0) {
                     s.firstImplausible[j] = t;
+                }
+                if (v <= collapse && s.collapsed[j]++ == 0) {
+                    s.firstCollapse[j] = t;
                 }
                 if (size > large && s.largeCount++ == 0) {
                     s.firstLargeRow = t;

@@ -91,9 +91,11 @@ final class StudyDataLoader {
         checks.requireDecimalScale(table, assetCols, kept);
         checks.warnManyReturnsBeyondOne(table, assetCols, kept);
         checks.warnImplausibleReturns(table, assetCols, kept);
+        checks.warnCollapsedReturns(table, assetCols, kept);
+        checks.warnMarketOutliers(market);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
         checks.warnMarketIsAssetMean();
-        checks.warnMarketBarelyVaries();
+        checks.warnMarketScale();
         requireFeasibleBounds(panel.assetCount());
 
         warnFewResamples();

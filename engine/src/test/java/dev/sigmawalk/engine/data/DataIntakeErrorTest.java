@@ -118,9 +118,60 @@ class DataIntakeErrorTest {
                 "2020-01-01,0.001", "2020-02-01,0.001", "2020-03-01,0.001", "2020-04-01,0.001", "2020-05-01,0.001",
                 "2020-06-01,0.001", "2020-07-01,0.001", "2020-08-01,0.001", "")));
         assertAt(e, "assets.csv", 2, "date");
-        assertTrue(e.getMessage().contains("'2020-01-31' has no row in riskfree.csv; the risk-free must have a row for"
-                + " every date of the assets file; riskfree.csv has '2020-01-01' (line 2) in that month: the two files"
+        assertTrue(e.getMessage().contains("'2020-01-31' has no row in riskfree.csv; the risk-free needs a row on"
+                + " the dates of assets.csv; riskfree.csv has '2020-01-01' (line 2) in that month: the two files"
                 + " date their months differently; give riskfree.csv the dates of assets.csv"), e.getMessage());
+    }
+
+    /**
+     * Method §1 needs the market only from τ_0 − L_max + 1: an index history that starts after
+     * the assets' (no rows at all for the first dates) is read like one with empty cells there.
+     * τ_0 = row 5 (start 2020-06-30), L_max = 3, so rows from 2020-04-30 on are needed.
+     */
+    @Test
+    void marketFileStartingAfterTheAssets_isAccepted_whenItCoversTheWalk() {
+        StudyFixture f = new StudyFixture(dir).edit("study.yaml", "  rebalance_every: 1", "  rebalance_every: 1\n  start: 2020-06-30")
+                .edit("market.csv", "2020-01-31,0.011\n2020-02-29,0.004\n2020-03-31,-0.012\n", "");
+        StudyData data = f.load();
+        for (int t = 0; t < 3; t++) {
+            assertTrue(Double.isNaN(data.panel().market(t)), "no market row for panel row " + t);
+        }
+        assertEquals(0.021, data.panel().market(3), "the first needed row keeps the file's value");
+        assertEquals(0.007, data.panel().market(7), "the last row keeps the file's value");
+        assertTrue(data.warnings().stream().noneMatch(w -> w.contains("market.csv")), data.warnings().toString());
+    }
+
+    /** The same history one row shorter misses the first needed date: refused at the assets file's line of it. */
+    @Test
+    void marketFileStartingInsideTheWalk_isRefusedAtTheFirstNeededDate() {
+        StudyFixture f = new StudyFixture(dir).edit("study.yaml", "  rebalance_every: 1", "  rebalance_every: 1\n  start: 2020-06-30")
+                .edit("market.csv", "2020-01-31,0.011\n2020-02-29,0.004\n2020-03-31,-0.012\n2020-04-30,0.021\n", "");
+        InputException e = loadFails(f);
+        assertAt(e, "assets.csv", 5, "date");
+        assertEquals("assets.csv line 5, column 'date': '2020-04-30' has no row in market.csv; the market needs a row"
+                + " on every date from 2020-04-30 (the start of the longest window before the first rebalance on"
+                + " 2020-06-30) to 2020-08-31", e.getMessage());
+    }
+
+    /** With prices the return of the first needed row needs the price a row before it too. */
+    @Test
+    void marketPriceFileStartingAtTheFirstNeededDate_isRefusedForThePriceBeforeIt() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,20\n"
+                        + "2020-04-30,11,22\n2020-05-31,12,23\n2020-06-30,13,22\n2020-07-31,12,24\n2020-08-31,13,23\n")
+                .write("market.csv", "date,IDX\n2020-03-31,100\n2020-04-30,101\n2020-05-31,99\n2020-06-30,102\n"
+                        + "2020-07-31,103\n2020-08-31,104\n")
+                .edit("study.yaml", "values: returns", "values: prices")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
+                .edit("study.yaml", "  rebalance_every: 1", "  rebalance_every: 1\n  start: 2020-06-30");
+        // Return rows: 2020-02-29 (0) .. 2020-08-31 (6); τ_0 = 4, L_max = 3: from row 2 (2020-04-30), which needs 2020-03-31's price.
+        StudyData data = f.load();
+        assertEquals(101.0 / 100 - 1, data.panel().market(2), 1e-15, "the first needed return");
+        f.edit("market.csv", "2020-03-31,100\n", "");
+        InputException e = loadFails(f);
+        assertAt(e, "assets.csv", 4, "date");
+        assertTrue(e.getMessage().startsWith("assets.csv line 4, column 'date': '2020-03-31' has no row in market.csv;"
+                + " the market needs a row on every date from 2020-04-30"), e.getMessage());
     }
 
     @Test

@@ -138,6 +138,77 @@ class DataIntakeTest {
         assertTrue(w.get(0).startsWith("assets.csv line 5, column 'A01': a return of 6.5 is above +500 %"), w.get(0));
     }
 
+    /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
+    @Test
+    void implausibleMarketReturn_warnsWithLineAndColumn() {
+        List<String> w = new StudyFixture(dir).edit("market.csv", "2020-04-30,0.021", "2020-04-30,50").load().warnings();
+        assertTrue(w.contains("market.csv line 5, column 'IDX': a market return of 50.0 is above +500 % in one period;"
+                + " check that returns are decimals, not percent"), w.toString());
+    }
+
+    /**
+     * A 10-for-1 split the prices do not adjust for: 20 then 2 is a return of 2/20 − 1 = −0.9,
+     * which the run would otherwise take as a real loss of 90 %.
+     */
+    @Test
+    void unadjustedSplitInPrices_warnsAtTheLaterPrice() {
+        List<String> w = new StudyFixture(dir)
+                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,2\n"
+                        + "2020-04-30,11,2.1\n2020-05-31,12,2.2\n2020-06-30,13,2.1\n2020-07-31,12,2.3\n"
+                        + "2020-08-31,13,2.2\n2020-09-30,14,2.4\n")
+                .write("market.csv", "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,99\n2020-04-30,102\n"
+                        + "2020-05-31,103\n2020-06-30,101\n2020-07-31,104\n2020-08-31,105\n2020-09-30,103\n")
+                .edit("study.yaml", "values: returns", "values: prices")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
+                .load().warnings();
+        assertEquals(List.of("assets.csv line 4, column 'A02': a return of " + (2.0 / 21 - 1) + " is a fall of 75 % or"
+                + " more in one period; check for a split or a change of unit that the prices do not adjust for, or a"
+                + " bad value"), w);
+    }
+
+    @Test
+    void collapsedReturns_areCountedPerColumn() {
+        List<String> w = new StudyFixture(dir).edit("assets.csv", "2020-03-31,-0.03", "2020-03-31,-0.8")
+                .edit("assets.csv", "2020-06-30,-0.02", "2020-06-30,-0.75").load().warnings();
+        assertEquals(List.of("assets.csv line 4, column 'A01': a return of -0.8 is a fall of 75 % or more in one period"
+                + " (2 such rows in this column); check for a split or a change of unit that the returns do not adjust"
+                + " for, or a bad value"), w);
+    }
+
+    /** A rate of −1 a period would make every excess return r + 1; (1 − 1)^12 − 1 = −100 % a year. */
+    @Test
+    void riskFreeOfMinusOnePerPeriod_warns() {
+        List<String> w = new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,-1").load().warnings();
+        assertEquals(List.of("riskfree.csv line 4, column 'rf': a risk-free rate of -1.0 per period is below -50 % a year;"
+                + " rates must be per period and decimal"), w);
+    }
+
+    /** A mildly negative rate, as some bill markets paid, is no warning: 0.9995^12 − 1 ≈ −0.6 % a year. */
+    @Test
+    void mildlyNegativeRiskFree_doesNotWarn() {
+        List<String> w = new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,-0.0005").load().warnings();
+        assertEquals(List.of(), w);
+    }
+
+    /**
+     * The fixture's market times 30 (an index in units thirty times the assets'): its standard
+     * deviation is 0.32269 against the assets' median 0.016036, 20.12 times it; times 10 gives
+     * 6.71 times, under the limit of 10 (numpy.std with ddof=1 on the fixture's columns).
+     */
+    @Test
+    void marketVaryingFarMoreThanTheAssets_warns() {
+        String times30 = "date,IDX\n2020-01-31,0.33\n2020-02-29,0.12\n2020-03-31,-0.36\n2020-04-30,0.63\n"
+                + "2020-05-31,0.09\n2020-06-30,-0.18\n2020-07-31,0.45\n2020-08-31,0.21\n";
+        List<String> w = new StudyFixture(dir).write("market.csv", times30).load().warnings();
+        assertEquals(List.of("the market 'IDX' varies far more than the assets: its returns' standard deviation is 0.323"
+                + " per period against a median of 0.0160 for the assets (20.1 times it), while an index varies less"
+                + " than a typical member; betas measured against it are too small by about that factor: check that"
+                + " the market holds decimal returns, not percent, in the units of the assets"), w);
+        String times10 = "date,IDX\n2020-01-31,0.11\n2020-02-29,0.04\n2020-03-31,-0.12\n2020-04-30,0.21\n"
+                + "2020-05-31,0.03\n2020-06-30,-0.06\n2020-07-31,0.15\n2020-08-31,0.07\n";
+        assertEquals(List.of(), new StudyFixture(dir).write("market.csv", times10).load().warnings());
+    }
+
     /** 0.07 a month compounds to 1.07^12 − 1 ≈ 1.252 (125 % a year, hand computation), above 100 %. */
     @Test
     void implausibleRiskFree_warns() {
