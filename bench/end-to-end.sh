@@ -35,6 +35,10 @@
 #   --rebuild         rebuild the jar even when reports/target/sigmawalk.jar exists
 #   --reruns N        afterwards, also time N reruns in one process: `sigmawalk watch --stop-after N+1`
 #                     while the study file is touched every half second; prints each run's own time
+#   --peer            afterwards, also time the numpy implementation of the same study on the same
+#                     data (bench/peer/walk.py, python3 with numpy and scipy; its outputs go to
+#                     DIR/peer-out) and check with bench/peer/agree.py that its weights and returns
+#                     equal the run's to 1e-9; a yardstick for speed, not part of the product
 #
 # Prints the wall time, the peak resident memory and the CPU time of the run (from
 # /usr/bin/time -v when it is installed; otherwise the wall time only), the load average before
@@ -48,6 +52,7 @@ work=
 rebuild=no
 threads=
 reruns=0
+peer=no
 args=("$@")
 for ((k = 0; k < ${#args[@]}; k++)); do
   if [ "${args[$k]}" = --case ]; then case_name=${args[$((k + 1))]:-}; fi
@@ -74,7 +79,8 @@ while [ "$#" -gt 0 ]; do
     --work) work=$2; shift 2 ;;
     --rebuild) rebuild=yes; shift ;;
     --reruns) reruns=$2; shift 2 ;;
-    -h|--help) sed -n '2,42p' "$0"; exit 0 ;;
+    --peer) peer=yes; shift ;;
+    -h|--help) sed -n '2,46p' "$0"; exit 0 ;;
     *) echo "unknown option '$1' (see --help)" >&2; exit 2 ;;
   esac
 done
@@ -183,4 +189,33 @@ if [ "$reruns" -gt 0 ]; then
   rest=$(echo "$times" | tail -n +2 | tr '\n' ' ')
   median=$(echo "$times" | tail -n +2 | sort -n | awk '{v[NR]=$1} END {print (NR % 2) ? v[(NR+1)/2] : (v[NR/2] + v[NR/2+1]) / 2}')
   echo "watch:       first run $first s; reruns $rest(median $median s); load $load_before before, $(cut -d' ' -f1-3 /proc/loadavg) after"
+fi
+
+if [ "$peer" = yes ]; then
+  # The same study in numpy (see DEVELOPERS.md, "A numpy yardstick"): same data, windows, step,
+  # bounds and cost; --threads, when given, sets its worker processes.
+  peer_out="$work/peer-out"
+  peer_timing="$work/peer-time.txt"
+  rm -rf "$peer_out"
+  jobs_option=()
+  if [ -n "$threads" ]; then jobs_option=(--jobs "$threads"); fi
+  peer_command=(python3 "$root/bench/peer/walk.py" "$data" --frequency "$frequency" --windows "$windows"
+      --every "$every" --bounds "$bounds" --cost-bps 10 --out "$peer_out" "${jobs_option[@]}")
+  load_before=$(cut -d' ' -f1-3 /proc/loadavg)
+  echo "running:     ${peer_command[*]}"
+  start=$(date +%s.%N)
+  if [ -x /usr/bin/time ]; then
+    /usr/bin/time -v -o "$peer_timing" "${peer_command[@]}"
+  else
+    "${peer_command[@]}"
+  fi
+  end=$(date +%s.%N)
+  echo "peer load:   $load_before before, $(cut -d' ' -f1-3 /proc/loadavg) after"
+  awk -v a="$start" -v b="$end" 'BEGIN { printf "peer wall:   %.1f s\n", b - a }'
+  if [ -f "$peer_timing" ]; then
+    rss_kb=$(grep 'Maximum resident set size' "$peer_timing" | awk '{print $NF}')
+    awk -v k="$rss_kb" 'BEGIN { printf "peer memory: %.0f MiB resident\n", k / 1024 }'
+    grep -E 'User time|System time' "$peer_timing" | sed 's/^\s*/             /'
+  fi
+  python3 "$root/bench/peer/agree.py" "$peer_out/weights.csv" "$out/weights.csv" --returns
 fi
