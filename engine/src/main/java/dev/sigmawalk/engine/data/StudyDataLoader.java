@@ -19,6 +19,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.TreeMap;
 
 /** The steps of {@link StudyData#load}: read, align, convert, cut, plan, check. One use per study. */
 final class StudyDataLoader {
@@ -276,6 +277,7 @@ final class StudyDataLoader {
             warnings.add(file.getFileName() + " gives no sector for " + without.size() + " of " + panel.assetCount()
                     + " assets: " + listed(without));
         }
+        warnSectorsOfOne(file, sectors);
         // A name the universe does not hold is most often a misspelt asset, which the line above then lists too.
         List<String> unknown = all.keySet().stream().filter(a -> panel.assetColumn(a) < 0).toList();
         if (!unknown.isEmpty()) {
@@ -284,6 +286,33 @@ final class StudyDataLoader {
                     + (unknown.size() == 1 ? "is" : "are") + " ignored: " + listed(unknown));
         }
         return sectors;
+    }
+
+    /**
+     * Method §11: with {@code factors: sectors} a sector of one asset has that asset's own excess
+     * return as its factor, which the asset's regression fits exactly: the model gives it no
+     * residual risk, and its residual diagnostics and sector maps leave it out. Said once, naming
+     * each such sector (in name order) and its asset.
+     */
+    private void warnSectorsOfOne(Path file, Map<String, String> sectors) {
+        boolean used = study.strategies().stream()
+                .anyMatch(s -> s.riskSettings().factors().orElse(null) instanceof FactorSource.Sectors);
+        if (!used) {
+            return;
+        }
+        Map<String, List<String>> members = new TreeMap<>();
+        sectors.forEach((asset, sector) -> members.computeIfAbsent(sector, k -> new ArrayList<>()).add(asset));
+        List<String> alone = members.entrySet().stream().filter(e -> e.getValue().size() == 1)
+                .map(e -> "'" + e.getKey() + "' (" + e.getValue().get(0) + ")").toList();
+        if (!alone.isEmpty()) {
+            boolean one = alone.size() == 1;
+            warnings.add(file.getFileName() + ": " + (one ? "sector " : alone.size() + " sectors ") + listed(alone)
+                    + (one ? " holds" : " each hold") + " a single asset of the universe; with factors: sectors"
+                    + (one ? " its factor is that asset's" : " each one's factor is that asset's") + " own return,"
+                    + " which the multi-index model fits exactly: the asset gets no residual risk there and is left"
+                    + " out of that model's residual diagnostics and sector maps; give it a sector with other assets"
+                    + " to estimate its own risk");
+        }
     }
 
     /** Method §11: every factor file a multi-index strategy names, once each, in study order. */

@@ -245,6 +245,23 @@ class DataIntakeTest {
                 + " the universe's first is 'A01'); expected the asset names of assets.csv", e.getMessage());
     }
 
+    /**
+     * A03 alone in 'Orchard': with factors: sectors its sector factor is its own return, fitted
+     * exactly (Method §11), which the user is told; a study without a sector model is not.
+     */
+    @Test
+    void sectorOfOneAsset_warns_onlyWithTheSectorModel() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("sectors.csv", "asset,sector\nA01,Harbour\nA02,Harbour\nA03,Orchard\n")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: riskfree.csv\n  sectors: sectors.csv");
+        assertEquals(List.of(), f.load().warnings(), "no sector model");
+        f.edit("study.yaml", "    risk: sample", "    risk: multi-index\n    factors: sectors");
+        assertEquals(List.of("sectors.csv: sector 'Orchard' (A03) holds a single asset of the universe; with factors:"
+                + " sectors its factor is that asset's own return, which the multi-index model fits exactly: the asset"
+                + " gets no residual risk there and is left out of that model's residual diagnostics and sector maps;"
+                + " give it a sector with other assets to estimate its own risk"), f.load().warnings());
+    }
+
     @Test
     void sectorsAndAlphas_areReadForTheLoadedAssets() {
         StudyFixture f = new StudyFixture(dir)
