@@ -338,6 +338,7 @@ final class StudyDataLoader {
                 fingerprints.add(FileFingerprint.of(file));
                 warnUnknownAlphaAssets(file, table, panel);
                 warnAlphasNeverUsed(file, table, panel.date(schedule.rebalanceRow(schedule.count() - 1)));
+                warnImplausibleAlphas(file, table, panel.periodsPerYear());
             }
         }
         return out;
@@ -366,6 +367,26 @@ final class StudyDataLoader {
         table.firstDate().filter(first -> first.isAfter(lastRebalance)).ifPresent(first -> warnings.add(
                 file.getFileName() + ": its first alpha is dated " + first + ", after the last rebalance ("
                         + lastRebalance + "), so no rebalance uses any of its alphas"));
+    }
+
+    /**
+     * Method §4: an alpha is a per-period expected excess return. One worth more than 100 % a year,
+     * (1 + α)^p − 1 > 1, or less than −50 % a year is most often a file in percent, or annual
+     * alphas given per period: the limits of the risk-free rate's warning, for the same mistakes.
+     * The largest and the smallest alpha are checked, each warned of at its line.
+     */
+    private void warnImplausibleAlphas(Path file, AlphaTable table, int periods) {
+        table.highest().filter(e -> Math.pow(1 + e.alpha(), periods) - 1 > IntakeChecks.IMPLAUSIBLE_ANNUAL_RATE)
+                .ifPresent(e -> warnings.add(implausibleAlpha(file, e, "above 100 %")));
+        table.lowest().filter(e -> Math.pow(1 + e.alpha(), periods) - 1
+                < IntakeChecks.IMPLAUSIBLE_NEGATIVE_ANNUAL_RATE)
+                .ifPresent(e -> warnings.add(implausibleAlpha(file, e, "below -50 %")));
+    }
+
+    private static String implausibleAlpha(Path file, AlphaTable.Entry e, String limit) {
+        return file.getFileName() + " line " + e.line() + ", column 'alpha': the alpha of " + e.alpha() + " for '"
+                + e.asset() + "' on " + e.date() + " is " + limit + " a year as a per-period return; alphas must be"
+                + " per period and decimal (0.001 for 0.1 % a period), not percent or annual";
     }
 
     /** The first few names, then "..." when there are more. */

@@ -262,6 +262,26 @@ class DataIntakeTest {
                 + " give it a sector with other assets to estimate its own risk"), f.load().warnings());
     }
 
+    /**
+     * Alphas in percent: 1.5 a month is 2.5^12 − 1 ≈ 5 960 % a year, and −0.2 a month is
+     * 0.8^12 − 1 ≈ −93 % a year (hand computation); 0.002 a month (2.4 % a year) is no warning.
+     */
+    @Test
+    void implausibleAlphas_warnAtTheirLines() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("alphas.csv", "date,asset,alpha\n2020-03-31,A01,0.002\n2020-03-31,A02,1.5\n2020-04-30,A03,-0.2\n")
+                .edit("study.yaml", "    risk: sample\n    objective: min-variance",
+                        "    risk: single-index\n    objective: max-sharpe\n    alphas: alphas.csv");
+        assertEquals(List.of("alphas.csv line 3, column 'alpha': the alpha of 1.5 for 'A02' on 2020-03-31 is above 100 % a"
+                        + " year as a per-period return; alphas must be per period and decimal (0.001 for 0.1 % a period),"
+                        + " not percent or annual",
+                "alphas.csv line 4, column 'alpha': the alpha of -0.2 for 'A03' on 2020-04-30 is below -50 % a year as a"
+                        + " per-period return; alphas must be per period and decimal (0.001 for 0.1 % a period), not"
+                        + " percent or annual"), f.load().warnings());
+        f.write("alphas.csv", "date,asset,alpha\n2020-03-31,A01,0.002\n2020-03-31,A02,-0.001\n");
+        assertEquals(List.of(), f.load().warnings());
+    }
+
     @Test
     void sectorsAndAlphas_areReadForTheLoadedAssets() {
         StudyFixture f = new StudyFixture(dir)
