@@ -138,6 +138,27 @@ class DataIntakeTest {
         assertTrue(w.get(0).startsWith("assets.csv line 5, column 'A01': a return of 6.5 is above +500 %"), w.get(0));
     }
 
+    /**
+     * Rows of nothing but commas, as a spreadsheet writes below its data (and sometimes between
+     * blocks of it), carry no cell: they are skipped like blank lines, and the lines after them
+     * keep the numbers an editor shows (the faulty cell below sits on line 11).
+     */
+    @Test
+    void rowsOfOnlyCommas_areSkippedLikeBlankLines() {
+        String assets = StudyFixture.ASSETS.replace("2020-05-31,", ",,,\n , ,\n2020-05-31,") + ",,,\n,,,\n";
+        StudyData plain = new StudyFixture(dir).load();
+        StudyData exported = new StudyFixture(dir).write("assets.csv", assets).load();
+        assertEquals(plain.panel().rows(), exported.panel().rows());
+        for (int t = 0; t < plain.panel().rows(); t++) {
+            for (int j = 0; j < 3; j++) {
+                assertEquals(plain.panel().value(t, j), exported.panel().value(t, j), 0.0, "row " + t + " asset " + j);
+            }
+        }
+        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir)
+                .write("assets.csv", assets.replace("2020-08-31,0.03", "2020-08-31,x")).load());
+        assertTrue(e.getMessage().startsWith("assets.csv line 11, column 'A01': 'x' is not a number"), e.getMessage());
+    }
+
     /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
     @Test
     void implausibleMarketReturn_warnsWithLineAndColumn() {
