@@ -1,6 +1,7 @@
 package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.DecimalSpelling;
+import java.time.LocalDate;
 import java.util.Locale;
 import java.util.Set;
 import java.util.regex.Pattern;
@@ -19,6 +20,15 @@ final class CellHints {
     private static final Pattern TIME_OF_DAY = Pattern.compile("\\d{4}-\\d{2}-\\d{2}[ T]\\d{1,2}:\\d{2}(:\\d{2}(\\.\\d+)?)?Z?");
     private static final Pattern DAY_MONTH_YEAR = Pattern.compile("\\d{1,2}[/.\\-]\\d{1,2}[/.\\-]\\d{2,4}");
     private static final Pattern COMPACT = Pattern.compile("\\d{8}");
+    private static final Pattern SERIAL = Pattern.compile("\\d{5}");
+    /**
+     * Day 0 of the serial day numbers spreadsheets store dates as (the common 1900 date system,
+     * whose day 60 is a 29 February 1900 that never was, so later days count from 1899-12-30);
+     * from memory. Only numbers between the two limits (1954-10-03 to 2119-01-11) get the hint.
+     */
+    private static final LocalDate SERIAL_EPOCH = LocalDate.of(1899, 12, 30);
+    private static final int SERIAL_FIRST = 20_000;
+    private static final int SERIAL_LAST = 80_000;
 
     private CellHints() {
     }
@@ -62,6 +72,13 @@ final class CellHints {
         if (DAY_MONTH_YEAR.matcher(t).matches()) {
             return "; in a date such as '" + t + "' the order of day and month cannot be told for sure: re-save the"
                     + " column with the format YYYY-MM-DD";
+        }
+        if (SERIAL.matcher(t).matches()) {
+            int days = Integer.parseInt(t);
+            if (days >= SERIAL_FIRST && days <= SERIAL_LAST) {
+                return "; it looks like a spreadsheet's serial day number (days since 1899-12-30, here "
+                        + SERIAL_EPOCH.plusDays(days) + "): format the date column as YYYY-MM-DD before saving";
+            }
         }
         if (COMPACT.matcher(t).matches()) {
             return "; write it with dashes, as " + t.substring(0, 4) + "-" + t.substring(4, 6) + "-" + t.substring(6);

@@ -385,8 +385,13 @@ final class WideCsvReader {
         for (int j = 1; j < header.size(); j++) {
             String name = header.get(j);
             if (name.isEmpty()) {
+                boolean trailing = header.subList(j, header.size()).stream().allMatch(String::isEmpty);
                 throw new InputException(new InputException.Location(file, 1, null),
-                        "header cell " + (j + 1) + " is empty; every column needs a name");
+                        "header cell " + (j + 1) + " is empty; every column needs a name"
+                                + (trailing ? "; the header ends in " + (header.size() - j) + " empty cell"
+                                        + (header.size() - j == 1 ? "" : "s") + ", as a spreadsheet writes when empty"
+                                        + " columns beside the data were once used or formatted: delete those columns"
+                                        + " and save again" : ""));
             }
             Names.requireInert(name, file, 1, null, "column");
             if (!seen.add(name)) {

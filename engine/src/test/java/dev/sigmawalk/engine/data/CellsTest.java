@@ -107,6 +107,18 @@ class CellsTest {
         assertEquals("", CellHints.date("Jan 31 2020"));
     }
 
+    /**
+     * A date column saved as numbers: 40209 days after 1899-12-30 is 2010-01-31 (Python's
+     * datetime.date(1899, 12, 30) + timedelta(40209)); numbers outside 20 000..80 000 get no hint.
+     */
+    @Test
+    void spreadsheetSerialDayNumber_isNamedWithItsDate() {
+        assertEquals("; it looks like a spreadsheet's serial day number (days since 1899-12-30, here 2010-01-31):"
+                + " format the date column as YYYY-MM-DD before saving", CellHints.date("40209"));
+        assertEquals("", CellHints.date("12345"));
+        assertEquals("", CellHints.date("90000"));
+    }
+
     @Test
     void headersSeparatedOtherwise_carryTheHint() {
         assertTrue(CellHints.header("date;A01;A02").startsWith("; the header is separated by semicolons"));

@@ -159,6 +159,17 @@ class DataIntakeTest {
         assertTrue(e.getMessage().startsWith("assets.csv line 11, column 'A01': 'x' is not a number"), e.getMessage());
     }
 
+    /** Empty columns after the data make empty header cells: refused, with what they are and the fix. */
+    @Test
+    void trailingEmptyHeaderCells_areNamedAsSuch() {
+        String assets = StudyFixture.ASSETS.replace("date,A01,A02,A03", "date,A01,A02,A03,,")
+                .replaceAll("(?m)^(2020-\\d\\d-\\d\\d,[^\\n]*)$", "$1,,");
+        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir).write("assets.csv", assets).load());
+        assertEquals("assets.csv line 1: header cell 5 is empty; every column needs a name; the header ends in 2 empty"
+                + " cells, as a spreadsheet writes when empty columns beside the data were once used or formatted:"
+                + " delete those columns and save again", e.getMessage());
+    }
+
     /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
     @Test
     void implausibleMarketReturn_warnsWithLineAndColumn() {
