@@ -8,9 +8,9 @@ import java.util.regex.Pattern;
 
 /**
  * What a refused cell most likely is, said after the refusal: the forms spreadsheet and database
- * exports write that intake does not read (a percent sign, a decimal comma, an error or
- * missing-value marker, a time of day, a day-first or month-first date). Each hint names the
- * fix; a cell that matches none gets no hint. The markers are common practice in spreadsheet and
+ * exports write that intake does not read (a percent sign, a decimal comma, a thousands
+ * separator, an error or missing-value marker, a time of day, a day-first or month-first date, a
+ * serial day number). Each hint names the fix; a cell that matches none gets no hint. The markers are common practice in spreadsheet and
  * statistics-package exports, listed from memory.
  */
 final class CellHints {
@@ -21,6 +21,8 @@ final class CellHints {
     private static final Pattern DAY_MONTH_YEAR = Pattern.compile("\\d{1,2}[/.\\-]\\d{1,2}[/.\\-]\\d{2,4}");
     private static final Pattern COMPACT = Pattern.compile("\\d{8}");
     private static final Pattern SERIAL = Pattern.compile("\\d{5}");
+    /** Digits grouped in threes by commas, with an optional '.' fraction: 10,190.83 or 1,234,567. */
+    private static final Pattern THOUSANDS = Pattern.compile("[+-]?\\d{1,3}(,\\d{3})+(\\.\\d+)?");
     /**
      * Day 0 of the serial day numbers spreadsheets store dates as (the common 1900 date system,
      * whose day 60 is a 29 February 1900 that never was, so later days count from 1899-12-30);
@@ -41,6 +43,9 @@ final class CellHints {
         }
         if (t.endsWith("%") && DecimalSpelling.isPlain(t.substring(0, t.length() - 1).strip())) {
             return "; a percent sign is not read: write returns as decimals (0.039 for 3.9 %)";
+        }
+        if (THOUSANDS.matcher(t).matches() && (t.indexOf(',') != t.lastIndexOf(',') || t.indexOf('.') > 0)) {
+            return "; a thousands separator is not read: write the number without it, as " + t.replace(",", "");
         }
         if (t.indexOf(',') > 0 && t.indexOf(',') == t.lastIndexOf(',') && DecimalSpelling.isPlain(t.replace(',', '.'))) {
             return "; a decimal comma is not read: write '.' as the decimal point, with no thousands separator";

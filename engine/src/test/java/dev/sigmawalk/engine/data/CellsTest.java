@@ -76,9 +76,20 @@ class CellsTest {
             assertEquals("; a decimal comma is not read: write '.' as the decimal point, with no thousands separator",
                     CellHints.number(comma), comma);
         }
-        for (String plain : new String[] {"abc", "1e", "--1", "0x10", "1,234,567", ",5", "Infinity"}) {
+        for (String plain : new String[] {"abc", "1e", "--1", "0x10", "1,23,567", ",5", "Infinity"}) {
             assertEquals("", CellHints.number(plain), plain);
         }
+    }
+
+    /** Prices exported with thousands separators: the hint gives the number as it must be written. */
+    @Test
+    void thousandsSeparators_carryTheNumberWithoutThem() {
+        assertEquals("; a thousands separator is not read: write the number without it, as 10190.83",
+                CellHints.number("10,190.83"));
+        assertEquals("; a thousands separator is not read: write the number without it, as 1234567",
+                CellHints.number("1,234,567"));
+        assertEquals("; a thousands separator is not read: write the number without it, as -1234.5",
+                CellHints.number("-1,234.5"));
     }
 
     /** Characters a spreadsheet or word processor puts into a number that look like ASCII ones or like nothing. */
