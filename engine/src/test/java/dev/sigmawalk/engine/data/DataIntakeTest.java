@@ -170,6 +170,27 @@ class DataIntakeTest {
                 + " delete those columns and save again", e.getMessage());
     }
 
+    /**
+     * Month-end dates: the gaps 29, 31, 30, 31, 30, 31, 31 days have the median 31, hence 12 a year
+     * (Method §1). 252 (a daily figure) and 4 are more than twice off and warn; 13 and 6 are within
+     * a factor of two and are taken as meant.
+     */
+    @Test
+    void periodsPerYearFarFromTheDates_warns() {
+        StudyFixture f = new StudyFixture(dir)
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: riskfree.csv\n  periods_per_year: 252");
+        assertEquals(List.of("data.periods_per_year: 252 is given, but the dates of assets.csv are a median 31 days"
+                + " apart, which is 12 periods a year; every annualised figure (mean return, volatility, Sharpe ratio,"
+                + " CAGR, tracking error) and the conversion of an annual risk-free rate use the given 252: check the"
+                + " value, or leave the key out to infer it"), f.load().warnings());
+        f.edit("study.yaml", "periods_per_year: 252", "periods_per_year: 4");
+        assertEquals(1, f.load().warnings().size(), "4 against 12");
+        for (String near : new String[] {"13", "6"}) {
+            f.edit("study.yaml", "periods_per_year: " + (near.equals("13") ? "4" : "13"), "periods_per_year: " + near);
+            assertEquals(List.of(), f.load().warnings(), near + " against 12");
+        }
+    }
+
     /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
     @Test
     void implausibleMarketReturn_warnsWithLineAndColumn() {
