@@ -512,12 +512,14 @@ class DenseModel:
 def solve_partition(model, side, hi):
     """The free weights of the equality-constrained subproblem with the others at their bounds:
     Q_FF w_F = nu 1 - Q_FU hi, 1'w_F = 1 - hi |U|, by one Cholesky factor of Q_FF and the
-    Schur complement nu = (1 - hi|U| - 1'Q_FF^-1 r) / 1'Q_FF^-1 1."""
+    Schur complement nu = (1 - hi|U| - 1'Q_FF^-1 r) / 1'Q_FF^-1 1. Returns (w, nu, Q w), or None
+    when no weight is free or Q_FF is not positive definite."""
     free = np.flatnonzero(side == FREE)
     upper = np.flatnonzero(side == UPPER)
     if free.size == 0:
         return None
-    r = -model.times(upper, np.full(upper.size, hi))[free] if upper.size else np.zeros(free.size)
+    pinned = model.times(upper, np.full(upper.size, hi)) if upper.size else np.zeros(side.size)
+    r = -pinned[free]
     try:
         factor = cho_factor(model.block(free), lower=False, check_finite=False)
     except LinAlgError:
@@ -526,7 +528,9 @@ def solve_partition(model, side, hi):
     nu = (1.0 - hi * upper.size - sol[:, 0].sum()) / sol[:, 1].sum()
     w = np.where(side == UPPER, hi, 0.0)
     w[free] = sol[:, 0] + nu * sol[:, 1]
-    return w, nu
+    # The gradient Q w, reusing the capped weights' part.
+    g = pinned + model.times(free, w[free])
+    return w, nu, g
 
 
 def gradient(model, w):
@@ -559,8 +563,7 @@ def pdas(model, guess, hi):
         solved = solve_partition(model, side, hi)
         if solved is None:
             return None
-        w, nu = solved
-        g = gradient(model, w)
+        w, nu, g = solved
         z = g - nu
         tol = DROP * max(np.abs(g).max(), 1e-300)
         nxt = side.copy()
