@@ -179,11 +179,12 @@ class Deviations:
     shared, read-only, by every window length."""
 
     def __init__(self, z, first, last):
+        """z: the excess returns, overwritten with the deviations (no second copy of the panel)."""
         window = z[first:last + 1]
         present = ~np.isnan(window)
         shift = np.where(present, window, 0.0).sum(axis=0) / np.maximum(1, present.sum(axis=0))
-        self.d = z - shift
-        np.nan_to_num(self.d, copy=False, nan=0.0)
+        z -= shift
+        self.d = np.nan_to_num(z, copy=False, nan=0.0)
         # Per-row sums of d^2 over the asset columns, for the intensity's q_t.
         self.row_squares = np.einsum("ij,ij->i", self.d[:, :-1], self.d[:, :-1])
 
@@ -801,10 +802,13 @@ def main(argv=None):
             sys.exit(f"{role}-{args.frequency}.csv: no value on {dates[first_used + gaps[0]]}; it must be"
                      f" complete from {dates[first_used]} on (Method §1)")
     t = time.perf_counter()
-    excess = r - rf[:, None]
-    z = np.column_stack([excess, market - rf])      # Method §1: excess returns, market last
-    elig = Eligibility(r, excess)
-    deviations = Deviations(z, first_used, taus[0])
+    # Method §1: excess returns of the assets, the market's last.
+    z = np.empty((r.shape[0], r.shape[1] + 1))
+    np.subtract(r, rf[:, None], out=z[:, :-1])
+    z[:, -1] = market - rf
+    elig = Eligibility(r, z[:, :-1])
+    deviations = Deviations(z, first_used, taus[0])   # takes z over
+    del z
     stats["prepare"] = time.perf_counter() - t
     t = time.perf_counter()
     _STUDY.update(taus=taus, last=last, r=r, rf=rf, deviations=deviations, elig=elig, hi=hi, cost_bps=args.cost_bps, dates=dates,
