@@ -86,10 +86,12 @@ def read_table(path, jobs=1):
     """A CSV of dates by columns: (header names, dates as strings, values with NaN for empty),
     parsed by `jobs` processes in row blocks."""
     with open(path, "rb") as f:
-        raw = f.read().replace(b"\r", b"")
+        raw = f.read()
+    if b"\r" in raw:
+        raw = raw.replace(b"\r", b"")
     header, body = raw.split(b"\n", 1)
     names = header.decode().strip().split(",")[1:]
-    lines = [line for line in body.split(b"\n") if line.strip()]
+    lines = [line for line in body.split(b"\n") if line]
     dates = [line[:line.index(b",")].decode() for line in lines]
     if jobs > 1 and len(lines) >= 1000:
         # Row blocks: this process parses the first while jobs - 1 forked workers parse the rest.
