@@ -19,16 +19,32 @@ import java.util.TreeMap;
  * Immutable; lookups are a binary search over the asset's dates.
  */
 public final class AlphaTable {
-    private static final AlphaTable EMPTY = new AlphaTable(Map.of());
+    private static final AlphaTable EMPTY = new AlphaTable(Map.of(), Optional.empty(), Optional.empty());
     private static final List<String> HEADER = List.of("date", "asset", "alpha");
 
     private final Map<String, Series> byAsset;
+    private final Optional<Entry> highest;
+    private final Optional<Entry> lowest;
 
     private record Series(LocalDate[] dates, double[] alphas) {
     }
 
-    private AlphaTable(Map<String, Series> byAsset) {
+    /**
+     * One row of the file.
+     *
+     * @param line its line in the file
+     */
+    public record Entry(LocalDate date, String asset, double alpha, int line) {
+        public Entry {
+            Objects.requireNonNull(date, "date");
+            Objects.requireNonNull(asset, "asset");
+        }
+    }
+
+    private AlphaTable(Map<String, Series> byAsset, Optional<Entry> highest, Optional<Entry> lowest) {
         this.byAsset = byAsset;
+        this.highest = highest;
+        this.lowest = lowest;
     }
 
     /** The table with no alphas: {@link #latest} is 0 everywhere. */
@@ -62,6 +78,16 @@ public final class AlphaTable {
         return byAsset.values().stream().map(s -> s.dates[0]).min(Comparator.naturalOrder());
     }
 
+    /** The row with the largest alpha (the first in file order among equals); empty for a table with none. */
+    public Optional<Entry> highest() {
+        return highest;
+    }
+
+    /** The row with the smallest alpha (the first in file order among equals); empty for a table with none. */
+    public Optional<Entry> lowest() {
+        return lowest;
+    }
+
     /** Number of (date, asset) entries. */
     public int size() {
         return byAsset.values().stream().mapToInt(s -> s.dates.length).sum();
@@ -74,6 +100,8 @@ public final class AlphaTable {
      */
     public static AlphaTable read(Path file) {
         Map<String, TreeMap<LocalDate, Double>> collected = new HashMap<>();
+        Entry high = null;
+        Entry low = null;
         try (CsvSource source = CsvSource.open(file)) {
             LongCsv.requireHeader(source, HEADER);
             String[] cells;
@@ -94,6 +122,12 @@ public final class AlphaTable {
                             "'" + cells[0] + "' repeats an alpha for asset '" + asset + "' on that date");
                 }
                 rows++;
+                if (high == null || alpha > high.alpha()) {
+                    high = new Entry(date, asset, alpha, line);
+                }
+                if (low == null || alpha < low.alpha()) {
+                    low = new Entry(date, asset, alpha, line);
+                }
             }
             if (rows == 0) {
                 throw new InputException(new InputException.Location(file, 1, null),
@@ -106,7 +140,7 @@ public final class AlphaTable {
             double[] alphas = series.values().stream().mapToDouble(Double::doubleValue).toArray();
             byAsset.put(asset, new Series(dates, alphas));
         });
-        return new AlphaTable(Collections.unmodifiableMap(byAsset));
+        return new AlphaTable(Collections.unmodifiableMap(byAsset), Optional.ofNullable(high), Optional.ofNullable(low));
     }
 
     @Override

@@ -161,6 +161,36 @@ final class IntakeChecks {
     }
 
     /**
+     * Warns once per column about its longest run of returns exactly 0 when the run spans at
+     * least {@code minRun} rows (half the shortest window, see {@link #staleRun}): a price that
+     * stopped updating, or zeros written for missing values. Every window holding the run sees
+     * too little variance, so the asset looks nearly riskless and minimum-variance weights pile
+     * into it, with no other sign; a window that is all zeros is already left out (Method §2).
+     */
+    void warnStaleRuns(WideTable table, List<Integer> assetCols, List<Integer> kept, int minRun) {
+        for (int k = 0; k < kept.size(); k++) {
+            int length = stats.zeroRun[k];
+            if (length >= minRun) {
+                int end = stats.zeroRunEnd[k];
+                int begin = end - length + 1;
+                int col = assetCols.get(kept.get(k));
+                warnings.add(table.file().getFileName() + " column '" + table.columns().get(col) + "': its return is"
+                        + " exactly 0 in " + length + " consecutive rows, " + panel.date(begin) + " to " + panel.date(end)
+                        + " (lines " + table.line(begin + offset, col) + " to " + table.line(end + offset, col) + "), at"
+                        + " least half of the shortest window: a stale price, or zeros standing for missing values;"
+                        + " every window holding them understates its risk, so minimum-variance weights favour it:"
+                        + " leave the cells empty where the asset had no " + (kind == ValueKind.PRICES ? "price" : "return"));
+            }
+        }
+    }
+
+    /** Half the shortest window (rounded up), and at least 3 rows: the run {@link #warnStaleRuns} warns of. */
+    static int staleRun(List<Integer> windows) {
+        int shortest = windows.stream().mapToInt(Integer::intValue).min().orElseThrow();
+        return Math.max(3, (shortest + 1) / 2);
+    }
+
+    /**
      * The same two warnings for the market's returns: a bad tick or an unadjusted level shift in
      * the index moves every beta, every single-index forecast and every tracking error.
      */

@@ -21,6 +21,12 @@ final class PanelStats {
     /** Returns at or below {@code collapse}, per asset, and the first such row (-1 without any). */
     final int[] collapsed;
     final int[] firstCollapse;
+    /**
+     * The longest run of consecutive rows whose return is exactly 0, per asset, and the row that
+     * ends it (-1 without any); a missing row ends a run. The first longest run is kept.
+     */
+    final int[] zeroRun;
+    final int[] zeroRunEnd;
     /** Returns above {@code large} in size over the whole panel, and the first one's row and asset. */
     long largeCount;
     int firstLargeRow = -1;
@@ -36,6 +42,9 @@ final class PanelStats {
         aboveImplausible = new int[assets];
         firstImplausible = new int[assets];
         collapsed = new int[assets];
+        zeroRun = new int[assets];
+        zeroRunEnd = new int[assets];
+        Arrays.fill(zeroRunEnd, -1);
         firstCollapse = new int[assets];
         Arrays.fill(firstCollapse, -1);
         Arrays.fill(first, -1);
@@ -52,11 +61,21 @@ final class PanelStats {
         int n = panel.assetCount();
         PanelStats s = new PanelStats(n);
         double[] r = panel.rawReturns();
+        int[] run = new int[n];
         for (int t = 0, at = 0; t < panel.rows(); t++) {
             for (int j = 0; j < n; j++, at++) {
                 double v = r[at];
                 if (v != v) {
+                    run[j] = 0;
                     continue;
+                }
+                if (v == 0) {
+                    if (++run[j] > s.zeroRun[j]) {
+                        s.zeroRun[j] = run[j];
+                        s.zeroRunEnd[j] = t;
+                    }
+                } else {
+                    run[j] = 0;
                 }
                 s.present[j]++;
                 if (s.first[j] < 0) {

@@ -19,6 +19,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.TreeMap;
 
 /** The steps of {@link StudyData#load}: read, align, convert, cut, plan, check. One use per study. */
 final class StudyDataLoader {
@@ -92,6 +93,7 @@ final class StudyDataLoader {
         checks.warnManyReturnsBeyondOne(table, assetCols, kept);
         checks.warnImplausibleReturns(table, assetCols, kept);
         checks.warnCollapsedReturns(table, assetCols, kept);
+        checks.warnStaleRuns(table, assetCols, kept, IntakeChecks.staleRun(study.walkForward().windows()));
         checks.warnMarketOutliers(market);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);
         checks.warnMarketIsAssetMean();
@@ -276,6 +278,7 @@ final class StudyDataLoader {
             warnings.add(file.getFileName() + " gives no sector for " + without.size() + " of " + panel.assetCount()
                     + " assets: " + listed(without));
         }
+        warnSectorsOfOne(file, sectors);
         // A name the universe does not hold is most often a misspelt asset, which the line above then lists too.
         List<String> unknown = all.keySet().stream().filter(a -> panel.assetColumn(a) < 0).toList();
         if (!unknown.isEmpty()) {
@@ -284,6 +287,33 @@ final class StudyDataLoader {
                     + (unknown.size() == 1 ? "is" : "are") + " ignored: " + listed(unknown));
         }
         return sectors;
+    }
+
+    /**
+     * Method §11: with {@code factors: sectors} a sector of one asset has that asset's own excess
+     * return as its factor, which the asset's regression fits exactly: the model gives it no
+     * residual risk, and its residual diagnostics and sector maps leave it out. Said once, naming
+     * each such sector (in name order) and its asset.
+     */
+    private void warnSectorsOfOne(Path file, Map<String, String> sectors) {
+        boolean used = study.strategies().stream()
+                .anyMatch(s -> s.riskSettings().factors().orElse(null) instanceof FactorSource.Sectors);
+        if (!used) {
+            return;
+        }
+        Map<String, List<String>> members = new TreeMap<>();
+        sectors.forEach((asset, sector) -> members.computeIfAbsent(sector, k -> new ArrayList<>()).add(asset));
+        List<String> alone = members.entrySet().stream().filter(e -> e.getValue().size() == 1)
+                .map(e -> "'" + e.getKey() + "' (" + e.getValue().get(0) + ")").toList();
+        if (!alone.isEmpty()) {
+            boolean one = alone.size() == 1;
+            warnings.add(file.getFileName() + ": " + (one ? "sector " : alone.size() + " sectors ") + listed(alone)
+                    + (one ? " holds" : " each hold") + " a single asset of the universe; with factors: sectors"
+                    + (one ? " its factor is that asset's" : " each one's factor is that asset's") + " own return,"
+                    + " which the multi-index model fits exactly: the asset gets no residual risk there and is left"
+                    + " out of that model's residual diagnostics and sector maps; give it a sector with other assets"
+                    + " to estimate its own risk");
+        }
     }
 
     /** Method §11: every factor file a multi-index strategy names, once each, in study order. */
@@ -309,6 +339,7 @@ final class StudyDataLoader {
                 fingerprints.add(FileFingerprint.of(file));
                 warnUnknownAlphaAssets(file, table, panel);
                 warnAlphasNeverUsed(file, table, panel.date(schedule.rebalanceRow(schedule.count() - 1)));
+                warnImplausibleAlphas(file, table, panel.periodsPerYear());
             }
         }
         return out;
@@ -337,6 +368,26 @@ final class StudyDataLoader {
         table.firstDate().filter(first -> first.isAfter(lastRebalance)).ifPresent(first -> warnings.add(
                 file.getFileName() + ": its first alpha is dated " + first + ", after the last rebalance ("
                         + lastRebalance + "), so no rebalance uses any of its alphas"));
+    }
+
+    /**
+     * Method §4: an alpha is a per-period expected excess return. One worth more than 100 % a year,
+     * (1 + α)^p − 1 > 1, or less than −50 % a year is most often a file in percent, or annual
+     * alphas given per period: the limits of the risk-free rate's warning, for the same mistakes.
+     * The largest and the smallest alpha are checked, each warned of at its line.
+     */
+    private void warnImplausibleAlphas(Path file, AlphaTable table, int periods) {
+        table.highest().filter(e -> Math.pow(1 + e.alpha(), periods) - 1 > IntakeChecks.IMPLAUSIBLE_ANNUAL_RATE)
+                .ifPresent(e -> warnings.add(implausibleAlpha(file, e, "above 100 %")));
+        table.lowest().filter(e -> Math.pow(1 + e.alpha(), periods) - 1
+                < IntakeChecks.IMPLAUSIBLE_NEGATIVE_ANNUAL_RATE)
+                .ifPresent(e -> warnings.add(implausibleAlpha(file, e, "below -50 %")));
+    }
+
+    private static String implausibleAlpha(Path file, AlphaTable.Entry e, String limit) {
+        return file.getFileName() + " line " + e.line() + ", column 'alpha': the alpha of " + e.alpha() + " for '"
+                + e.asset() + "' on " + e.date() + " is " + limit + " a year as a per-period return; alphas must be"
+                + " per period and decimal (0.001 for 0.1 % a period), not percent or annual";
     }
 
     /** The first few names, then "..." when there are more. */

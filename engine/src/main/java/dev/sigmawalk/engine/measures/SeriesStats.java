@@ -1,5 +1,7 @@
 package dev.sigmawalk.engine.measures;
 
+import java.util.Arrays;
+
 /**
  * Plain statistics of return series. Means and standard deviations use two passes for accuracy;
  * standard deviations divide by N−1.
@@ -61,14 +63,33 @@ public final class SeriesStats {
     }
 
     /**
+     * The first row whose return is −1 or below (−100 % or worse, possible with short positions
+     * or leverage), where wealth W_t = Π_{s≤t}(1 + R_s) reaches 0 or goes below it; −1 when none.
+     * From there the product is no longer wealth (a second such row would turn it positive
+     * again), so the measures below take the wealth as gone: ruin.
+     */
+    public static int firstRuin(double[] r) {
+        for (int i = 0; i < r.length; i++) {
+            if (!(1 + r[i] > 0)) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /**
      * Largest peak-to-trough loss of wealth W_t = Π_{s≤t}(1 + R_s), with W = 1 just before the
-     * first row: max_t (1 − W_t / max_{s≤t} W_s), as a positive fraction (0 when wealth never falls).
+     * first row: max_t (1 − W_t / max_{s≤t} W_s), as a positive fraction (0 when wealth never
+     * falls); 1 (all of it) once wealth is gone ({@link #firstRuin}), never more.
      */
     public static double maxDrawdown(double[] r) {
         double wealth = 1;
         double peak = 1;
         double worst = 0;
         for (double v : r) {
+            if (!(1 + v > 0)) {
+                return 1;
+            }
             wealth *= 1 + v;
             peak = Math.max(peak, wealth);
             worst = Math.max(worst, 1 - wealth / peak);
@@ -76,12 +97,16 @@ public final class SeriesStats {
         return worst;
     }
 
-    /** Drawdown series 1 − W_t / max_{s≤t} W_s, one value per row. */
+    /** Drawdown series 1 − W_t / max_{s≤t} W_s, one value per row; 1 from the row of ruin on. */
     public static double[] drawdowns(double[] r) {
         double[] out = new double[r.length];
         double wealth = 1;
         double peak = 1;
         for (int i = 0; i < r.length; i++) {
+            if (!(1 + r[i] > 0)) {
+                Arrays.fill(out, i, r.length, 1.0);
+                return out;
+            }
             wealth *= 1 + r[i];
             peak = Math.max(peak, wealth);
             out[i] = 1 - wealth / peak;
@@ -89,10 +114,16 @@ public final class SeriesStats {
         return out;
     }
 
-    /** Compound annual growth (Π(1 + R_t))^(p/N) − 1, using logs to avoid overflow. */
+    /**
+     * Compound annual growth (Π(1 + R_t))^(p/N) − 1, using logs to avoid overflow; −1 (all of it
+     * lost) once wealth is gone ({@link #firstRuin}), where the product is no longer wealth.
+     */
     public static double cagr(double[] r, int periodsPerYear) {
         double logGrowth = 0;
         for (double v : r) {
+            if (!(1 + v > 0)) {
+                return -1;
+            }
             logGrowth += Math.log1p(v);
         }
         return Math.expm1(logGrowth * periodsPerYear / r.length);

@@ -175,6 +175,38 @@ class DataIntakeTest {
                 + " for, or a bad value"), w);
     }
 
+    /**
+     * A price that stops updating: A02 repeats 21 from 2020-03-31 to 2020-08-31, returns exactly 0
+     * in the five rows 2020-04-30 .. 2020-08-31, more than half the 6-row window (3 rows), while
+     * a single zero (A01 at 2020-03-31) is no warning. Lines: the header is line 1, 2020-04-30
+     * is line 5.
+     */
+    @Test
+    void stalePrice_warnsOfTheRunOfZeroReturns() {
+        List<String> w = new StudyFixture(dir)
+                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,20.5\n2020-03-31,11,21\n"
+                        + "2020-04-30,12,21\n2020-05-31,11.5,21\n2020-06-30,12.5,21\n2020-07-31,12,21\n"
+                        + "2020-08-31,13,21\n2020-09-30,13.5,21.4\n")
+                .write("market.csv", "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,99\n2020-04-30,102\n"
+                        + "2020-05-31,103\n2020-06-30,101\n2020-07-31,104\n2020-08-31,105\n2020-09-30,103\n")
+                .edit("study.yaml", "values: returns", "values: prices")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
+                .edit("study.yaml", "windows: [3]", "windows: [6]")
+                .load().warnings();
+        assertEquals(List.of("assets.csv column 'A02': its return is exactly 0 in 5 consecutive rows, 2020-04-30 to"
+                + " 2020-08-31 (lines 5 to 9), at least half of the shortest window: a stale price, or zeros standing"
+                + " for missing values; every window holding them understates its risk, so minimum-variance weights"
+                + " favour it: leave the cells empty where the asset had no price"), w);
+    }
+
+    /** The run's limit: half the shortest window rounded up, never below 3 rows. */
+    @Test
+    void staleRunLimit_isHalfTheShortestWindow() {
+        assertEquals(12, IntakeChecks.staleRun(List.of(36, 24, 60)));
+        assertEquals(13, IntakeChecks.staleRun(List.of(25)));
+        assertEquals(3, IntakeChecks.staleRun(List.of(2)));
+    }
+
     /** A rate of −1 a period would make every excess return r + 1; (1 − 1)^12 − 1 = −100 % a year. */
     @Test
     void riskFreeOfMinusOnePerPeriod_warns() {
@@ -243,6 +275,43 @@ class DataIntakeTest {
         InputException e = assertThrows(InputException.class, f::load);
         assertEquals("sectors.csv: none of the 2 assets named here is in the universe of assets.csv (the first is 'Z98',"
                 + " the universe's first is 'A01'); expected the asset names of assets.csv", e.getMessage());
+    }
+
+    /**
+     * A03 alone in 'Orchard': with factors: sectors its sector factor is its own return, fitted
+     * exactly (Method §11), which the user is told; a study without a sector model is not.
+     */
+    @Test
+    void sectorOfOneAsset_warns_onlyWithTheSectorModel() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("sectors.csv", "asset,sector\nA01,Harbour\nA02,Harbour\nA03,Orchard\n")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: riskfree.csv\n  sectors: sectors.csv");
+        assertEquals(List.of(), f.load().warnings(), "no sector model");
+        f.edit("study.yaml", "    risk: sample", "    risk: multi-index\n    factors: sectors");
+        assertEquals(List.of("sectors.csv: sector 'Orchard' (A03) holds a single asset of the universe; with factors:"
+                + " sectors its factor is that asset's own return, which the multi-index model fits exactly: the asset"
+                + " gets no residual risk there and is left out of that model's residual diagnostics and sector maps;"
+                + " give it a sector with other assets to estimate its own risk"), f.load().warnings());
+    }
+
+    /**
+     * Alphas in percent: 1.5 a month is 2.5^12 − 1 ≈ 5 960 % a year, and −0.2 a month is
+     * 0.8^12 − 1 ≈ −93 % a year (hand computation); 0.002 a month (2.4 % a year) is no warning.
+     */
+    @Test
+    void implausibleAlphas_warnAtTheirLines() {
+        StudyFixture f = new StudyFixture(dir)
+                .write("alphas.csv", "date,asset,alpha\n2020-03-31,A01,0.002\n2020-03-31,A02,1.5\n2020-04-30,A03,-0.2\n")
+                .edit("study.yaml", "    risk: sample\n    objective: min-variance",
+                        "    risk: single-index\n    objective: max-sharpe\n    alphas: alphas.csv");
+        assertEquals(List.of("alphas.csv line 3, column 'alpha': the alpha of 1.5 for 'A02' on 2020-03-31 is above 100 % a"
+                        + " year as a per-period return; alphas must be per period and decimal (0.001 for 0.1 % a period),"
+                        + " not percent or annual",
+                "alphas.csv line 4, column 'alpha': the alpha of -0.2 for 'A03' on 2020-04-30 is below -50 % a year as a"
+                        + " per-period return; alphas must be per period and decimal (0.001 for 0.1 % a period), not"
+                        + " percent or annual"), f.load().warnings());
+        f.write("alphas.csv", "date,asset,alpha\n2020-03-31,A01,0.002\n2020-03-31,A02,-0.001\n");
+        assertEquals(List.of(), f.load().warnings());
     }
 
     @Test

@@ -1,5 +1,6 @@
 package dev.sigmawalk.engine.measures;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -64,5 +65,30 @@ class PerformanceMeasuresTest {
         assertEquals(0.0, SeriesStats.maxDrawdown(new double[] {0.01, 0.02, 0.0}), 0.0);
         // W: 2, 1, 0.5, 2 → deepest point 0.5 against the peak 2
         assertEquals(0.75, SeriesStats.maxDrawdown(new double[] {1.0, -0.5, -0.5, 3.0}), TIGHT);
+    }
+
+    /**
+     * A loss of more than everything in one period (−150 %, a short book): W goes 1.1, −0.55,
+     * then a second such loss would make the product +0.275, a "recovery" no investor sees. The
+     * wealth is taken as gone at row 1: drawdown 1 from there, max drawdown 1 (not the 1.5 of −0.55 against 1.1),
+     * CAGR −1 (not NaN); hand computation.
+     */
+    @Test
+    void lossOfMoreThanEverything_isRuin_notARecovery() {
+        double[] r = {0.1, -1.5, -1.5, 0.2};
+        assertEquals(1, SeriesStats.firstRuin(r));
+        assertEquals(1.0, SeriesStats.maxDrawdown(r), 0.0);
+        assertArrayEquals(new double[] {0, 1, 1, 1}, SeriesStats.drawdowns(r), 0.0);
+        assertEquals(-1.0, SeriesStats.cagr(r, 12), 0.0);
+        assertEquals(-1, SeriesStats.firstRuin(new double[] {0.1, -0.99, 5}));
+    }
+
+    /** Exactly −100 % is ruin too: W = 0, drawdown 1, CAGR −1, as the plain formulas give. */
+    @Test
+    void lossOfEverything_isRuin() {
+        double[] r = {0.1, -1.0, 0.5};
+        assertEquals(1, SeriesStats.firstRuin(r));
+        assertEquals(1.0, SeriesStats.maxDrawdown(r), 0.0);
+        assertEquals(-1.0, SeriesStats.cagr(r, 12), 0.0);
     }
 }

@@ -12,6 +12,7 @@ import dev.sigmawalk.engine.data.StudyData;
 import dev.sigmawalk.engine.evidence.DifferenceTests;
 import dev.sigmawalk.engine.evidence.HacKernel;
 import dev.sigmawalk.engine.measures.PerformanceMeasures;
+import dev.sigmawalk.engine.measures.SeriesStats;
 import dev.sigmawalk.engine.measures.Summary;
 import dev.sigmawalk.engine.model.StrategyDefinition;
 import dev.sigmawalk.engine.run.PathResult;
@@ -118,7 +119,8 @@ public final class Runs {
 
     /**
      * The warnings of the results: what the residual diagnostics left out, then one line per path
-     * whose allocation failed at some rebalance and one per path with rebalance notes.
+     * whose allocation failed at some rebalance, one per path whose wealth was lost (a period
+     * return of −100 % or worse, Method §7) and one per path with rebalance notes.
      */
     public static List<String> warningsOfResults(RunResult<WindowEvidence> run) {
         Given.run(run);
@@ -131,6 +133,14 @@ public final class Runs {
                         + failed.size() + " of " + p.rebalances().size() + " rebalances (first " + first.date() + ": "
                         + first.failure().get() + "); at those rebalances the path kept its previous portfolio, or cash"
                         + " before its first one");
+            }
+            int ruin = SeriesStats.firstRuin(p.net());
+            if (ruin >= 0) {
+                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": its net return of " + p.net()[ruin]
+                        + " on " + run.dates()[ruin] + " loses the whole portfolio or more (short and leveraged"
+                        + " positions can lose more than the capital); its wealth is taken as gone from that date, so"
+                        + " its max drawdown is 100 % and its CAGR -100 %, while its mean return, volatility and Sharpe"
+                        + " ratio still average the period returns as they are");
             }
             long notes = p.rebalances().stream().filter(r -> !r.notes().isEmpty()).count();
             if (notes > 0) {

@@ -125,6 +125,33 @@ class DegenerateDataCliTest {
         assertTrue(manifest.contains("strategy 'sharpe', window 24: no portfolio formed at 2 of"), manifest);
     }
 
+    /**
+     * Mean-variance without bounds and with a risk aversion of 0.001 holds positions hundreds of
+     * times the capital, and a period loss beyond −100 % follows. From that row the product of
+     * 1 + R is no longer wealth (a second such loss would turn it positive), so the summary gives
+     * the ruin its own figures, max drawdown 1 and CAGR −1, instead of a drawdown of billions of
+     * percent and an empty CAGR, and the manifest names the date and return (Method §7).
+     */
+    @Test
+    void pathLosingMoreThanItsCapital_isRuin_inTheSummaryAndTheWarnings(@TempDir Path out) throws IOException {
+        Path study = study("geared.yaml", "market-monthly.csv", "  - name: geared", "    risk: shrinkage",
+                "    shrinkage_target: identity", "    objective: mean-variance", "    risk_aversion: 0.001",
+                "    expected_returns: historical");
+        Result r = sigmawalk("run", study.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(0, r.code(), r.err());
+        String[] first = Files.readAllLines(out.resolve("returns.csv")).stream().skip(1)
+                .map(l -> l.split(",", -1)).filter(c -> c[1].equals("geared") && Double.parseDouble(c[4]) <= -1)
+                .findFirst().orElseThrow();
+        String[] header = Files.readAllLines(out.resolve("summary.csv")).get(0).split(",", -1);
+        String[] row = Files.readAllLines(out.resolve("summary.csv")).stream().filter(l -> l.startsWith("geared,"))
+                .findFirst().orElseThrow().split(",", -1);
+        assertEquals("-1.0", row[List.of(header).indexOf("cagr")], "CAGR of a ruined path");
+        assertEquals("1.0", row[List.of(header).indexOf("max_drawdown")], "max drawdown of a ruined path");
+        String manifest = Files.readString(out.resolve("manifest.json"));
+        assertTrue(manifest.contains("strategy 'geared', window 24: its net return of " + first[4] + " on " + first[0]
+                + " loses the whole portfolio or more"), manifest);
+    }
+
     @Test
     void check_predictsTheSameWarnings_asTheRunRecords(@TempDir Path out) throws IOException {
         Path study = study("both.yaml", "flat-market.csv", "  - name: equal", "    objective: equal-weight");

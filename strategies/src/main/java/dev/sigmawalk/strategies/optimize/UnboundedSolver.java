@@ -2,6 +2,7 @@ package dev.sigmawalk.strategies.optimize;
 
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.function.IntFunction;
 
@@ -22,6 +23,12 @@ import java.util.function.IntFunction;
  * singular. The answer is verified by {@link KktCheck} before it is returned.
  */
 public final class UnboundedSolver {
+    /**
+     * Weights of this size lose the budget Σ w = 1 to rounding at the KKT tolerance (their
+     * sum's rounding error, about n · 1e-16 times the largest, exceeds 1e-9 from here on).
+     */
+    private static final double HUGE_WEIGHT = 1e6;
+
     private final SolverSettings settings;
 
     public UnboundedSolver(SolverSettings settings) {
@@ -90,11 +97,26 @@ public final class UnboundedSolver {
         return outcome(w, report, settings.kktTolerance());
     }
 
-    /** Optimal with every side FREE when the report holds, else Failed naming the residuals. */
+    /**
+     * Optimal with every side FREE when the report holds, else Failed naming the residuals and
+     * their likely cause: a budget lost to rounding beside weights of a million or more in size
+     * is the scale of the optimum itself (w = Q⁻¹(c + ν1) with Q tiny against c: mean-variance
+     * with a risk aversion near 0), not a singular matrix.
+     */
     static SolveOutcome outcome(double[] w, KktReport report, double tolerance) {
         if (!report.holds(tolerance)) {
+            double largest = 0;
+            for (double x : w) {
+                largest = Math.max(largest, Math.abs(x));
+            }
+            String cause = report.primalResidual() > tolerance && largest >= HUGE_WEIGHT
+                    ? "the optimum holds positions as large as " + String.format(Locale.ROOT, "%.3g", largest)
+                            + " times the capital, whose sum cannot be kept at 1 in double precision: the quadratic"
+                            + " term is tiny against the linear one (for mean-variance, a risk aversion far too small"
+                            + " for the expected returns; bounds or a larger risk aversion give a usable portfolio)"
+                    : "the matrix is nearly singular";
             return new SolveOutcome.Failed("KKT verification failed: primal residual " + report.primalResidual()
-                    + ", scaled dual residual " + report.dualResidual() + " (the matrix is nearly singular)");
+                    + ", scaled dual residual " + report.dualResidual() + " (" + cause + ")");
         }
         BoundSide[] sides = new BoundSide[w.length];
         Arrays.fill(sides, BoundSide.FREE);

@@ -15,6 +15,9 @@ import java.util.Arrays;
  * a zero matrix with one free weight) is then no obstacle.
  */
 final class WorkingSet {
+    /** Rounding of a sum of weights of order one, per term; see {@link #restoreBudget}. */
+    static final double BUDGET_ROUNDING = 1e-14;
+
     final QuadraticProblem problem;
     final int n;
     final double[] q;
@@ -174,7 +177,30 @@ final class WorkingSet {
         for (int r = 0; r < k; r++) {
             a[r] += nu * u[r];
         }
+        restoreBudget(a, k, 1 - pinnedSum);
         return a;
+    }
+
+    /**
+     * The exact subproblem solution sums to 1 − Σ pinned, but a + ν u adds two vectors as large as
+     * Q̃_FF⁻¹: when Q is tiny against c (mean-variance with a risk aversion near 0, a nearly linear
+     * program) they are many orders above the weights, and their cancellation leaves the budget off
+     * by their rounding (1e13 · 1e-16 ≈ 1e-3), far beyond the KKT tolerance. The excess is then
+     * spread evenly over the free weights, which moves the gradient by Q̃_FF times it: negligible
+     * exactly when Q̃ is small enough to cause it. An excess within the rounding of weights of order
+     * one ({@value #BUDGET_ROUNDING} per free weight) is left alone, so well-scaled problems keep the
+     * last bits the solve gave them.
+     *
+     * @param budget what the first k entries of x must sum to
+     */
+    static void restoreBudget(double[] x, int k, double budget) {
+        double excess = sum(x, k) - budget;
+        if (Math.abs(excess) > BUDGET_ROUNDING * k) {
+            double share = excess / k;
+            for (int r = 0; r < k; r++) {
+                x[r] -= share;
+            }
+        }
     }
 
     /** Σ_i a_i b_i over the full length. */

@@ -1,5 +1,7 @@
 package dev.sigmawalk.strategies.rules;
 
+import dev.sigmawalk.engine.study.Bounds;
+
 import java.util.Arrays;
 import java.util.List;
 
@@ -19,8 +21,9 @@ public record EqualWeight() implements PortfolioRule {
         }
         int n = input.size();
         if (input.bounds().isPresent() && !input.bounds().get().feasibleFor(n)) {
-            return new RuleOutcome.NotFormed(NAME + ": bounds " + input.bounds().get() + " cannot sum to 1 over "
-                    + n + " assets");
+            Bounds b = input.bounds().get();
+            return new RuleOutcome.NotFormed(NAME + ": bounds [" + b.lower() + ", " + b.upper() + "] cannot make " + n
+                    + " weights sum to 1; they need " + n + "·lower <= 1 <= " + n + "·upper");
         }
         double[] w = new double[n];
         Arrays.fill(w, 1.0 / n);

@@ -230,6 +230,27 @@ class ActiveSetSolverEdgeTest {
         assertWeights(expected, solver.solve(dense), EXACT);
     }
 
+    /**
+     * A nearly linear program: Q = 1e-12·Σ (mean-variance with a risk aversion of 1e-12) with
+     * Σ = diag(0.04, 0.01, 0.0225), c = μ = (0.010, 0.008, 0.006), w in [0, 0.4]. The two best
+     * expected returns take the cap and the budget leaves 0.2 for the third, which is free:
+     * ν = g3 = 1e-12·0.0045 − 0.006, and the caps' multipliers ν − g1 ≈ 0.004 and ν − g2 ≈ 0.002
+     * are positive (hand computation). The subproblem's solve runs through Q⁻¹ of size 1e13, so
+     * the free weight must come from the budget, not from that cancellation.
+     */
+    @Test
+    void nearlyLinearProgram_keepsTheBudgetExact() {
+        double[] sigma = {0.04, 0, 0, 0, 0.01, 0, 0, 0, 0.0225};
+        double[] q = new double[9];
+        for (int k = 0; k < 9; k++) {
+            q[k] = 1e-12 * sigma[k];
+        }
+        QuadraticProblem p = QuadraticProblem.uniformBounds(3, q, new double[] {0.010, 0.008, 0.006}, 0, 0.4);
+        assertWeights(new double[] {0.4, 0.4, 0.2}, solver.solve(p), EXACT);
+        BoundSide[] warm = {BoundSide.UPPER, BoundSide.UPPER, BoundSide.FREE};
+        assertWeights(new double[] {0.4, 0.4, 0.2}, solver.solve(p, warm), EXACT);
+    }
+
     /** No bounds at all: the active-set solver must agree with the closed form (same problem, two methods). */
     @Test
     void infiniteBounds_matchClosedForm() {

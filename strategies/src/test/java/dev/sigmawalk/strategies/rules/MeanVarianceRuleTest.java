@@ -69,6 +69,29 @@ class MeanVarianceRuleTest {
         assertEquals(0.2, x, 2e-6, "limit");
     }
 
+    /**
+     * λ = 1e-12 without bounds: x = (0.06 + 1e-14)/(5e-14) = 1.2e12 (the formula above), a
+     * position no double can hold to a budget of 1, so nothing is formed; the reason names the
+     * size and the cause instead of a singular matrix, which Σ is not.
+     */
+    @Test
+    void tinyRiskAversionWithoutBounds_isNotFormed_namingThePositionSize() {
+        RuleOutcome out = new MeanVariance(1e-12, settings).apply(input(new double[] {0.04, 0, 0, 0.01},
+                Optional.empty()), new WarmStart());
+        RuleOutcome.NotFormed none = assertInstanceOf(RuleOutcome.NotFormed.class, out);
+        assertTrue(none.reason().contains("the optimum holds positions as large as 1.20e+12 times the capital"),
+                none.reason());
+        assertTrue(!none.reason().contains("singular"), none.reason());
+    }
+
+    /** λ = 1e-12 with bounds [0, 0.7]: the peak at x = 1.2e12 is far beyond the cap, so x = 0.7 (hand reasoning). */
+    @Test
+    void tinyRiskAversionWithBounds_givesTheCap() {
+        RuleOutcome out = new MeanVariance(1e-12, settings).apply(input(new double[] {0.04, 0, 0, 0.01},
+                Optional.of(new Bounds(0, 0.7))), new WarmStart());
+        assertChosen(new double[] {0.7, 0.3}, out, EXACT);
+    }
+
     @Test
     void missingExpectedReturns_isNotFormed() {
         RuleInput input = new RuleInput(TWO, TestCovariances.dense(new double[] {0.04, 0, 0, 0.01}), null,
