@@ -4,9 +4,8 @@
 It walks forward long-only minimum variance under three risk models (the single-index model,
 the sample covariance and Ledoit-Wolf shrinkage toward the single-index target) over every
 window length, with the conventions of DEVELOPERS.md's Method section, and writes
-weights.csv and returns.csv in the product's columns. It exists to measure the product's speed
-against, and to check its weights from outside the product: see DEVELOPERS.md, "A numpy
-yardstick".
+weights.csv and returns.csv with sigmawalk's columns. It exists to measure sigmawalk's speed
+against, and to check its weights from outside it: see DEVELOPERS.md, "A numpy yardstick".
 
     python3 bench/peer/walk.py DATA --frequency daily --windows 500,1000 --every 21 \
         --bounds 0,0.02 --cost-bps 10 --out OUT
@@ -14,10 +13,8 @@ yardstick".
 Where the work goes, per window length L over n assets (w = n + 1 columns with the market):
   * rolling shifted sums s = sum d_t, D = sum d_t d_t' (d = excess return minus a fixed shift),
     moved by one BLAS product of the k new and k dropped rows per rebalance, 4 k w^2 flops;
-  * per-asset rolling power sums for the Ledoit-Wolf (2003) intensity, O(k w) per move, and one
-    L x w product with two vectors per rebalance for its row sums, O(L w);
-  * two read-only passes over D per rebalance (a dot product and a matrix-vector product) for the
-    intensity's sums over the sample matrix;
+  * for the Ledoit-Wolf (2003) intensity: per-asset rolling power sums, O(k w) per move; two
+    products of the window's L x w rows with a vector, O(L w); one read of D (its squared norm);
   * the single-index problem in closed form up to two unknowns, O(n) per round;
   * a primal-dual active-set solve for each dense model, warm-started from that path's previous
     active set: a Cholesky factor of the free block and O(n m) products per step, two or three
@@ -28,7 +25,6 @@ No n x n matrix is ever copied or formed besides D itself.
 import argparse
 import multiprocessing
 import os
-import re
 import sys
 import time
 
@@ -47,7 +43,7 @@ def _jobs_from_argv(argv):
 # the rolling sums are too thin for two BLAS threads to share well, and a process per window
 # keeps every core busy with its own window. The thread count must be fixed before numpy loads.
 if __name__ == "__main__" and _jobs_from_argv(sys.argv) != "1":
-    os.environ["OPENBLAS_NUM_THREADS"] = "1"
+    os.environ.setdefault("OPENBLAS_NUM_THREADS", "1")
 
 import numpy as np  # noqa: E402
 from scipy.linalg import blas, cho_factor, cho_solve, LinAlgError  # noqa: E402
@@ -66,32 +62,62 @@ SAME_AS_SAMPLE = 1e-24
 # ----------------------------------------------------------------------------------------------
 # Reading (Method §1)
 
-def read_table(path):
-    """A CSV of dates by columns: (header names, dates as strings, values with NaN for empty)."""
+def parse_rows(lines):
+    """The values of CSV lines with the first field (the date) left out; an empty cell (no return
+    that period) becomes NaN."""
+    flat = b",".join(line[line.index(b",") + 1:] for line in lines)
+    # ",," twice: the first pass leaves every other cell of a run of empty cells.
+    flat = flat.replace(b",,", b",nan,").replace(b",,", b",nan,")
+    if flat.startswith(b","):
+        flat = b"nan" + flat
+    if flat.endswith(b","):
+        flat += b"nan"
+    return np.fromstring(flat, sep=",")
+
+
+_LINES = []  # the lines being parsed, shared with forked workers
+
+
+def _parse_part(bounds):
+    return parse_rows(_LINES[bounds[0]:bounds[1]])
+
+
+def read_table(path, jobs=1):
+    """A CSV of dates by columns: (header names, dates as strings, values with NaN for empty),
+    parsed by `jobs` processes in row blocks."""
     with open(path, "rb") as f:
         raw = f.read()
+    if b"\r" in raw:
+        raw = raw.replace(b"\r", b"")
     header, body = raw.split(b"\n", 1)
     names = header.decode().strip().split(",")[1:]
-    # An empty cell means no return that period: give it a number numpy parses.
-    body = re.sub(rb",(?=,|\r?\n|\Z)", b",nan", body)
-    lines = [line for line in body.split(b"\n") if line.strip()]
+    lines = [line for line in body.split(b"\n") if line]
     dates = [line[:line.index(b",")].decode() for line in lines]
-    flat = b",".join(line[line.index(b",") + 1:].rstrip(b"\r") for line in lines)
-    values = np.fromstring(flat, sep=",")
+    if jobs > 1 and len(lines) >= 1000:
+        # Row blocks: this process parses the first while jobs - 1 forked workers parse the rest.
+        _LINES[:] = lines
+        cuts = np.linspace(0, len(lines), jobs + 1).astype(int)
+        with multiprocessing.get_context("fork").Pool(jobs - 1) as pool:
+            rest = pool.map_async(_parse_part, list(zip(cuts[1:-1], cuts[2:])))
+            first = _parse_part((cuts[0], cuts[1]))
+            values = np.concatenate([first] + rest.get())
+        _LINES.clear()
+    else:
+        values = parse_rows(lines)
     if values.size != len(lines) * len(names):
         sys.exit(f"{path}: expected {len(names)} values on each of {len(lines)} rows, read {values.size}")
     return names, dates, values.reshape(len(lines), len(names))
 
 
-def read_panel(folder, frequency):
-    assets, dates, r = read_table(os.path.join(folder, f"assets-{frequency}.csv"))
+def read_panel(folder, frequency, jobs=1):
+    assets, dates, r = read_table(os.path.join(folder, f"assets-{frequency}.csv"), jobs)
+    series = []
     for role in ("market", "riskfree"):
-        _, other, _ = read_table(os.path.join(folder, f"{role}-{frequency}.csv"))
+        _, other, values = read_table(os.path.join(folder, f"{role}-{frequency}.csv"))
         if other != dates:
             sys.exit(f"{role}-{frequency}.csv: its dates differ from the assets' dates")
-    _, _, market = read_table(os.path.join(folder, f"market-{frequency}.csv"))
-    _, _, rf = read_table(os.path.join(folder, f"riskfree-{frequency}.csv"))
-    return assets, dates, r, market[:, 0], rf[:, 0]
+        series.append(values[:, 0])
+    return assets, dates, r, series[0], series[1]
 
 
 # ----------------------------------------------------------------------------------------------
@@ -106,65 +132,87 @@ def schedule(rows, windows, every):
     return np.arange(tau0, last, every), last
 
 
-def run_lengths(values):
-    """run[t, i] = how many rows before t in a row equal row t's value (exactly), NaN never equal."""
-    run = np.zeros(values.shape, dtype=np.int32)
-    for t in range(1, values.shape[0]):
-        same = values[t] == values[t - 1]
-        run[t] = np.where(same, run[t - 1] + 1, 0)
-    return run
+def prefix_counts(flags):
+    """counts[t, i] = number of rows before t where flags[., i] holds (one leading row of zeros)."""
+    counts = np.zeros((flags.shape[0] + 1, flags.shape[1]), dtype=np.int32)
+    counts[1:] = flags
+    # In place on int32: much faster than a cumulative sum that converts from bool as it goes.
+    np.cumsum(counts[1:], axis=0, out=counts[1:])
+    return counts
+
+
+def changed(values):
+    """flags[t, i] = values[t, i] differs from values[t - 1, i] (exactly; the first row counts as a change)."""
+    flags = np.ones(values.shape, dtype=bool)
+    np.not_equal(values[1:], values[:-1], out=flags[1:])
+    return flags
 
 
 class Eligibility:
     """Assets with a return in every row of the window whose return and excess return both vary
-    there (a constant series has no risk to estimate and is left out)."""
+    there (a constant series has no risk to estimate and is left out). Both tests are differences
+    of prefix counts, O(n) per window: of missing returns, and of rows whose value differs from
+    the row before (compared exactly)."""
 
     def __init__(self, r, excess):
-        missing = np.isnan(r)
-        self.missing_before = np.vstack([np.zeros((1, r.shape[1]), np.int32),
-                                         np.cumsum(missing, axis=0, dtype=np.int32)])
-        self.raw_run = run_lengths(r)
-        self.excess_run = run_lengths(excess)
+        self.missing = prefix_counts(np.isnan(r))
+        self.raw_changes = prefix_counts(changed(r))
+        self.excess_changes = prefix_counts(changed(excess))
 
     def at(self, tau, length):
-        """Boolean mask over the panel's columns."""
-        complete = self.missing_before[tau + 1] == self.missing_before[tau + 1 - length]
-        constant = (self.raw_run[tau] >= length - 1) | (self.excess_run[tau] >= length - 1)
-        return complete & ~constant
+        """Boolean mask over the panel's columns for the window of rows tau-L+1..tau."""
+        first = tau - length + 1
+        complete = self.missing[tau + 1] == self.missing[first]
+        # Changes within rows first+1..tau: none means the series is constant in the window.
+        raw_varies = self.raw_changes[tau + 1] > self.raw_changes[first + 1]
+        excess_varies = self.excess_changes[tau + 1] > self.excess_changes[first + 1]
+        return complete & raw_varies & excess_varies
 
 
 # ----------------------------------------------------------------------------------------------
 # Rolling window sums (Method §3 moments, divisor L - 1)
 
+class Deviations:
+    """d_t = z_t - c for every row, with z the excess returns of every asset and the market as the
+    last column, and c a fixed per-column shift: the column means over the first window of the
+    longest length (present values only; 0 for a column with none). With d close to zero-mean in
+    every window, s/L stays small and D - s s'/L does not cancel. A missing return gives d = 0:
+    such an asset is not eligible in that window, so its sums are never used. Computed once and
+    shared, read-only, by every window length."""
+
+    def __init__(self, z, first, last):
+        """z: the excess returns, overwritten with the deviations (no second copy of the panel)."""
+        window = z[first:last + 1]
+        present = ~np.isnan(window)
+        shift = np.where(present, window, 0.0).sum(axis=0) / np.maximum(1, present.sum(axis=0))
+        z -= shift
+        self.d = np.nan_to_num(z, copy=False, nan=0.0)
+        # Per-row sums of d^2 over the asset columns, for the intensity's q_t.
+        self.row_squares = np.einsum("ij,ij->i", self.d[:, :-1], self.d[:, :-1])
+
+
 class RollingSums:
-    """Sums over rows tau-L+1..tau of d_t = z_t - c, with z the excess returns of every asset and
-    the market as the last column (a missing return counts as 0; such an asset is not eligible
-    in that window, so its sums are never used), and c a fixed per-column shift (the means of
-    the first window), so that s/L is small and D - s s'/L does not cancel:
+    """Sums over rows tau-L+1..tau of the deviations d_t (see Deviations):
       s = sum d_t, D = sum d_t d_t' (w x w, both triangles, Fortran order for BLAS),
     and per column the power sums the Ledoit-Wolf intensity needs, with e = the market's d:
       p2 = sum d^2, p3 = sum d^3, p4 = sum d^4, q2 = sum e d^2, q3 = sum e d^3,
       t1 = sum e^2 d, t2 = sum e^2 d^2.
     A move of k rows adds the new rows and removes the dropped ones: one dgemm of the 2k rows,
-    D += [new; old]' [new; -old]."""
+    D += [new; old]' [new; -old]. The sums are never rebuilt: after the 143 moves of the large
+    benchmark case the centred sums of the eligible columns of the 250-row window differ from a
+    fresh build by a few units of rounding (at most 5e-15 relative to sqrt(C_ii C_jj))."""
 
-    def __init__(self, z, length, first_tau):
-        self.z = z
+    def __init__(self, deviations, length, first_tau):
+        self.d = deviations.d
+        self.row_squares = deviations.row_squares
         self.length = length
         first = first_tau - length + 1
-        window = z[first:first_tau + 1]
-        present = ~np.isnan(window)
-        self.shift = np.where(present, window, 0.0).sum(axis=0) / np.maximum(1, present.sum(axis=0))
-        self.d = z - self.shift
-        self.d[np.isnan(z)] = 0.0
-        w = z.shape[1]
+        w = self.d.shape[1]
         self.sum = np.zeros(w)
         self.cross = np.zeros((w, w), order="F")
         self.powers = np.zeros((7, w))
         self._add(self.d[first:first_tau + 1], np.ones(length))
         self.tau = first_tau
-        # Per-row sums of d^2 over the asset columns, for the intensity's q_t (see below).
-        self.row_squares = np.einsum("ij,ij->i", self.d[:, :-1], self.d[:, :-1])
 
     def _add(self, rows, signs):
         signed = rows * signs[:, None]
@@ -335,9 +383,9 @@ def single_index_bisection(s, beta, d, hi):
 
 def shrinkage_intensity(mom, beta_e):
     """delta = max(0, min(1, kappa/L)), kappa = (pi - rho)/gamma, on the demeaned window with
-    divisor-L moments (Method §3). Every O(n^2) sum over S comes from two read-only passes over
-    D (a dot product and a matrix-vector product) and the O(L n) sums from the rolling power
-    sums and one product of the window's rows with two vectors:
+    divisor-L moments (Method §3). The one O(n^2) sum, ||S||^2, is a dot product of D with
+    itself; the rest comes from the rolling power sums and two products of the window's rows
+    with a vector, O(L n):
       pi   = 1/L sum_t (sum_i xt_ti^2)^2 - sum_ij s_ij^2,
       rho  = sum_i pi_ii + sum_{i!=j} rho_ij, with the paper's appendix summed over i != j:
              sum_{i!=j} rho_ij = (2/s00) 1/L sum_t yt_t sum_i xt_ti^2 (c_t - s_i0 xt_ti)
@@ -353,45 +401,45 @@ def shrinkage_intensity(mom, beta_e):
     D = sums.cross
 
     # Sums over C_EE (units of C): ||C_EE||^2 by excluding the ineligible columns X from ||C_AA||^2.
-    beta = np.zeros(m + 1)
-    beta[cols] = beta_e
     excluded = np.flatnonzero(~mom.mask)
     flat = D.ravel(order="K")
     norm_d = flat @ flat                     # sum over all w x w entries of D^2
-    sm = s[m]
     # ||D_AA||^2: drop the market's row and column.
     norm_d -= 2.0 * (D[:, m] @ D[:, m]) - D[m, m] ** 2
     if excluded.size:
         dx = D[:m, excluded]
         norm_d -= 2.0 * np.einsum("ij,ij->", dx, dx) - np.einsum("ij,ij->", dx[excluded], dx[excluded])
-    e = np.zeros(m + 1)
-    e[cols] = 1.0
-    se = s * e
-    d_se = D @ se
-    d_beta = D @ beta
-    # ||C_EE||^2 = ||D_EE||^2 - 2/L s_E'D_EE s_E + (s_E's_E)^2/L^2
-    norm_c = norm_d - 2.0 / L * (se @ d_se) + (se @ se) ** 2 / L ** 2
-    beta_c_beta = beta @ d_beta - (s @ beta) ** 2 / L
+    cmm = mom.var_m
+    # The window's rows times two vectors on the eligible assets: a_i = s_i0 (divisor L, equal
+    # to b_i C_mm / L) and dm_i = x_bar_i - shift_i = s_i / L (0 off the eligible set).
+    a = np.zeros(m + 1)
+    a[cols] = mom.cov_m[cols] / L
+    dm = np.zeros(m + 1)
+    dm[cols] = delta_mean[cols]
+    win = sums.window()
+    # Two matrix-vector products rather than one product with an L x 2 matrix: BLAS is much
+    # faster on the former.
+    wa = win @ a
+    wd = win @ dm
+    # Quadratic forms in D_EE from the same products, as D = W'W over the window's rows W:
+    # b'D b = |W b|^2 with b = a L / C_mm, and s_E'D s_E = |W s_E|^2 = L^2 |W dm|^2.
+    beta_d_beta = (wa @ wa) * (L / cmm) ** 2
+    # ||C_EE||^2 = ||D_EE||^2 - 2/L s_E'D_EE s_E + (s_E's_E)^2/L^2, with s_E = L dm
+    norm_c = norm_d - 2.0 * L * (wd @ wd) + (L * (dm @ dm)) ** 2
+    beta_c_beta = beta_d_beta - (s[cols] @ beta_e) ** 2 / L
     cii = mom.diag[cols]
     diag_sq = cii @ cii
     b2 = beta_e * beta_e
-    cmm = mom.var_m
     off_products = cmm * (beta_c_beta - b2 @ cii)                 # sum_{i!=j} f_ij c_ij
     gamma_c = (norm_c - diag_sq) - 2.0 * off_products + cmm * cmm * ((b2.sum()) ** 2 - b2 @ b2)
 
     # Row sums over the centred window xt = d - delta_mean, yt = e_t - delta_m.
-    a = np.zeros(m + 1)
-    a[cols] = mom.cov_m[cols] / L            # s_i0 with divisor L
-    dm = np.zeros(m + 1)
-    dm[cols] = delta_mean[cols]
-    win = sums.window()
-    prods = win @ np.stack([a, dm], axis=1)
-    c_t = prods[:, 0] - a @ delta_mean
+    c_t = wa - a @ delta_mean
     rows = sums.row_squares[sums.tau - L + 1:sums.tau + 1]
     if excluded.size:
         wx = win[:, excluded]
         rows = rows - np.einsum("ij,ij->i", wx, wx)
-    q_t = rows - 2.0 * prods[:, 1] + dm @ dm
+    q_t = rows - 2.0 * wd + dm @ dm
     y_t = win[:, m] - delta_mean[m]
 
     # Per-asset centred sums from the power sums (binomial expansion around the window mean).
@@ -467,12 +515,14 @@ class DenseModel:
 def solve_partition(model, side, hi):
     """The free weights of the equality-constrained subproblem with the others at their bounds:
     Q_FF w_F = nu 1 - Q_FU hi, 1'w_F = 1 - hi |U|, by one Cholesky factor of Q_FF and the
-    Schur complement nu = (1 - hi|U| - 1'Q_FF^-1 r) / 1'Q_FF^-1 1."""
+    Schur complement nu = (1 - hi|U| - 1'Q_FF^-1 r) / 1'Q_FF^-1 1. Returns (w, nu, Q w), or None
+    when no weight is free or Q_FF is not positive definite."""
     free = np.flatnonzero(side == FREE)
     upper = np.flatnonzero(side == UPPER)
     if free.size == 0:
         return None
-    r = -model.times(upper, np.full(upper.size, hi))[free] if upper.size else np.zeros(free.size)
+    pinned = model.times(upper, np.full(upper.size, hi)) if upper.size else np.zeros(side.size)
+    r = -pinned[free]
     try:
         factor = cho_factor(model.block(free), lower=False, check_finite=False)
     except LinAlgError:
@@ -481,7 +531,9 @@ def solve_partition(model, side, hi):
     nu = (1.0 - hi * upper.size - sol[:, 0].sum()) / sol[:, 1].sum()
     w = np.where(side == UPPER, hi, 0.0)
     w[free] = sol[:, 0] + nu * sol[:, 1]
-    return w, nu
+    # The gradient Q w, reusing the capped weights' part.
+    g = pinned + model.times(free, w[free])
+    return w, nu, g
 
 
 def gradient(model, w):
@@ -514,8 +566,7 @@ def pdas(model, guess, hi):
         solved = solve_partition(model, side, hi)
         if solved is None:
             return None
-        w, nu = solved
-        g = gradient(model, w)
+        w, nu, g = solved
         z = g - nu
         tol = DROP * max(np.abs(g).max(), 1e-300)
         nxt = side.copy()
@@ -574,6 +625,7 @@ def primal_active_set(model, start, hi):
 
 
 def dense_min_variance(model, guess, feasible, hi):
+    """The exact optimum (Method §5): PDAS from the guess, else the primal loop from a feasible point."""
     solved = pdas(model, guess, hi)
     if solved is not None:
         return solved, False
@@ -625,16 +677,20 @@ class Book:
 # ----------------------------------------------------------------------------------------------
 # The walk
 
-def walk_window(length, taus, last, r, rf, z, elig, hi, cost_bps):
-    """Every rebalance of one window length: weights and held returns of the three strategies."""
-    stats = dict.fromkeys(("moments", "single_index", "intensity", "dense_qp"), 0.0)
+def walk_window(length, taus, last, r, rf, deviations, elig, hi, cost_bps, dates, assets):
+    """Every rebalance of one window length: the weights.csv and returns.csv rows of the three
+    strategies (formatted here, so parallel workers also share the formatting) and timings."""
+    stats = dict.fromkeys(("moments", "single_index", "intensity", "dense_qp", "books_and_rows"), 0.0)
     stats["fallbacks"] = 0
     n = r.shape[1]
-    sums = RollingSums(z, length, taus[0])
+    sums = RollingSums(deviations, length, taus[0])
     books = [Book(n, cost_bps) for _ in STRATEGIES]
     previous = [None, None]         # per dense path: sides by panel column
+    # Row endings "asset,weight\n" made once for the two weights most assets take (0 and the cap).
+    at_zero = np.array([f"{a},{0.0!r}\n" for a in assets], dtype=object)
+    at_cap = np.array([f"{a},{hi!r}\n" for a in assets], dtype=object)
     weights = {name: [] for name in STRATEGIES}
-    returns = {name: ([], []) for name in STRATEGIES}
+    returns = {name: [] for name in STRATEGIES}
     for j, tau in enumerate(taus):
         t0 = time.perf_counter()
         sums.move_to(tau)
@@ -649,6 +705,8 @@ def walk_window(length, taus, last, r, rf, z, elig, hi, cost_bps):
         t3 = time.perf_counter()
         chosen = [w_si]
         for k, d in enumerate((0.0, delta)):
+            # Warm start: the path's previous active set, an asset new to the window at 0; at the
+            # first rebalance, the single-index solution's partition of the same window.
             if previous[k] is None:
                 guess = sides_of(w_si, hi)
             else:
@@ -666,12 +724,23 @@ def walk_window(length, taus, last, r, rf, z, elig, hi, cost_bps):
         stats["dense_qp"] += t4 - t3
         end = taus[j + 1] if j + 1 < len(taus) else last
         for k, name in enumerate(STRATEGIES):
-            weights[name].append((tau, cols, chosen[k]))
+            weights[name].append(weight_rows(f"{dates[tau]},{name},{length},", cols, chosen[k], hi, assets,
+                                             at_zero, at_cap))
             cost = books[k].rebalance(cols, chosen[k])
             gross, net = books[k].hold(r[tau + 1:end + 1], rf[tau + 1:end + 1], cost)
-            returns[name][0].append(gross)
-            returns[name][1].append(net)
-    return weights, returns, stats
+            returns[name].append("".join(f"{dates[t]},{name},{length},{g!r},{v!r}\n"
+                                         for t, g, v in zip(range(tau + 1, end + 1), gross.tolist(), net.tolist())))
+        stats["books_and_rows"] += time.perf_counter() - t4
+    return ({name: "".join(weights[name]) for name in STRATEGIES},
+            {name: "".join(returns[name]) for name in STRATEGIES}, stats)
+
+
+def weight_rows(prefix, cols, w, hi, assets, at_zero, at_cap):
+    """The weights.csv rows of one rebalance: prefix + "asset,weight\n" for every eligible asset."""
+    tails = np.where(w == 0.0, at_zero[cols], at_cap[cols])
+    for k in np.flatnonzero((w != 0.0) & (w != hi)):
+        tails[k] = f"{assets[cols[k]]},{float(w[k])!r}\n"
+    return prefix + prefix.join(tails.tolist())
 
 
 # The panel and the study, shared with forked workers (read-only; set once before the pool starts).
@@ -680,31 +749,26 @@ _STUDY = {}
 
 def _walk_one(length):
     st = _STUDY
-    return walk_window(length, st["taus"], st["last"], st["r"], st["rf"], st["z"], st["elig"], st["hi"],
-                       st["cost_bps"])
+    return walk_window(length, st["taus"], st["last"], st["r"], st["rf"], st["deviations"], st["elig"], st["hi"],
+                       st["cost_bps"], st["dates"], st["assets"])
 
 
-def write_outputs(out, assets, dates, windows, results, market_rows, first_held):
+def write_outputs(out, dates, windows, results, market, first_held):
+    """weights.csv and returns.csv: every window, strategy by strategy, in the study's order."""
     os.makedirs(out, exist_ok=True)
-    names = np.array(assets)
     with open(os.path.join(out, "weights.csv"), "w") as f:
         f.write("date,strategy,window,asset,weight\n")
         for length in windows:
-            weights = results[length][0]
             for name in STRATEGIES:
-                for tau, cols, w in weights[name]:
-                    prefix = f"{dates[tau]},{name},{length},"
-                    f.write("".join(f"{prefix}{a},{v!r}\n" for a, v in zip(names[cols], w.tolist())))
+                f.write(results[length][0][name])
     with open(os.path.join(out, "returns.csv"), "w") as f:
         f.write("date,strategy,window,gross_return,net_return\n")
-        held_dates = dates[first_held:]
         for length in windows:
-            returns = results[length][1]
             for name in STRATEGIES:
-                gross = np.concatenate(returns[name][0]).tolist()
-                net = np.concatenate(returns[name][1]).tolist()
-                f.write("".join(f"{d},{name},{length},{g!r},{v!r}\n" for d, g, v in zip(held_dates, gross, net)))
-        f.write("".join(f"{d},market,,{v!r},{v!r}\n" for d, v in zip(held_dates, market_rows.tolist())))
+                f.write(results[length][1][name])
+        # The market as the benchmark row (Method §5): gross = net = its own return.
+        f.write("".join(f"{dates[t]},market,,{v!r},{v!r}\n"
+                        for t, v in zip(range(first_held, len(dates)), market[first_held:].tolist())))
 
 
 def main(argv=None):
@@ -726,20 +790,31 @@ def main(argv=None):
     if lo != 0.0 or not 0.0 < hi:
         sys.exit("bounds: this implementation solves the long-only problem, 0 <= w <= HI")
 
-    stats = dict.fromkeys(("read", "eligibility", "walk", "write"), 0.0)
+    stats = dict.fromkeys(("read", "prepare", "walk", "write"), 0.0)
     t = time.perf_counter()
-    assets, dates, r, market, rf = read_panel(args.data, args.frequency)
+    assets, dates, r, market, rf = read_panel(args.data, args.frequency, args.jobs)
     stats["read"] = time.perf_counter() - t
     if hi * r.shape[1] < 1.0:
         sys.exit(f"bounds: {r.shape[1]} assets at most {hi} each cannot sum to 1")
     taus, last = schedule(len(dates), windows, args.every)
+    first_used = taus[0] - max(windows) + 1
+    for role, series in (("market", market), ("riskfree", rf)):
+        gaps = np.flatnonzero(np.isnan(series[first_used:]))
+        if gaps.size:
+            sys.exit(f"{role}-{args.frequency}.csv: no value on {dates[first_used + gaps[0]]}; it must be"
+                     f" complete from {dates[first_used]} on (Method §1)")
     t = time.perf_counter()
-    excess = r - rf[:, None]
-    z = np.column_stack([excess, market - rf])      # Method §1: excess returns, market last
-    elig = Eligibility(r, excess)
-    stats["eligibility"] = time.perf_counter() - t
+    # Method §1: excess returns of the assets, the market's last.
+    z = np.empty((r.shape[0], r.shape[1] + 1))
+    np.subtract(r, rf[:, None], out=z[:, :-1])
+    z[:, -1] = market - rf
+    elig = Eligibility(r, z[:, :-1])
+    deviations = Deviations(z, first_used, taus[0])   # takes z over
+    del z
+    stats["prepare"] = time.perf_counter() - t
     t = time.perf_counter()
-    _STUDY.update(taus=taus, last=last, r=r, rf=rf, z=z, elig=elig, hi=hi, cost_bps=args.cost_bps)
+    _STUDY.update(taus=taus, last=last, r=r, rf=rf, deviations=deviations, elig=elig, hi=hi, cost_bps=args.cost_bps, dates=dates,
+                  assets=assets)
     # Longest windows first: they cost the most, so the pool ends with the short ones.
     order = sorted(windows, reverse=True)
     jobs = min(args.jobs, len(windows))
@@ -754,10 +829,11 @@ def main(argv=None):
         for key, value in results[length][2].items():
             stats[key] = stats.get(key, 0) + value
     t = time.perf_counter()
-    write_outputs(args.out, assets, dates, windows, results, market[taus[0] + 1:], taus[0] + 1)
+    write_outputs(args.out, dates, windows, results, market, taus[0] + 1)
     stats["write"] = time.perf_counter() - t
-    phases = ", ".join(f"{k} {stats[k]:.2f}" for k in ("read", "eligibility", "walk", "write"))
-    inside = ", ".join(f"{k} {stats[k]:.2f}" for k in ("moments", "single_index", "intensity", "dense_qp"))
+    phases = ", ".join(f"{k} {stats[k]:.2f}" for k in ("read", "prepare", "walk", "write"))
+    inside = ", ".join(f"{k} {stats[k]:.2f}" for k in ("moments", "single_index", "intensity", "dense_qp",
+                                                           "books_and_rows"))
     print(f"walk.py: phases (s) {phases}; inside the walk, summed over windows (s) {inside};"
           f" fallbacks to the primal loop {stats['fallbacks']}", file=sys.stderr)
 
