@@ -613,7 +613,12 @@ def primal_active_set(model, start, hi):
                 continue
             w[free] = target[free]
         g = gradient(model, w)
-        nu = g[free].mean() if free.size else np.median(g)
+        if free.size:
+            nu = g[free].mean()
+        else:
+            # A vertex: any nu between the capped weights' largest gradient and the zero weights'
+            # smallest satisfies the KKT conditions; the midpoint shows the worse violation.
+            nu = 0.5 * (g[side == LOWER].min(initial=np.inf) + g[side == UPPER].max(initial=-np.inf))
         z = np.where(side == LOWER, g - nu, np.where(side == UPPER, nu - g, 0.0))
         worst = int(np.argmin(z))
         if z[worst] >= -DROP * max(np.abs(g).max(), 1e-300):
