@@ -1,15 +1,16 @@
 package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.DecimalSpelling;
+import java.time.LocalDate;
 import java.util.Locale;
 import java.util.Set;
 import java.util.regex.Pattern;
 
 /**
  * What a refused cell most likely is, said after the refusal: the forms spreadsheet and database
- * exports write that intake does not read (a percent sign, a decimal comma, an error or
- * missing-value marker, a time of day, a day-first or month-first date). Each hint names the
- * fix; a cell that matches none gets no hint. The markers are common practice in spreadsheet and
+ * exports write that intake does not read (a percent sign, a decimal comma, a thousands
+ * separator, an error or missing-value marker, a time of day, a day-first or month-first date, a
+ * serial day number). Each hint names the fix; a cell that matches none gets no hint. The markers are common practice in spreadsheet and
  * statistics-package exports, listed from memory.
  */
 final class CellHints {
@@ -19,6 +20,17 @@ final class CellHints {
     private static final Pattern TIME_OF_DAY = Pattern.compile("\\d{4}-\\d{2}-\\d{2}[ T]\\d{1,2}:\\d{2}(:\\d{2}(\\.\\d+)?)?Z?");
     private static final Pattern DAY_MONTH_YEAR = Pattern.compile("\\d{1,2}[/.\\-]\\d{1,2}[/.\\-]\\d{2,4}");
     private static final Pattern COMPACT = Pattern.compile("\\d{8}");
+    private static final Pattern SERIAL = Pattern.compile("\\d{5}");
+    /** Digits grouped in threes by commas, with an optional '.' fraction: 10,190.83 or 1,234,567. */
+    private static final Pattern THOUSANDS = Pattern.compile("[+-]?\\d{1,3}(,\\d{3})+(\\.\\d+)?");
+    /**
+     * Day 0 of the serial day numbers spreadsheets store dates as (the common 1900 date system,
+     * whose day 60 is a 29 February 1900 that never was, so later days count from 1899-12-30);
+     * from memory. Only numbers between the two limits (1954-10-03 to 2119-01-11) get the hint.
+     */
+    private static final LocalDate SERIAL_EPOCH = LocalDate.of(1899, 12, 30);
+    private static final int SERIAL_FIRST = 20_000;
+    private static final int SERIAL_LAST = 80_000;
 
     private CellHints() {
     }
@@ -31,6 +43,9 @@ final class CellHints {
         }
         if (t.endsWith("%") && DecimalSpelling.isPlain(t.substring(0, t.length() - 1).strip())) {
             return "; a percent sign is not read: write returns as decimals (0.039 for 3.9 %)";
+        }
+        if (THOUSANDS.matcher(t).matches() && (t.indexOf(',') != t.lastIndexOf(',') || t.indexOf('.') > 0)) {
+            return "; a thousands separator is not read: write the number without it, as " + t.replace(",", "");
         }
         if (t.indexOf(',') > 0 && t.indexOf(',') == t.lastIndexOf(',') && DecimalSpelling.isPlain(t.replace(',', '.'))) {
             return "; a decimal comma is not read: write '.' as the decimal point, with no thousands separator";
@@ -62,6 +77,13 @@ final class CellHints {
         if (DAY_MONTH_YEAR.matcher(t).matches()) {
             return "; in a date such as '" + t + "' the order of day and month cannot be told for sure: re-save the"
                     + " column with the format YYYY-MM-DD";
+        }
+        if (SERIAL.matcher(t).matches()) {
+            int days = Integer.parseInt(t);
+            if (days >= SERIAL_FIRST && days <= SERIAL_LAST) {
+                return "; it looks like a spreadsheet's serial day number (days since 1899-12-30, here "
+                        + SERIAL_EPOCH.plusDays(days) + "): format the date column as YYYY-MM-DD before saving";
+            }
         }
         if (COMPACT.matcher(t).matches()) {
             return "; write it with dashes, as " + t.substring(0, 4) + "-" + t.substring(4, 6) + "-" + t.substring(6);

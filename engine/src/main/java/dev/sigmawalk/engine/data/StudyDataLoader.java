@@ -17,6 +17,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
@@ -50,6 +51,9 @@ final class StudyDataLoader {
                 : Optional.of(series(RISK_FREE, spec.riskFree(), table, ValueKind.RETURNS));
         boolean inferred = spec.periodsPerYear().isEmpty();
         int periods = inferred ? inferPeriods(table) : spec.periodsPerYear().getAsInt();
+        if (!inferred && table.rows() >= 2) {
+            warnPeriodsAgainstDates(table, periods);
+        }
 
         int offset = ValueConversion.offset(spec.values());
         int panelRows = table.rows() - offset;
@@ -141,6 +145,26 @@ final class StudyDataLoader {
                     "one date cannot show how far apart the periods are; set data.periods_per_year");
         }
         return PeriodsPerYear.infer(table.dates());
+    }
+
+    /**
+     * A given {@code periods_per_year} that is more than twice, or less than half, what the dates'
+     * spacing gives (Method §1) scales every annualised figure by the wrong factor (volatility by
+     * its square root, a CAGR through its exponent) and converts an annual risk-free rate with it,
+     * silently: most often a daily figure kept from another study. A value near the inferred one
+     * (260 against 252, 13 against 12) is a user's deliberate choice and draws nothing.
+     */
+    private void warnPeriodsAgainstDates(WideTable table, int given) {
+        double days = PeriodsPerYear.medianSpacingDays(table.dates());
+        int implied = PeriodsPerYear.fromMedianSpacing(days);
+        if (given > 2 * implied || 2 * given < implied) {
+            warnings.add(String.format(Locale.ROOT, "data.periods_per_year: %d is given, but the dates of %s are a"
+                    + " median %s days apart, which is %d periods a year; every annualised figure (mean return,"
+                    + " volatility, Sharpe ratio, CAGR, tracking error) and the conversion of an annual risk-free"
+                    + " rate use the given %d: check the value, or leave the key out to infer it",
+                    given, table.file().getFileName(), days == Math.rint(days) ? String.valueOf((long) days)
+                            : String.valueOf(days), implied, given));
+        }
     }
 
     /** The columns that are assets: all but the market's and risk-free's own columns. */

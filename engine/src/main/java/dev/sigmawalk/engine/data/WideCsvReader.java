@@ -20,8 +20,8 @@ import java.util.Set;
  * {@code double[]}, with no string per cell, while {@link ByteChunks} takes the file's SHA-256
  * on the way. Only the header line, a line holding a quoted cell and a faulty cell go through
  * text. Accepted as spreadsheets export them: a UTF-8 byte-order mark, LF, CRLF or CR line ends,
- * blanks around cells, quoted cells; blank lines are skipped but counted, so every line number
- * is the one a text editor shows.
+ * blanks around cells, quoted cells; blank lines, and lines of nothing but commas, are skipped
+ * but counted, so every line number is the one a text editor shows.
  */
 final class WideCsvReader {
     private static final String DATE = "date";
@@ -194,6 +194,21 @@ final class WideCsvReader {
         int ds = trimStart(b, s, p);
         int de = trimEnd(b, ds, p);
         boolean lineEnds = p == limit || b[p] != ',';
+        if (ds == de && !lineEnds) {
+            // A row of nothing but separators, as a spreadsheet writes below its data where the
+            // sheet's formatting reaches further: no cell to read, so skipped like a blank line.
+            int q = p;
+            while (q < limit && (b[q] == ',' || b[q] == ' ' || b[q] == '\t')) {
+                q++;
+            }
+            if (q == limit && !last) {
+                return MORE;
+            }
+            if (q == limit || b[q] == '\n' || b[q] == '\r') {
+                p = q;
+                lineEnds = true;
+            }
+        }
         if (lineEnds && ds == de) {
             int next = consumeLineEnd(p);
             if (next == MORE) {
@@ -370,8 +385,13 @@ final class WideCsvReader {
         for (int j = 1; j < header.size(); j++) {
             String name = header.get(j);
             if (name.isEmpty()) {
+                boolean trailing = header.subList(j, header.size()).stream().allMatch(String::isEmpty);
                 throw new InputException(new InputException.Location(file, 1, null),
-                        "header cell " + (j + 1) + " is empty; every column needs a name");
+                        "header cell " + (j + 1) + " is empty; every column needs a name"
+                                + (trailing ? "; the header ends in " + (header.size() - j) + " empty cell"
+                                        + (header.size() - j == 1 ? "" : "s") + ", as a spreadsheet writes when empty"
+                                        + " columns beside the data were once used or formatted: delete those columns"
+                                        + " and save again" : ""));
             }
             Names.requireInert(name, file, 1, null, "column");
             if (!seen.add(name)) {

@@ -76,9 +76,20 @@ class CellsTest {
             assertEquals("; a decimal comma is not read: write '.' as the decimal point, with no thousands separator",
                     CellHints.number(comma), comma);
         }
-        for (String plain : new String[] {"abc", "1e", "--1", "0x10", "1,234,567", ",5", "Infinity"}) {
+        for (String plain : new String[] {"abc", "1e", "--1", "0x10", "1,23,567", ",5", "Infinity"}) {
             assertEquals("", CellHints.number(plain), plain);
         }
+    }
+
+    /** Prices exported with thousands separators: the hint gives the number as it must be written. */
+    @Test
+    void thousandsSeparators_carryTheNumberWithoutThem() {
+        assertEquals("; a thousands separator is not read: write the number without it, as 10190.83",
+                CellHints.number("10,190.83"));
+        assertEquals("; a thousands separator is not read: write the number without it, as 1234567",
+                CellHints.number("1,234,567"));
+        assertEquals("; a thousands separator is not read: write the number without it, as -1234.5",
+                CellHints.number("-1,234.5"));
     }
 
     /** Characters a spreadsheet or word processor puts into a number that look like ASCII ones or like nothing. */
@@ -105,6 +116,18 @@ class CellsTest {
         assertEquals("; write it with dashes, as 2020-01-31", CellHints.date("20200131"));
         assertEquals("", CellHints.date("2020-1-31"));
         assertEquals("", CellHints.date("Jan 31 2020"));
+    }
+
+    /**
+     * A date column saved as numbers: 40209 days after 1899-12-30 is 2010-01-31 (Python's
+     * datetime.date(1899, 12, 30) + timedelta(40209)); numbers outside 20 000..80 000 get no hint.
+     */
+    @Test
+    void spreadsheetSerialDayNumber_isNamedWithItsDate() {
+        assertEquals("; it looks like a spreadsheet's serial day number (days since 1899-12-30, here 2010-01-31):"
+                + " format the date column as YYYY-MM-DD before saving", CellHints.date("40209"));
+        assertEquals("", CellHints.date("12345"));
+        assertEquals("", CellHints.date("90000"));
     }
 
     @Test

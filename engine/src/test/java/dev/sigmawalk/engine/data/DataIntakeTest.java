@@ -138,6 +138,59 @@ class DataIntakeTest {
         assertTrue(w.get(0).startsWith("assets.csv line 5, column 'A01': a return of 6.5 is above +500 %"), w.get(0));
     }
 
+    /**
+     * Rows of nothing but commas, as a spreadsheet writes below its data (and sometimes between
+     * blocks of it), carry no cell: they are skipped like blank lines, and the lines after them
+     * keep the numbers an editor shows (the faulty cell below sits on line 11).
+     */
+    @Test
+    void rowsOfOnlyCommas_areSkippedLikeBlankLines() {
+        String assets = StudyFixture.ASSETS.replace("2020-05-31,", ",,,\n , ,\n2020-05-31,") + ",,,\n,,,\n";
+        StudyData plain = new StudyFixture(dir).load();
+        StudyData exported = new StudyFixture(dir).write("assets.csv", assets).load();
+        assertEquals(plain.panel().rows(), exported.panel().rows());
+        for (int t = 0; t < plain.panel().rows(); t++) {
+            for (int j = 0; j < 3; j++) {
+                assertEquals(plain.panel().value(t, j), exported.panel().value(t, j), 0.0, "row " + t + " asset " + j);
+            }
+        }
+        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir)
+                .write("assets.csv", assets.replace("2020-08-31,0.03", "2020-08-31,x")).load());
+        assertTrue(e.getMessage().startsWith("assets.csv line 11, column 'A01': 'x' is not a number"), e.getMessage());
+    }
+
+    /** Empty columns after the data make empty header cells: refused, with what they are and the fix. */
+    @Test
+    void trailingEmptyHeaderCells_areNamedAsSuch() {
+        String assets = StudyFixture.ASSETS.replace("date,A01,A02,A03", "date,A01,A02,A03,,")
+                .replaceAll("(?m)^(2020-\\d\\d-\\d\\d,[^\\n]*)$", "$1,,");
+        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir).write("assets.csv", assets).load());
+        assertEquals("assets.csv line 1: header cell 5 is empty; every column needs a name; the header ends in 2 empty"
+                + " cells, as a spreadsheet writes when empty columns beside the data were once used or formatted:"
+                + " delete those columns and save again", e.getMessage());
+    }
+
+    /**
+     * Month-end dates: the gaps 29, 31, 30, 31, 30, 31, 31 days have the median 31, hence 12 a year
+     * (Method §1). 252 (a daily figure) and 4 are more than twice off and warn; 13 and 6 are within
+     * a factor of two and are taken as meant.
+     */
+    @Test
+    void periodsPerYearFarFromTheDates_warns() {
+        StudyFixture f = new StudyFixture(dir)
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: riskfree.csv\n  periods_per_year: 252");
+        assertEquals(List.of("data.periods_per_year: 252 is given, but the dates of assets.csv are a median 31 days"
+                + " apart, which is 12 periods a year; every annualised figure (mean return, volatility, Sharpe ratio,"
+                + " CAGR, tracking error) and the conversion of an annual risk-free rate use the given 252: check the"
+                + " value, or leave the key out to infer it"), f.load().warnings());
+        f.edit("study.yaml", "periods_per_year: 252", "periods_per_year: 4");
+        assertEquals(1, f.load().warnings().size(), "4 against 12");
+        for (String near : new String[] {"13", "6"}) {
+            f.edit("study.yaml", "periods_per_year: " + (near.equals("13") ? "4" : "13"), "periods_per_year: " + near);
+            assertEquals(List.of(), f.load().warnings(), near + " against 12");
+        }
+    }
+
     /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
     @Test
     void implausibleMarketReturn_warnsWithLineAndColumn() {
