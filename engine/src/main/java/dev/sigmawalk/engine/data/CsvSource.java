@@ -102,12 +102,17 @@ final class CsvSource implements AutoCloseable {
     }
 
     /**
-     * The next record's cells, trimmed, or {@code null} at the end of the file.
+     * The next record's cells, trimmed, or {@code null} at the end of the file. A record whose
+     * cells are all empty (a line of nothing but commas, as a spreadsheet writes below its data)
+     * is skipped like a blank line, as the wide reader skips it.
      *
      * @throws InputException at the line where a quote opened when a cell spans a line break
      */
     String[] next() {
         String[] cells = nextRaw();
+        while (cells != null && allEmpty(cells)) {
+            cells = nextRaw();
+        }
         if (cells != null) {
             for (int i = 0; i < cells.length; i++) {
                 cells[i] = trim(cells[i]);
@@ -141,6 +146,15 @@ final class CsvSource implements AutoCloseable {
                             + (header == null ? "first row" : header.size() + " cells")
                             + "), closed quotes and cells under " + MAX_CHARS_PER_CELL + " characters");
         }
+    }
+
+    private static boolean allEmpty(String[] cells) {
+        for (String c : cells) {
+            if (!trim(c).isEmpty()) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Strips surrounding whitespace and a stray byte-order mark; cheap when there is none. */

@@ -122,6 +122,38 @@ final class IntakeChecks {
     }
 
     /**
+     * The same refusal for the market's returns: a market file of prices (or percent) beside
+     * decimal returns of the assets passed every check, since its values are above −1, and made
+     * every beta a thousandth of itself. The values kind is one for the assets and the market, so
+     * the file is refused at the line of its first large value.
+     */
+    void requireMarketDecimalScale(SeriesColumn column) {
+        if (kind != ValueKind.RETURNS) {
+            return;
+        }
+        int present = 0;
+        int large = 0;
+        int first = -1;
+        for (int t = 0; t < panel.rows(); t++) {
+            double m = panel.market(t);
+            if (m == m) {
+                present++;
+                if (Math.abs(m) > PERCENT_MEDIAN && large++ == 0) {
+                    first = t;
+                }
+            }
+        }
+        if (large * 2 > present) {
+            throw new InputException(new InputException.Location(column.file(), column.lines()[first + offset],
+                    column.column()), String.format(Locale.ROOT, "%.0f %% of the market's returns are larger than %.1f"
+                    + " in size (this one is %s), so the market looks like prices or percent; expected decimal returns"
+                    + " (0.012 for 1.2 %%), as data.values: returns says for the assets and the market alike: divide"
+                    + " percent by 100, or give prices in both with values: prices", 100.0 * large / present,
+                    PERCENT_MEDIAN, panel.market(first)));
+        }
+    }
+
+    /**
      * Warns about a column where more than a tenth of the returns (and at least three) exceed
      * 100 % in size: a mix of percent and decimal values, or prices given as returns.
      */

@@ -94,6 +94,7 @@ final class StudyDataLoader {
         riskFreeColumn.ifPresent(rf -> checks.requireComplete(rf, ValueKind.RETURNS, riskFree, firstNeeded,
                 schedule.firstRebalance()));
         checks.requireDecimalScale(table, assetCols, kept);
+        checks.requireMarketDecimalScale(market);
         checks.warnManyReturnsBeyondOne(table, assetCols, kept);
         checks.warnImplausibleReturns(table, assetCols, kept);
         checks.warnCollapsedReturns(table, assetCols, kept);

@@ -191,6 +191,18 @@ class DataIntakeTest {
         }
     }
 
+    /** A market file of index levels beside decimal returns: refused at its first level, as the assets' would be. */
+    @Test
+    void marketOfPricesBesideReturns_isRefused() {
+        String levels = "date,IDX\n2020-01-31,1000\n2020-02-29,1004\n2020-03-31,992\n2020-04-30,1013\n"
+                + "2020-05-31,1016\n2020-06-30,1010\n2020-07-31,1025\n2020-08-31,1032\n";
+        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir).write("market.csv", levels).load());
+        assertEquals("market.csv line 2, column 'IDX': 100 % of the market's returns are larger than 0.5 in size (this one"
+                + " is 1000.0), so the market looks like prices or percent; expected decimal returns (0.012 for 1.2 %),"
+                + " as data.values: returns says for the assets and the market alike: divide percent by 100, or give"
+                + " prices in both with values: prices", e.getMessage());
+    }
+
     /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
     @Test
     void implausibleMarketReturn_warnsWithLineAndColumn() {

@@ -69,6 +69,25 @@ class LongLayoutTest {
         assertEquals(0.01, p.value(0, 2), 0.0);
     }
 
+    /**
+     * Lines of nothing but commas (a spreadsheet's formatted empty rows) are skipped like blank
+     * lines, here and in the alphas file, and the repeated pair below is still named at the lines
+     * an editor shows: the three comma lines push the repeat from line 26 to line 29.
+     */
+    @Test
+    void linesOfOnlyCommas_areSkipped_andLinesStayTheEditors() {
+        String assets = toLong(StudyFixture.ASSETS, 0).replace("2020-04-30,A01,", ",,\n , ,\n2020-04-30,A01,") + ",,\n";
+        ReturnPanel wide = new StudyFixture(dir).load().panel();
+        assertArrayEquals(wide.rawReturns(), longFixture(assets).load().panel().rawReturns());
+        StudyFixture f = longFixture(assets + "2020-03-31,A02,0.5\n");
+        InputException again = assertThrows(InputException.class, f::load);
+        assertEquals("assets.csv line 29, column 'asset': 'A02' on 2020-03-31 is already given on line 9;"
+                + " expected one row per date and asset", again.getMessage());
+        AlphaTable alphas = AlphaTable.read(f.write("alphas.csv", "date,asset,alpha\n,,\n2020-01-31,A01,0.001\n,,\n")
+                .dir().resolve("alphas.csv"));
+        assertEquals(1, alphas.size());
+    }
+
     @Test
     void repeatedDateAndAsset_isRefusedNamingBothLines() {
         String assets = toLong(StudyFixture.ASSETS, 0) + "2020-03-31,A02,0.5\n";

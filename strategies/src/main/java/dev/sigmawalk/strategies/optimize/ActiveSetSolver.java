@@ -1,5 +1,7 @@
 package dev.sigmawalk.strategies.optimize;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.Objects;
 
 /**
@@ -88,6 +90,14 @@ public final class ActiveSetSolver {
         return new ActiveSetIteration(s, settings).run();
     }
 
+    /**
+     * A sum of bounds to 12 significant digits, so that three caps of 0.3 read 0.9, not the
+     * 0.8999999999999999 their floating-point sum is; far finer than the slack the check allows.
+     */
+    static String shown(double sum) {
+        return new BigDecimal(sum).round(new MathContext(12)).stripTrailingZeros().toPlainString();
+    }
+
     /** Infeasible when Σ lower &gt; 1 or Σ upper &lt; 1; null otherwise. */
     static SolveOutcome checkBudgetReachable(QuadraticProblem p) {
         double lowSum = 0;
@@ -97,11 +107,11 @@ public final class ActiveSetSolver {
             highSum += p.upper()[i];
         }
         if (lowSum > 1 + BUDGET_SLACK) {
-            return new SolveOutcome.Infeasible("lower bounds sum to " + lowSum + " > 1 over " + p.size()
+            return new SolveOutcome.Infeasible("lower bounds sum to " + shown(lowSum) + " > 1 over " + p.size()
                     + " assets: no weights can sum to 1");
         }
         if (highSum < 1 - BUDGET_SLACK) {
-            return new SolveOutcome.Infeasible("upper bounds sum to " + highSum + " < 1 over " + p.size()
+            return new SolveOutcome.Infeasible("upper bounds sum to " + shown(highSum) + " < 1 over " + p.size()
                     + " assets: no weights can sum to 1");
         }
         return null;

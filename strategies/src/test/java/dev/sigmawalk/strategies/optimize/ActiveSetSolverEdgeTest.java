@@ -251,6 +251,16 @@ class ActiveSetSolverEdgeTest {
         assertWeights(new double[] {0.4, 0.4, 0.2}, solver.solve(p, warm), EXACT);
     }
 
+    /** Three caps of 0.3 sum to 0.8999999999999999 in floating point; the reason says 0.9 (hand computation). */
+    @Test
+    void infeasibleReason_showsTheSumAsWritten() {
+        QuadraticProblem p = QuadraticProblem.uniformBounds(3, identity(3), new double[3], 0, 0.3);
+        SolveOutcome.Infeasible inf = assertInstanceOf(SolveOutcome.Infeasible.class, solver.solve(p));
+        assertEquals("upper bounds sum to 0.9 < 1 over 3 assets: no weights can sum to 1", inf.reason());
+        assertEquals("1.2", ActiveSetSolver.shown(0.4 + 0.4 + 0.4));
+        assertEquals("-0.75", ActiveSetSolver.shown(-0.75));
+    }
+
     /** No bounds at all: the active-set solver must agree with the closed form (same problem, two methods). */
     @Test
     void infiniteBounds_matchClosedForm() {
