@@ -14,35 +14,48 @@ import sys
 from collections import defaultdict
 
 
+def fail(message):
+    """Stops on bad input with the message and exit status 2, as sigmawalk does."""
+    print(message, file=sys.stderr)
+    sys.exit(2)
+
+
+def opened(path):
+    try:
+        return open(path)
+    except OSError as e:
+        fail(f"{path}: cannot be read ({e.strerror})")
+
+
 def read_weights(path):
     """{(strategy, window): {(date, asset): weight}} with the dates of each path."""
     paths = defaultdict(dict)
-    with open(path) as f:
+    with opened(path) as f:
         header = f.readline().strip()
         if header != "date,strategy,window,asset,weight":
-            sys.exit(f"{path}: header '{header}' is not date,strategy,window,asset,weight")
+            fail(f"{path}: header '{header}' is not date,strategy,window,asset,weight")
         for number, line in enumerate(f, start=2):
-            date, strategy, window, asset, weight = line.rstrip("\n").split(",")
             try:
+                date, strategy, window, asset, weight = line.rstrip("\n").split(",")
                 paths[(strategy, window)][(date, asset)] = float(weight)
             except ValueError:
-                sys.exit(f"{path} line {number}: weight '{weight}' is not a number")
+                fail(f"{path} line {number}: '{line.strip()}' is not date,strategy,window,asset,weight")
     return paths
 
 
 def read_returns(path):
     """{(strategy, window): {date: (gross, net)}}."""
     paths = defaultdict(dict)
-    with open(path) as f:
+    with opened(path) as f:
         header = f.readline().strip()
         if header != "date,strategy,window,gross_return,net_return":
-            sys.exit(f"{path}: header '{header}' is not date,strategy,window,gross_return,net_return")
+            fail(f"{path}: header '{header}' is not date,strategy,window,gross_return,net_return")
         for number, line in enumerate(f, start=2):
-            date, strategy, window, gross, net = line.rstrip("\n").split(",")
             try:
+                date, strategy, window, gross, net = line.rstrip("\n").split(",")
                 paths[(strategy, window)][date] = (float(gross), float(net))
             except ValueError:
-                sys.exit(f"{path} line {number}: '{gross}' or '{net}' is not a number")
+                fail(f"{path} line {number}: '{line.strip()}' is not date,strategy,window,gross,net")
     return paths
 
 

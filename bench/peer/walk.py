@@ -59,6 +59,12 @@ MAX_PDAS_STEPS = 25
 SAME_AS_SAMPLE = 1e-24
 
 
+def fail(message):
+    """Stops on bad input with the message and exit status 2, as sigmawalk does."""
+    print(message, file=sys.stderr)
+    sys.exit(2)
+
+
 # ----------------------------------------------------------------------------------------------
 # Reading (Method §1)
 
@@ -72,7 +78,10 @@ def parse_rows(lines):
         flat = b"nan" + flat
     if flat.endswith(b","):
         flat += b"nan"
-    return np.fromstring(flat, sep=",")
+    try:
+        return np.fromstring(flat, sep=",")
+    except ValueError:
+        return None
 
 
 _LINES = []  # the lines being parsed, shared with forked workers
@@ -85,8 +94,11 @@ def _parse_part(bounds):
 def read_table(path, jobs=1):
     """A CSV of dates by columns: (header names, dates as strings, values with NaN for empty),
     parsed by `jobs` processes in row blocks."""
-    with open(path, "rb") as f:
-        raw = f.read()
+    try:
+        with open(path, "rb") as f:
+            raw = f.read()
+    except OSError as e:
+        fail(f"{path}: cannot be read ({e.strerror})")
     if b"\r" in raw:
         raw = raw.replace(b"\r", b"")
     header, body = raw.split(b"\n", 1)
@@ -100,12 +112,15 @@ def read_table(path, jobs=1):
         with multiprocessing.get_context("fork").Pool(jobs - 1) as pool:
             rest = pool.map_async(_parse_part, list(zip(cuts[1:-1], cuts[2:])))
             first = _parse_part((cuts[0], cuts[1]))
-            values = np.concatenate([first] + rest.get())
+            parts = [first] + rest.get()
+            values = None if any(part is None for part in parts) else np.concatenate(parts)
         _LINES.clear()
     else:
         values = parse_rows(lines)
+    if values is None:
+        fail(f"{path}: a cell is not a number (this reader takes the sample generator's files)")
     if values.size != len(lines) * len(names):
-        sys.exit(f"{path}: expected {len(names)} values on each of {len(lines)} rows, read {values.size}")
+        fail(f"{path}: expected {len(names)} values on each of {len(lines)} rows, read {values.size}")
     return names, dates, values.reshape(len(lines), len(names))
 
 
@@ -115,7 +130,7 @@ def read_panel(folder, frequency, jobs=1):
     for role in ("market", "riskfree"):
         _, other, values = read_table(os.path.join(folder, f"{role}-{frequency}.csv"))
         if other != dates:
-            sys.exit(f"{role}-{frequency}.csv: its dates differ from the assets' dates")
+            fail(f"{role}-{frequency}.csv: its dates differ from the assets' dates")
         series.append(values[:, 0])
     return assets, dates, r, series[0], series[1]
 
@@ -128,7 +143,7 @@ def schedule(rows, windows, every):
     tau0 = max(windows) - 1
     last = rows - 1
     if tau0 >= last - 1:
-        sys.exit(f"the longest window ({max(windows)} rows) needs at least {max(windows) + 2} rows")
+        fail(f"the longest window ({max(windows)} rows) needs at least {max(windows) + 2} rows")
     return np.arange(tau0, last, every), last
 
 
@@ -791,24 +806,24 @@ def main(argv=None):
                    help="worker processes, one window length each at a time (default: all cores)")
     args = p.parse_args(argv)
     if args.jobs < 1:
-        sys.exit(f"--jobs ({args.jobs}) must be >= 1")
+        fail(f"--jobs ({args.jobs}) must be >= 1")
     windows = [int(v) for v in args.windows.split(",")]
     lo, hi = (float(v) for v in args.bounds.split(","))
     if lo != 0.0 or not 0.0 < hi:
-        sys.exit("bounds: this implementation solves the long-only problem, 0 <= w <= HI")
+        fail("bounds: this implementation solves the long-only problem, 0 <= w <= HI")
 
     stats = dict.fromkeys(("read", "prepare", "walk", "write"), 0.0)
     t = time.perf_counter()
     assets, dates, r, market, rf = read_panel(args.data, args.frequency, args.jobs)
     stats["read"] = time.perf_counter() - t
     if hi * r.shape[1] < 1.0:
-        sys.exit(f"bounds: {r.shape[1]} assets at most {hi} each cannot sum to 1")
+        fail(f"bounds: {r.shape[1]} assets at most {hi} each cannot sum to 1")
     taus, last = schedule(len(dates), windows, args.every)
     first_used = taus[0] - max(windows) + 1
     for role, series in (("market", market), ("riskfree", rf)):
         gaps = np.flatnonzero(np.isnan(series[first_used:]))
         if gaps.size:
-            sys.exit(f"{role}-{args.frequency}.csv: no value on {dates[first_used + gaps[0]]}; it must be"
+            fail(f"{role}-{args.frequency}.csv: no value on {dates[first_used + gaps[0]]}; it must be"
                      f" complete from {dates[first_used]} on (Method §1)")
     t = time.perf_counter()
     # Method §1: excess returns of the assets, the market's last.
