@@ -173,24 +173,21 @@ final class IntakeChecks {
 
     /** Warns once per column about period returns above +500 %, naming the first one. */
     void warnImplausibleReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
-        for (int k = 0; k < kept.size(); k++) {
-            if (stats.aboveImplausible[k] > 0) {
-                int col = assetCols.get(kept.get(k));
-                warnings.add(outlier(table.file(), table.line(stats.firstImplausible[k] + offset, col),
-                        table.columns().get(col), "a return of ", panel.value(stats.firstImplausible[k], k),
-                        stats.aboveImplausible[k], " in this column"));
-            }
-        }
+        warnOutliers(table, assetCols, kept, stats.aboveImplausible, stats.firstImplausible);
     }
 
     /** Warns once per column about period returns at or below −75 %, naming the first one. */
     void warnCollapsedReturns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        warnOutliers(table, assetCols, kept, stats.collapsed, stats.firstCollapse);
+    }
+
+    /** One {@link #outlier} warning per column with a positive count, at its first such row. */
+    private void warnOutliers(WideTable table, List<Integer> assetCols, List<Integer> kept, int[] count, int[] first) {
         for (int k = 0; k < kept.size(); k++) {
-            if (stats.collapsed[k] > 0) {
+            if (count[k] > 0) {
                 int col = assetCols.get(kept.get(k));
-                warnings.add(outlier(table.file(), table.line(stats.firstCollapse[k] + offset, col),
-                        table.columns().get(col), "a return of ", panel.value(stats.firstCollapse[k], k),
-                        stats.collapsed[k], " in this column"));
+                warnings.add(outlier(table.file(), table.line(first[k] + offset, col), table.columns().get(col),
+                        "a return of ", panel.value(first[k], k), count[k], " in this column"));
             }
         }
     }

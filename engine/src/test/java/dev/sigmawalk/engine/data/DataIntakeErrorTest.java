@@ -157,12 +157,10 @@ class DataIntakeErrorTest {
     @Test
     void marketPriceFileStartingAtTheFirstNeededDate_isRefusedForThePriceBeforeIt() {
         StudyFixture f = new StudyFixture(dir)
-                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,20\n"
-                        + "2020-04-30,11,22\n2020-05-31,12,23\n2020-06-30,13,22\n2020-07-31,12,24\n2020-08-31,13,23\n")
-                .write("market.csv", "date,IDX\n2020-03-31,100\n2020-04-30,101\n2020-05-31,99\n2020-06-30,102\n"
+                .prices("date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,20\n"
+                        + "2020-04-30,11,22\n2020-05-31,12,23\n2020-06-30,13,22\n2020-07-31,12,24\n2020-08-31,13,23\n",
+                        "date,IDX\n2020-03-31,100\n2020-04-30,101\n2020-05-31,99\n2020-06-30,102\n"
                         + "2020-07-31,103\n2020-08-31,104\n")
-                .edit("study.yaml", "values: returns", "values: prices")
-                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
                 .edit("study.yaml", "  rebalance_every: 1", "  rebalance_every: 1\n  start: 2020-06-30");
         // Return rows: 2020-02-29 (0) .. 2020-08-31 (6); τ_0 = 4, L_max = 3: from row 2 (2020-04-30), which needs 2020-03-31's price.
         StudyData data = f.load();

@@ -1,5 +1,6 @@
 package dev.sigmawalk.engine.data;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -16,6 +17,9 @@ import org.junit.jupiter.api.io.TempDir;
 class DataIntakeTest {
     /** Decimal text to double and one division: exact up to the last bit of a double. */
     private static final double ONE_ULP_SCALE = 1e-15;
+    /** An invented index's levels on the month-ends of 2020 through September, for price fixtures. */
+    private static final String PRICE_MARKET = "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,99\n"
+            + "2020-04-30,102\n2020-05-31,103\n2020-06-30,101\n2020-07-31,104\n2020-08-31,105\n2020-09-30,103\n";
 
     @TempDir
     Path dir;
@@ -146,14 +150,10 @@ class DataIntakeTest {
     @Test
     void rowsOfOnlyCommas_areSkippedLikeBlankLines() {
         String assets = StudyFixture.ASSETS.replace("2020-05-31,", ",,,\n , ,\n2020-05-31,") + ",,,\n,,,\n";
-        StudyData plain = new StudyFixture(dir).load();
-        StudyData exported = new StudyFixture(dir).write("assets.csv", assets).load();
-        assertEquals(plain.panel().rows(), exported.panel().rows());
-        for (int t = 0; t < plain.panel().rows(); t++) {
-            for (int j = 0; j < 3; j++) {
-                assertEquals(plain.panel().value(t, j), exported.panel().value(t, j), 0.0, "row " + t + " asset " + j);
-            }
-        }
+        ReturnPanel plain = new StudyFixture(dir).load().panel();
+        ReturnPanel exported = new StudyFixture(dir).write("assets.csv", assets).load().panel();
+        assertArrayEquals(plain.dates(), exported.dates());
+        assertArrayEquals(plain.rawReturns(), exported.rawReturns());
         InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir)
                 .write("assets.csv", assets.replace("2020-08-31,0.03", "2020-08-31,x")).load());
         assertTrue(e.getMessage().startsWith("assets.csv line 11, column 'A01': 'x' is not a number"), e.getMessage());
@@ -235,13 +235,10 @@ class DataIntakeTest {
     @Test
     void unadjustedSplitInPrices_warnsAtTheLaterPrice() {
         List<String> w = new StudyFixture(dir)
-                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,2\n"
+                .prices("date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,21\n2020-03-31,12,2\n"
                         + "2020-04-30,11,2.1\n2020-05-31,12,2.2\n2020-06-30,13,2.1\n2020-07-31,12,2.3\n"
-                        + "2020-08-31,13,2.2\n2020-09-30,14,2.4\n")
-                .write("market.csv", "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,99\n2020-04-30,102\n"
-                        + "2020-05-31,103\n2020-06-30,101\n2020-07-31,104\n2020-08-31,105\n2020-09-30,103\n")
-                .edit("study.yaml", "values: returns", "values: prices")
-                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
+                        + "2020-08-31,13,2.2\n2020-09-30,14,2.4\n",
+                        PRICE_MARKET)
                 .load().warnings();
         assertEquals(List.of("assets.csv line 4, column 'A02': a return of " + (2.0 / 21 - 1) + " is a fall of 75 % or"
                 + " more in one period; check for a split or a change of unit that the prices do not adjust for, or a"
@@ -266,13 +263,10 @@ class DataIntakeTest {
     @Test
     void stalePrice_warnsOfTheRunOfZeroReturns() {
         List<String> w = new StudyFixture(dir)
-                .write("assets.csv", "date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,20.5\n2020-03-31,11,21\n"
+                .prices("date,A01,A02\n2020-01-31,10,20\n2020-02-29,11,20.5\n2020-03-31,11,21\n"
                         + "2020-04-30,12,21\n2020-05-31,11.5,21\n2020-06-30,12.5,21\n2020-07-31,12,21\n"
-                        + "2020-08-31,13,21\n2020-09-30,13.5,21.4\n")
-                .write("market.csv", "date,IDX\n2020-01-31,100\n2020-02-29,101\n2020-03-31,99\n2020-04-30,102\n"
-                        + "2020-05-31,103\n2020-06-30,101\n2020-07-31,104\n2020-08-31,105\n2020-09-30,103\n")
-                .edit("study.yaml", "values: returns", "values: prices")
-                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0")
+                        + "2020-08-31,13,21\n2020-09-30,13.5,21.4\n",
+                        PRICE_MARKET)
                 .edit("study.yaml", "windows: [3]", "windows: [6]")
                 .load().warnings();
         assertEquals(List.of("assets.csv column 'A02': its return is exactly 0 in 5 consecutive rows, 2020-04-30 to"

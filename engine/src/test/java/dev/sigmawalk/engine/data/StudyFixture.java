@@ -80,6 +80,17 @@ final class StudyFixture {
         return this;
     }
 
+    /**
+     * Replaces the assets and market files with prices and the study's values with prices; the
+     * risk-free rate becomes the annual number 0.0, since the fixture's rate file has no row for
+     * a first date that only the prices hold.
+     */
+    StudyFixture prices(String assets, String market) {
+        return write("assets.csv", assets).write("market.csv", market)
+                .edit("study.yaml", "values: returns", "values: prices")
+                .edit("study.yaml", "  riskfree: riskfree.csv", "  riskfree: 0.0");
+    }
+
     /** Replaces the first occurrence of {@code from} in file {@code name}. */
     StudyFixture edit(String name, String from, String to) {
         try {
