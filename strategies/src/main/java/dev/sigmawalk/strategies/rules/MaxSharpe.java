@@ -4,6 +4,7 @@ import dev.sigmawalk.strategies.optimize.MaxSharpeSolver;
 import dev.sigmawalk.strategies.optimize.SolveOutcome;
 import dev.sigmawalk.strategies.optimize.SolverSettings;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -31,6 +32,13 @@ public record MaxSharpe(SolverSettings settings) implements PortfolioRule {
             "max-sharpe: 1'inv(S)mu <= 0, so no fully invested portfolio attains the highest Sharpe ratio;"
                     + " fell back to min-variance";
 
+    /**
+     * Gross exposure Σ|w| above which an unbounded tangency portfolio gets a note: ten times the
+     * capital long and short together. Common practice, no source: a long-short book of a few
+     * times its capital is usual, ten is far beyond it.
+     */
+    static final double LARGE_GROSS = 10;
+
     public MaxSharpe {
         Objects.requireNonNull(settings, "settings");
     }
@@ -53,7 +61,7 @@ public record MaxSharpe(SolverSettings settings) implements PortfolioRule {
             if (tangency.isEmpty()) {
                 return fallBack(input, warm, NO_TANGENCY_NOTE);
             }
-            return Solved.from(NAME, tangency.get(), input, warm, List.of());
+            return Solved.from(NAME, tangency.get(), input, warm, leverageNote(tangency.get()));
         }
         double[] lo = Solved.lower(input);
         double[] hi = Solved.upper(input);
@@ -66,6 +74,31 @@ public record MaxSharpe(SolverSettings settings) implements PortfolioRule {
             return fallBack(input, warm, FALLBACK_NOTE);
         }
         return Solved.from(NAME, solver.solve(sigma, mu, lo, hi), input, warm, List.of());
+    }
+
+    /**
+     * The tangency portfolio Σ⁻¹μ / 1'Σ⁻¹μ grows without limit as 1'Σ⁻¹μ falls to 0 from above: it
+     * stays the highest Sharpe ratio on the budget, but as a fully invested portfolio it is long
+     * and short many times the capital (the next period's return can then be below −100 %). Above
+     * a gross exposure Σ|w| of {@value #LARGE_GROSS} the rebalance gets a note naming its size, so
+     * the run's warnings say why its turnover, forecast and returns look as they do.
+     */
+    private static List<String> leverageNote(SolveOutcome outcome) {
+        if (!(outcome instanceof SolveOutcome.Optimal optimal)) {
+            return List.of();
+        }
+        double gross = 0;
+        double largest = 0;
+        for (double w : optimal.weights()) {
+            gross += Math.abs(w);
+            largest = Math.max(largest, Math.abs(w));
+        }
+        if (!(gross > LARGE_GROSS)) {
+            return List.of();
+        }
+        return List.of(String.format(Locale.ROOT, "max-sharpe: 1'inv(S)mu is close to 0, so the tangency portfolio"
+                + " holds positions as large as %.3g times the capital (gross exposure %.3g): the highest Sharpe ratio,"
+                + " but not a usable portfolio; bounds keep its positions in range", largest, gross));
     }
 
     private RuleOutcome fallBack(RuleInput input, WarmStart warm, String note) {

@@ -114,6 +114,29 @@ class MaxSharpeRuleTest {
         assertChosen(new double[] {2.0 / 19, 17.0 / 19}, chosen, EXACT);
     }
 
+    /**
+     * μ = (0.034, −0.00399) on the same pair: 1'Σ⁻¹μ ∝ 0.004·0.034 + 0.034·(−0.00399) = 3.4e-7,
+     * barely positive, and Σ⁻¹μ ∝ (0.00036394, −0.0003636), so the tangency portfolio is
+     * (0.00036394, −0.0003636) / 3.4e-7 ≈ (1070.4, −1069.4) (hand computation, the formula of
+     * the first test): still chosen, as Method §5 asks, with a note of its size; the ordinary
+     * tangency (0.68, 0.32) gets none.
+     */
+    @Test
+    void tangencyNearAZeroBudget_isChosen_withANoteOfItsSize() {
+        double[] mu = {0.034, -0.00399};
+        RuleOutcome.Chosen chosen = assertInstanceOf(RuleOutcome.Chosen.class,
+                rule.apply(new RuleInput(TWO, TestCovariances.dense(PAIR), mu, Optional.empty()), new WarmStart()));
+        double scale = 0.004 * 0.034 + 0.034 * -0.00399;
+        double w1 = (0.01 * 0.034 - 0.006 * -0.00399) / scale;
+        assertChosen(new double[] {w1, 1 - w1}, chosen, 1e-9);
+        assertEquals(List.of("max-sharpe: 1'inv(S)mu is close to 0, so the tangency portfolio holds positions as large"
+                + " as 1.07e+03 times the capital (gross exposure 2.14e+03): the highest Sharpe ratio, but not a usable"
+                + " portfolio; bounds keep its positions in range"), chosen.notes());
+        RuleOutcome.Chosen ordinary = assertInstanceOf(RuleOutcome.Chosen.class,
+                rule.apply(new RuleInput(TWO, TestCovariances.dense(PAIR), MU, Optional.empty()), new WarmStart()));
+        assertEquals(List.of(), ordinary.notes());
+    }
+
     private static double sharpe(double[] sigma, double[] mu, double[] w) {
         double mean = 0;
         for (int i = 0; i < w.length; i++) {
