@@ -2,8 +2,11 @@ package dev.sigmawalk.engine.data;
 
 import dev.sigmawalk.engine.study.ValueKind;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
 /**
  * The checks run once the panel exists: completeness of the market and risk-free series over the
@@ -220,6 +223,39 @@ final class IntakeChecks {
     static int staleRun(List<Integer> windows) {
         int shortest = windows.stream().mapToInt(Integer::intValue).min().orElseThrow();
         return Math.max(3, (shortest + 1) / 2);
+    }
+
+    /**
+     * Warns of asset columns that hold the same series as an earlier one, the same return (or the
+     * same gap) on every row: a column pasted twice under another name. The sample covariance is
+     * then singular, and every other model and equal weight count the asset twice. Columns are
+     * compared exactly, only where their hashes agree; each repeat is named once, with the first
+     * column it repeats.
+     */
+    void warnRepeatedColumns(WideTable table, List<Integer> assetCols, List<Integer> kept) {
+        Map<Long, List<Integer>> byHash = new HashMap<>();
+        for (int k = 0; k < kept.size(); k++) {
+            List<Integer> same = byHash.computeIfAbsent(stats.columnHash[k], h -> new ArrayList<>());
+            for (int earlier : same) {
+                if (sameColumn(earlier, k)) {
+                    warnings.add(table.file().getFileName() + " column '" + table.columns().get(assetCols.get(kept.get(k)))
+                            + "' holds the same return as column '" + table.columns().get(assetCols.get(kept.get(earlier)))
+                            + "' on every row (a column pasted twice?): the sample covariance is singular with both, and"
+                            + " every model and equal weight count that asset twice; remove one of them");
+                    break;
+                }
+            }
+            same.add(k);
+        }
+    }
+
+    private boolean sameColumn(int a, int b) {
+        for (int t = 0; t < panel.rows(); t++) {
+            if (Double.doubleToLongBits(panel.value(t, a)) != Double.doubleToLongBits(panel.value(t, b))) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**

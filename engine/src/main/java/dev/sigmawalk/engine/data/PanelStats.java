@@ -27,6 +27,11 @@ final class PanelStats {
      */
     final int[] zeroRun;
     final int[] zeroRunEnd;
+    /**
+     * A hash of each asset's column, missing rows included (NaN hashes as itself), so that two
+     * columns with equal hashes are the only candidates for being the same series.
+     */
+    final long[] columnHash;
     /** Returns above {@code large} in size over the whole panel, and the first one's row and asset. */
     long largeCount;
     int firstLargeRow = -1;
@@ -43,6 +48,7 @@ final class PanelStats {
         firstImplausible = new int[assets];
         collapsed = new int[assets];
         zeroRun = new int[assets];
+        columnHash = new long[assets];
         zeroRunEnd = new int[assets];
         Arrays.fill(zeroRunEnd, -1);
         firstCollapse = new int[assets];
@@ -65,6 +71,7 @@ final class PanelStats {
         for (int t = 0, at = 0; t < panel.rows(); t++) {
             for (int j = 0; j < n; j++, at++) {
                 double v = r[at];
+                s.columnHash[j] = s.columnHash[j] * 1_000_003 + Double.doubleToLongBits(v);
                 if (v != v) {
                     run[j] = 0;
                     continue;

@@ -98,6 +98,7 @@ final class StudyDataLoader {
         checks.warnManyReturnsBeyondOne(table, assetCols, kept);
         checks.warnImplausibleReturns(table, assetCols, kept);
         checks.warnCollapsedReturns(table, assetCols, kept);
+        checks.warnRepeatedColumns(table, assetCols, kept);
         checks.warnStaleRuns(table, assetCols, kept, IntakeChecks.staleRun(study.walkForward().windows()));
         checks.warnMarketOutliers(market);
         riskFreeColumn.ifPresent(checks::warnImplausibleRiskFree);

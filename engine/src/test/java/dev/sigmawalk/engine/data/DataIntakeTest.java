@@ -203,6 +203,23 @@ class DataIntakeTest {
                 + " prices in both with values: prices", e.getMessage());
     }
 
+    /** A04 is A02 pasted again, gaps and all; A05 differs from A02 in one row only and is no repeat. */
+    @Test
+    void columnPastedTwice_warnsNamingBoth() {
+        String[] lines = StudyFixture.ASSETS.strip().split("\n");
+        StringBuilder assets = new StringBuilder(lines[0]).append(",A04,A05\n");
+        for (int i = 1; i < lines.length; i++) {
+            String a02 = lines[i].split(",", -1)[2];
+            String a05 = i == 5 ? "0.0301" : a02;
+            assets.append(lines[i]).append(',').append(a02).append(',').append(a05).append('\n');
+        }
+        String text = assets.toString().replace("2020-02-29,0.02,-0.01,0.00,-0.01,-0.01", "2020-02-29,0.02,,0.00,,-0.01");
+        List<String> w = new StudyFixture(dir).write("assets.csv", text).load().warnings();
+        assertEquals(List.of("assets.csv column 'A04' holds the same return as column 'A02' on every row (a column pasted"
+                + " twice?): the sample covariance is singular with both, and every model and equal weight count that"
+                + " asset twice; remove one of them"), w);
+    }
+
     /** A bad tick in the index moves every beta; it draws the warning an asset's would. */
     @Test
     void implausibleMarketReturn_warnsWithLineAndColumn() {

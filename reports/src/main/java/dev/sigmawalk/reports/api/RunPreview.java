@@ -6,6 +6,7 @@ import dev.sigmawalk.engine.run.WindowScan;
 import dev.sigmawalk.engine.study.Bounds;
 import dev.sigmawalk.engine.study.StrategySpec;
 import dev.sigmawalk.engine.study.Study;
+import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
@@ -18,6 +19,9 @@ import java.util.Optional;
  * {@code run} puts the same warnings in its warning list, so the two agree.
  */
 public final class RunPreview {
+    /** A row this many half-lives old weighs 2⁻⁵² of the latest: below a double's rounding. */
+    private static final int EWMA_ROUNDING_HALF_LIVES = 52;
+
     private final List<String> feasibility = new ArrayList<>();
     private final List<String> warnings = new ArrayList<>();
 
@@ -39,6 +43,7 @@ public final class RunPreview {
         for (StrategySpec s : study.strategies()) {
             for (int w : windows) {
                 p.bounds(scan, s, w);
+                p.ewmaRank(scan, s, w);
             }
         }
         return p;
@@ -99,6 +104,36 @@ public final class RunPreview {
                 + needs(b) + "); no portfolio is formed there";
         feasibility.add(line);
         warnings.add(line);
+    }
+
+    /**
+     * Method §11's ewma weights ω_t ∝ 0.5^((τ − t)/h) fall below a double's rounding (2⁻⁵² of the
+     * latest row's weight) once a row is more than 52 half-lives old, so only the latest
+     * min(L, ⌊52h⌋ + 1) rows shape Σ and its rank is at most that. With more eligible assets the
+     * matrix is singular to rounding: an unbounded portfolio fails at every such rebalance, and
+     * the solver's reason (a matrix singular, as a sample one with too few periods) cannot say
+     * that the half-life is the cause. One warning per strategy and window where it happens.
+     */
+    private void ewmaRank(WindowScan scan, StrategySpec s, int window) {
+        if (s.riskSettings().halfLife().isEmpty()) {
+            return;
+        }
+        double h = s.riskSettings().halfLife().getAsDouble();
+        long rows = Math.min(window, (long) Math.floor(EWMA_ROUNDING_HALF_LIVES * h) + 1);
+        int most = 0;
+        for (int j = 0; j < scan.rebalances(); j++) {
+            most = Math.max(most, scan.eligible(window, j));
+        }
+        if (rows < most) {
+            warnings.add("strategy '" + s.name() + "', " + window + "-row window: half_life " + h + " leaves only the"
+                    + " latest " + rows + (rows == 1 ? " row" : " rows") + " of the window with a weight above rounding,"
+                    + " fewer than the up to " + most + " eligible assets, so the ewma matrix is singular to rounding:"
+                    + " no portfolio without bounds can be formed where more assets are eligible, and bounded ones"
+                    + " rest on " + rows + (rows == 1 ? " row" : " rows") + "; a half_life of at least "
+                    + BigDecimal.valueOf(Math.ceil((most - 1) * 100.0 / EWMA_ROUNDING_HALF_LIVES) / 100)
+                            .stripTrailingZeros().toPlainString()
+                    + " keeps as many rows as assets");
+        }
     }
 
     /** The asset counts n with n·lower ≤ 1 ≤ n·upper, in words. */

@@ -259,6 +259,29 @@ class CheckCommandTest {
                 + " date from 2020-01-31");
     }
 
+    /**
+     * half_life 0.01: a row one period old already weighs 0.5^100 ≈ 8e-31 of the latest, below
+     * rounding, so the ewma matrix holds one row and is singular with three assets (Method §11);
+     * check says so, with the half-life that keeps three rows, ⌈(3 − 1)/52 · 100⌉/100 = 0.04
+     * (0.04 · 52 = 2.08, so rows 0, 1 and 2 periods old count). half_life 24 draws nothing.
+     */
+    @Test
+    void ewmaHalfLifeBelowTheAssets_isWarnedOf() {
+        edit("study.yaml", "  - name: equal\n", "  - name: decaying\n    risk: ewma\n    half_life: 0.01\n"
+                + "    objective: min-variance\n  - name: equal\n");
+        assertEquals(0, check(), err.toString());
+        assertTrue(out.toString().contains("  strategy 'decaying', 3-row window: half_life 0.01 leaves only the latest"
+                + " 1 row of the window with a weight above rounding, fewer than the up to 3 eligible assets, so the ewma"
+                + " matrix is singular to rounding: no portfolio without bounds can be formed where more assets are"
+                + " eligible, and bounded ones rest on 1 row; a half_life of at least 0.04 keeps as many rows as"
+                + " assets"), out.toString());
+        assertTrue(out.toString().contains("  strategy 'decaying', 4-row window: half_life 0.01"), out.toString());
+        out.getBuffer().setLength(0);
+        edit("study.yaml", "half_life: 0.01", "half_life: 24");
+        assertEquals(0, check(), err.toString());
+        assertTrue(!out.toString().contains("with a weight above rounding"), out.toString());
+    }
+
     @Test
     void marketFileNotCoveringTheAssetDates_exitsTwo() {
         write("market.csv", "date,IDX\n2020-01-31,0.01\n2020-02-29,0.01\n2020-04-30,0.01\n");
