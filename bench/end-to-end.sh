@@ -36,9 +36,9 @@
 #   --reruns N        afterwards, also time N reruns in one process: `sigmawalk watch --stop-after N+1`
 #                     while the study file is touched every half second; prints each run's own time
 #   --peer            afterwards, also time the numpy implementation of the same study on the same
-#                     data (bench/peer/walk.py, python3 with numpy and scipy; its outputs go to
-#                     DIR/peer-out) and check with bench/peer/agree.py that its weights and returns
-#                     equal the run's to 1e-9; a yardstick for speed, not part of the product
+#                     data (bench/peer/walk.py, python3 with numpy and scipy; outputs in DIR/peer-out;
+#                     --threads N gives it N processes of one BLAS thread) and check with agree.py
+#                     that its weights and returns equal the run's to 1e-9 (a speed yardstick only)
 #
 # Prints the wall time, the peak resident memory and the CPU time of the run (from
 # /usr/bin/time -v when it is installed; otherwise the wall time only), the load average before
@@ -193,13 +193,14 @@ fi
 
 if [ "$peer" = yes ]; then
   # The same study in numpy (see DEVELOPERS.md, "A numpy yardstick"): same data, windows, step,
-  # bounds and cost; --threads, when given, sets its worker processes.
+  # bounds and cost; --threads, when given, sets its worker processes, one BLAS thread each.
   peer_out="$work/peer-out"
   peer_timing="$work/peer-time.txt"
   rm -rf "$peer_out"
   jobs_option=()
-  if [ -n "$threads" ]; then jobs_option=(--jobs "$threads"); fi
-  peer_command=(python3 "$root/bench/peer/walk.py" "$data" --frequency "$frequency" --windows "$windows"
+  blas_threads=()
+  if [ -n "$threads" ]; then jobs_option=(--jobs "$threads"); blas_threads=(env OPENBLAS_NUM_THREADS=1); fi
+  peer_command=("${blas_threads[@]}" python3 "$root/bench/peer/walk.py" "$data" --frequency "$frequency" --windows "$windows"
       --every "$every" --bounds "$bounds" --cost-bps 10 --out "$peer_out" "${jobs_option[@]}")
   load_before=$(cut -d' ' -f1-3 /proc/loadavg)
   echo "running:     ${peer_command[*]}"
