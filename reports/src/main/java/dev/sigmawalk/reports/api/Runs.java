@@ -136,9 +136,11 @@ public final class Runs {
             }
             int ruin = SeriesStats.firstRuin(p.net());
             if (ruin >= 0) {
-                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": its net return of " + p.net()[ruin]
-                        + " on " + run.dates()[ruin] + " loses the whole portfolio or more (short and leveraged"
-                        + " positions can lose more than the capital); its wealth is taken as gone from that date, so"
+                double lost = p.net()[ruin];
+                out.add("strategy '" + p.strategy() + "', window " + p.window() + ": its net return of " + lost
+                        + " on " + run.dates()[ruin] + (lost < -1 ? " loses more than the whole portfolio (short and"
+                        + " leveraged positions can lose more than the capital)" : " loses the whole portfolio")
+                        + "; its wealth is taken as gone from that date, so"
                         + " its max drawdown is 100 % and its CAGR -100 %, while its mean return, volatility and Sharpe"
                         + " ratio still average the period returns as they are");
             }

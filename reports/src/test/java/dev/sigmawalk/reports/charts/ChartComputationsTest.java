@@ -84,4 +84,18 @@ class ChartComputationsTest {
     void growth_compoundsReturns() {
         assertArrayEquals(new double[] {1.1, 0.55, 0.66}, Growth.ofOne(new double[] {0.1, -0.5, 0.2}), TOLERANCE);
     }
+
+    /**
+     * A loss of everything (−100 %) leaves wealth 0, which a log scale drew at an infinite
+     * coordinate (an SVG path of "Infinity"), and a loss of more turned later wealth positive
+     * again: from that row on there is no value (Method §7).
+     */
+    @Test
+    void growth_afterALossOfEverything_hasNoValue() {
+        double[] lost = Growth.ofOne(new double[] {0.1, -1.0, 0.2});
+        assertEquals(1.1, lost[0], TOLERANCE);
+        assertTrue(Double.isNaN(lost[1]) && Double.isNaN(lost[2]), Arrays.toString(lost));
+        double[] more = Growth.ofOne(new double[] {0.1, -1.5, -1.5});
+        assertTrue(Double.isNaN(more[1]) && Double.isNaN(more[2]), Arrays.toString(more));
+    }
 }

@@ -149,7 +149,8 @@ class DegenerateDataCliTest {
         assertEquals("1.0", row[List.of(header).indexOf("max_drawdown")], "max drawdown of a ruined path");
         String manifest = Files.readString(out.resolve("manifest.json"));
         assertTrue(manifest.contains("strategy 'geared', window 24: its net return of " + first[4] + " on " + first[0]
-                + " loses the whole portfolio or more"), manifest);
+                + " loses more than the whole portfolio"), manifest);
+        assertTrue(Double.parseDouble(first[4]) < -1, "the leveraged loss exceeds the capital: " + first[4]);
     }
 
     @Test
