@@ -24,14 +24,18 @@ final class Findings {
         this.edge = new FamilyEdge(data.evidence().comparisons());
     }
 
-    /** The path with the lowest realised (net) volatility. */
-    PathResult lowestVolatility() {
-        return data.rankedPaths().stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()))
-                .orElseThrow();
+    /** The ranked path with the lowest realised (net) volatility; empty when no path formed a portfolio. */
+    Optional<PathResult> lowestVolatility() {
+        return data.rankedPaths().stream().min(Comparator.comparingDouble(p -> data.summary(p).volatility()));
     }
 
     String headline() {
-        PathResult best = lowestVolatility();
+        if (lowestVolatility().isEmpty()) {
+            return "No strategy formed a portfolio at any of the " + data.run().schedule().count() + " rebalances:"
+                    + " every path held cash throughout, so its figures are the risk-free rate's and nothing is"
+                    + " ranked; the run record says why each allocation failed.";
+        }
+        PathResult best = lowestVolatility().get();
         Summary b = data.summary(best);
         String lead = "With a " + best.window() + "-period window, " + best.strategy()
                 + " had the lowest realised volatility: " + Formats.percent(b.volatility()) + " a year";
@@ -57,12 +61,16 @@ final class Findings {
                 out.add(name(p) + " (no portfolio at " + p.failures() + " of " + p.rebalances().size() + " rebalances)");
             }
         }
+        boolean noneClean = data.run().paths().stream().allMatch(p -> p.failures() > 0);
+        String all = noneClean ? " Every strategy failed to form a portfolio at some rebalance, so "
+                + (out.isEmpty() ? "all are ranked" : "those that formed one at least once are ranked")
+                + "; see the run record." : "";
         if (out.isEmpty()) {
-            return data.run().paths().stream().allMatch(p -> p.failures() == 0) ? ""
-                    : " Every strategy failed to form a portfolio at some rebalance, so all are ranked; see the run record.";
+            return all;
         }
-        return " Not ranked, because no portfolio could be formed at some rebalances and the path held cash or an"
-                + " old portfolio instead: " + Words.list(out) + ".";
+        return all + " Not ranked, because no portfolio could be formed at " + (noneClean ? "any rebalance" : "some"
+                + " rebalances") + " and the path held cash" + (noneClean ? "" : " or an old portfolio") + " instead: "
+                + Words.list(out) + ".";
     }
 
     String cost() {
@@ -166,6 +174,9 @@ final class Findings {
             parts.add(Words.periods(w) + ", " + best.strategy() + " at " + Formats.percent(data.summary(best).volatility())
                     + next.map(n -> " (" + n.strategy() + " " + Formats.percent(data.summary(n).volatility()) + "; "
                             + edge.volatilityGap(best.strategy(), n.strategy(), w) + ")").orElse(""));
+        }
+        if (parts.isEmpty()) {
+            return "No window has a strategy that formed a portfolio, so no window is ranked.";
         }
         return "Lowest realised volatility for each window, all a year: " + String.join("; ", parts) + ".";
     }

@@ -60,11 +60,18 @@ public record ReportData(Study study, RunResult<?> run, List<Summary> summaries,
      * The paths that compete in rankings ("lowest realised risk", best values): those that formed a
      * portfolio at every rebalance. A path that held cash or a stale portfolio because an
      * allocation failed would otherwise win on low risk for the wrong reason. When every path
-     * failed somewhere, all of them are ranked.
+     * failed somewhere, those that formed a portfolio at least once are ranked; a path that never
+     * formed one held cash throughout, and its "lowest volatility" is the risk-free rate's, so it
+     * is never ranked: when no path formed any portfolio the list is empty.
      */
     public List<PathResult> rankedPaths() {
         List<PathResult> clean = run.paths().stream().filter(p -> p.failures() == 0).toList();
-        return clean.isEmpty() ? run.paths() : clean;
+        return clean.isEmpty() ? run.paths().stream().filter(ReportData::investedOnce).toList() : clean;
+    }
+
+    /** Whether the path formed a portfolio at one rebalance at least. */
+    static boolean investedOnce(PathResult p) {
+        return p.failures() < p.rebalances().size();
     }
 
     /** The ranked paths of one window, in run order. */

@@ -74,7 +74,7 @@ public final class ReportWriter {
         Findings findings = new Findings(data, facts);
         SectionRows rows = new SectionRows(data, facts, styles);
         ChartSet charts = new ChartSet(data, styles, maker);
-        int focus = findings.lowestVolatility().window();
+        int focus = findings.lowestVolatility().map(PathResult::window).orElse(data.windows().get(0));
 
         ReportView.Headline headline = new ReportView.Headline(findings.headline(), new AnswerMatrix(data, styles).both(),
                 Untested.of(data), charts.growth(focus));

@@ -153,6 +153,32 @@ class DegenerateDataCliTest {
         assertTrue(Double.parseDouble(first[4]) < -1, "the leveraged loss exceeds the capital: " + first[4]);
     }
 
+    /**
+     * 72 assets and a 24-row window make every sample covariance singular, so the unbounded
+     * minimum-variance path forms no portfolio at any rebalance and holds cash throughout: its
+     * volatility is the risk-free rate's, 0, which the report must not call the lowest realised
+     * risk. With an equal-weight path beside it that invests, that path is the one ranked.
+     */
+    @Test
+    void pathThatNeverInvested_isNotRankedAsTheLowestRisk(@TempDir Path out, @TempDir Path both) throws IOException {
+        Path alone = study("never.yaml", "market-monthly.csv", "  - name: plain", "    risk: sample",
+                "    objective: min-variance");
+        Result r = sigmawalk("run", alone.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(0, r.code(), r.err());
+        String report = Files.readString(out.resolve("report.html"));
+        // 28 rebalances: every third month-end from 2011-01-31 to 2017-10-31; the apostrophe as the report escapes it.
+        assertTrue(report.contains("No strategy formed a portfolio at any of the 28 rebalances: every path held cash"
+                + " throughout, so its figures are the risk-free rate&#39;s and nothing is ranked"), report);
+        assertTrue(!report.contains("had the lowest realised volatility"), "no lowest-risk claim");
+        Path mixed = study("mixed.yaml", "market-monthly.csv", "  - name: plain", "    risk: sample",
+                "    objective: min-variance", "  - name: capped", "    risk: sample", "    objective: min-variance",
+                "    bounds: [0, 0.02]");
+        Result m = sigmawalk("run", mixed.toString(), "--out", both.toString(), "--quiet");
+        assertEquals(0, m.code(), m.err());
+        String mixedReport = Files.readString(both.resolve("report.html"));
+        assertTrue(mixedReport.contains("With a 24-period window, capped had the lowest realised volatility"), mixedReport);
+    }
+
     @Test
     void check_predictsTheSameWarnings_asTheRunRecords(@TempDir Path out) throws IOException {
         Path study = study("both.yaml", "flat-market.csv", "  - name: equal", "    objective: equal-weight");
