@@ -84,8 +84,9 @@ final class Cells {
         } else if (value > LARGEST_RETURN) {
             throw new InputException(new InputException.Location(file, line, column),
                     "'" + cell + "' is a return above 1e12 (a gain of a hundred trillion percent in one period),"
-                            + " which no asset earns; expected decimal returns (0.015 for a 1.5 % gain): if the"
-                            + " file holds prices, set values: prices in the study file");
+                            + " which no asset earns; expected decimal returns (0.015 for a 1.5 % gain): if an assets"
+                            + " or market file holds prices, set values: prices in the study file (risk-free and"
+                            + " factor files hold per-period rates and returns whatever values says)");
         }
     }
 

@@ -160,10 +160,24 @@ class DataFileFaultsTest {
         assertEquals("A01", e.location().column());
         assertTrue(e.getMessage().startsWith("assets.csv line 4, column 'A01': '1e200' is a return above 1e12"),
                 e.getMessage());
-        assertTrue(e.getMessage().endsWith("if the file holds prices, set values: prices in the study file"),
+        assertTrue(e.getMessage().endsWith("if an assets or market file holds prices, set values: prices in the study"
+                + " file (risk-free and factor files hold per-period rates and returns whatever values says)"),
                 e.getMessage());
         StudyData d = new StudyFixture(dir).edit("assets.csv", "2020-03-31,-0.03", "2020-03-31,1e12").load();
         assertEquals(1e12, d.panel().value(2, 0), 0.0);
+    }
+
+    /**
+     * The same bound in a risk-free file, which holds rates even in a study of prices: the message
+     * must not send the user to values: prices as the only fix.
+     */
+    @Test
+    void absurdlyLargeRate_isRefused_withoutSendingTheUserToPrices() {
+        InputException e = loadFails(new StudyFixture(dir).edit("riskfree.csv", "2020-03-31,0.001", "2020-03-31,1e300"));
+        assertEquals("riskfree.csv", e.location().file().getFileName().toString());
+        assertEquals(4, e.location().line());
+        assertTrue(e.getMessage().contains("risk-free and factor files hold per-period rates and returns whatever"
+                + " values says"), e.getMessage());
     }
 
     private static final String PRICES = "date,P1,P2\n2020-01-31,100,50\n2020-02-29,110,50\n2020-03-31,121,55\n"
