@@ -27,36 +27,37 @@ def opened(path):
         fail(f"{path}: cannot be read ({e.strerror})")
 
 
-def read_weights(path):
-    """{(strategy, window): {(date, asset): weight}} with the dates of each path."""
+def read_paths(path, columns, entry):
+    """{(strategy, window): {key: value}} from a CSV file whose header is exactly `columns`
+    (date, strategy and window first); entry(cells) gives a row's (key, value)."""
+    expected = ",".join(columns)
     paths = defaultdict(dict)
     with opened(path) as f:
         header = f.readline().strip()
-        if header != "date,strategy,window,asset,weight":
-            fail(f"{path}: header '{header}' is not date,strategy,window,asset,weight")
+        if header != expected:
+            fail(f"{path}: header '{header}' is not {expected}")
         for number, line in enumerate(f, start=2):
             try:
-                date, strategy, window, asset, weight = line.rstrip("\n").split(",")
-                paths[(strategy, window)][(date, asset)] = float(weight)
+                cells = line.rstrip("\n").split(",")
+                if len(cells) != len(columns):
+                    raise ValueError(line)
+                key, value = entry(cells)
+                paths[(cells[1], cells[2])][key] = value
             except ValueError:
-                fail(f"{path} line {number}: '{line.strip()}' is not date,strategy,window,asset,weight")
+                fail(f"{path} line {number}: '{line.strip()}' is not {expected}")
     return paths
+
+
+def read_weights(path):
+    """{(strategy, window): {(date, asset): weight}} with the dates of each path."""
+    return read_paths(path, ("date", "strategy", "window", "asset", "weight"),
+                      lambda c: ((c[0], c[3]), float(c[4])))
 
 
 def read_returns(path):
     """{(strategy, window): {date: (gross, net)}}."""
-    paths = defaultdict(dict)
-    with opened(path) as f:
-        header = f.readline().strip()
-        if header != "date,strategy,window,gross_return,net_return":
-            fail(f"{path}: header '{header}' is not date,strategy,window,gross_return,net_return")
-        for number, line in enumerate(f, start=2):
-            try:
-                date, strategy, window, gross, net = line.rstrip("\n").split(",")
-                paths[(strategy, window)][date] = (float(gross), float(net))
-            except ValueError:
-                fail(f"{path} line {number}: '{line.strip()}' is not date,strategy,window,gross,net")
-    return paths
+    return read_paths(path, ("date", "strategy", "window", "gross_return", "net_return"),
+                      lambda c: (c[0], (float(c[3]), float(c[4]))))
 
 
 def compare_returns(peer_path, product_path, tolerance):
