@@ -9,7 +9,8 @@ import java.util.Optional;
 /**
  * The grid's answer to "is the best point really better than its baseline?", corrected for
  * having searched the whole grid (Method §9). The best point is the strategy, window and point
- * with the lowest realised volatility among those its point's {@code tests.csv} compares. Its
+ * with the lowest realised volatility among those its point's {@code tests.csv} compares and
+ * that formed a portfolio at one rebalance at least (a path that never did held cash). Its
  * family-corrected p-value is the Romano-Wolf stepdown over every variance comparison of every
  * point, on the dates they share ({@link GridFamily}). Holm's (1979) step-down over the points'
  * own bootstrap p-values, each on its own full period, is kept beside it: it holds under any
@@ -57,16 +58,22 @@ public record GridEvidence(Optional<PointRow> best, Optional<PointRow> baseline,
         double[] holm = HolmAdjustment.adjust(comparisons.stream().mapToDouble(PointComparison::pValue).toArray());
         PointRow best = null;
         int bestTest = -1;
+        boolean tested = false;
         for (PointRow r : rows) {
             int t = indexOf(comparisons, r);
-            if (t >= 0 && Double.isFinite(r.volatility()) && (best == null || r.volatility() < best.volatility())) {
+            tested |= t >= 0;
+            // A path that never formed a portfolio held cash: its low volatility is the
+            // risk-free rate's, so it is never the grid's best.
+            if (t >= 0 && r.invested() && Double.isFinite(r.volatility())
+                    && (best == null || r.volatility() < best.volatility())) {
                 best = r;
                 bestTest = t;
             }
         }
         if (best == null) {
             return new GridEvidence(Optional.empty(), Optional.empty(), Double.NaN, Double.NaN, Double.NaN, comparisons,
-                    holm, GridFamily.none("no point has a strategy compared with another"));
+                    holm, GridFamily.none(tested ? "no compared strategy formed a portfolio at any rebalance"
+                            : "no point has a strategy compared with another"));
         }
         PointComparison test = comparisons.get(bestTest);
         GridFamily family = GridFamily.of(candidates, bestTest, tests, threads);

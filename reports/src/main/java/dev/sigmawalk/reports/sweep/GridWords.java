@@ -26,6 +26,13 @@ final class GridWords {
             if (failed == plan.points().size()) {
                 return "Every point failed (the reasons are listed below), so the grid names no best point.";
             }
+            if (e.comparisonCount() > 0) {
+                return "No strategy tested against a baseline formed a portfolio at any rebalance"
+                        + (failed == 0 ? "" : " of the points that ran (" + failed + " of " + plan.points().size()
+                                + " failed)")
+                        + ": each such path held cash throughout, so its volatility is the risk-free rate's and the"
+                        + " grid names no best point.";
+            }
             return "No point " + (failed == 0 ? "" : "that ran ") + "has a strategy tested against a baseline"
                     + (failed == 0 ? "" : " (" + failed + " of " + plan.points().size() + " failed)")
                     + ", so the grid names no best point.";

@@ -15,24 +15,45 @@ import java.util.Set;
 
 /**
  * Reads back what the sweep needs from a finished point's folder ({@code summary.csv},
- * {@code tests.csv}, {@code returns.csv}), by column name, so that a reused point and a point just run are read the
+ * {@code rebalances.csv}, {@code tests.csv}, {@code returns.csv}), by column name, so that a reused point and a point just run are read the
  * same way.
  */
 final class PointFiles {
     /** The measure of {@code tests.csv} whose difference is the volatility comparison. */
     static final String VARIANCE = "variance";
+    /** The status of a rebalance of {@code rebalances.csv} that formed a portfolio. */
+    static final String OK = "ok";
 
     private PointFiles() {
     }
 
     static List<PointRow> summary(GridPoint point) {
         Table t = Table.read(point.folder().resolve("summary.csv"));
+        Set<String> invested = invested(point);
         List<PointRow> rows = new ArrayList<>();
         for (String[] r : t.rows()) {
-            rows.add(new PointRow(point, t.text(r, "strategy"), t.text(r, "window"), t.number(r, "volatility"),
-                    t.number(r, "sharpe"), t.number(r, "mean_turnover"), t.number(r, "bias")));
+            String strategy = t.text(r, "strategy");
+            String window = t.text(r, "window");
+            rows.add(new PointRow(point, strategy, window, t.number(r, "volatility"), t.number(r, "sharpe"),
+                    t.number(r, "mean_turnover"), t.number(r, "bias"),
+                    window.isEmpty() || invested.contains(key(strategy, window))));
         }
         return rows;
+    }
+
+    /**
+     * The strategy and window paths of {@code rebalances.csv} with at least one rebalance whose
+     * status is {@code ok}: those that formed a portfolio once at least.
+     */
+    private static Set<String> invested(GridPoint point) {
+        Table t = Table.read(point.folder().resolve("rebalances.csv"));
+        Set<String> out = new HashSet<>();
+        for (String[] r : t.rows()) {
+            if (OK.equals(t.text(r, "status"))) {
+                out.add(key(t.text(r, "strategy"), t.text(r, "window")));
+            }
+        }
+        return out;
     }
 
     static List<PointComparison> varianceTests(GridPoint point) {

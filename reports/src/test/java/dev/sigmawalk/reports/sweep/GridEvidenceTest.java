@@ -67,6 +67,31 @@ class GridEvidenceTest {
                 "the best's family p-value is its member's");
     }
 
+    /**
+     * A path that never formed a portfolio held cash throughout: its volatility, here 0.01, is
+     * the risk-free rate's, so the lowest volatility of the grid is not a model's and the best is
+     * the next compared path that invested. When the only compared path never invested there is
+     * no best, and the family says why.
+     */
+    @Test
+    void pathThatNeverInvested_isNeverTheBest() {
+        GridPoint a = point(1);
+        GridPoint b = point(2);
+        PointRow cash = new PointRow(a, "model", "36", 0.01, 0.0, 0.0, Double.NaN, false);
+        List<PointRow> rows = List.of(cash, row(a, "base", "36", 0.13), row(b, "model", "36", 0.10),
+                row(b, "base", "36", 0.14));
+        List<ContrastReturns> tests = List.of(withReturns(new PointComparison(a, "model", "base", "36", 0.01), 1),
+                withReturns(new PointComparison(b, "model", "base", "36", 0.04), 2));
+        GridEvidence e = GridEvidence.of(rows, tests, TESTS);
+        assertEquals("002", e.best().get().point().label());
+        assertEquals(0.10, e.best().get().volatility(), EXACT);
+        assertEquals(0.04, e.rawPValue(), EXACT, "the invested path's own p-value");
+
+        GridEvidence none = GridEvidence.of(List.of(cash, row(a, "base", "36", 0.13)), tests.subList(0, 1), TESTS);
+        assertTrue(none.best().isEmpty() && Double.isNaN(none.familyPValue()));
+        assertEquals("no compared strategy formed a portfolio at any rebalance", none.family().notFormed().get());
+    }
+
     @Test
     void noTestedStrategy_namesNoBest() {
         GridEvidence e = GridEvidence.of(List.of(row(point(1), "equal", "36", 0.1)), List.of(), TESTS);

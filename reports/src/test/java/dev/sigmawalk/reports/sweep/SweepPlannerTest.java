@@ -150,4 +150,33 @@ class SweepPlannerTest {
         assertEquals("No point has a strategy tested against a baseline, so the grid names no best point.",
                 GridWords.answer(plan, none, 0));
     }
+
+    /**
+     * Compared paths that all held cash (no portfolio at any rebalance) leave no best point, and
+     * the page says so instead of claiming that nothing was compared.
+     */
+    @Test
+    void noBestPoint_whenEveryComparedPathHeldCash_saysSo() throws IOException {
+        SweepPlan plan = plan("walkforward.cost_bps: [5, 20]");
+        GridPoint first = plan.points().get(0);
+        PointComparison c = new PointComparison(first, "model", "base", "36", 0.5);
+        int[] days = new int[40];
+        double[] a = new double[40];
+        double[] b = new double[40];
+        for (int t = 0; t < 40; t++) {
+            days[t] = 18_000 + t;
+            a[t] = 0.001 * ((t * 7) % 5 - 2);
+            b[t] = 0.002 * ((t * 3) % 7 - 3);
+        }
+        GridEvidence none = GridEvidence.of(List.of(new PointRow(first, "model", "36", 0.0, 0.0, 0.0, Double.NaN, false),
+                new PointRow(first, "base", "36", 0.1, 0.2, 0.1, 1.0)), List.of(new ContrastReturns(c, days, a, b)),
+                new dev.sigmawalk.engine.evidence.DifferenceTests(dev.sigmawalk.engine.evidence.HacKernel.PARZEN,
+                        plan.base().evidence()));
+        assertEquals("No strategy tested against a baseline formed a portfolio at any rebalance: each such path held"
+                + " cash throughout, so its volatility is the risk-free rate's and the grid names no best point.",
+                GridWords.answer(plan, none, 0));
+        assertEquals("No strategy tested against a baseline formed a portfolio at any rebalance of the points that ran"
+                + " (1 of 2 failed): each such path held cash throughout, so its volatility is the risk-free rate's and"
+                + " the grid names no best point.", GridWords.answer(plan, none, 1));
+    }
 }
