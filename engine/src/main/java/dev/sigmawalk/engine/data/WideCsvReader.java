@@ -21,7 +21,10 @@ import java.util.Set;
  * on the way. Only the header line, a line holding a quoted cell and a faulty cell go through
  * text. Accepted as spreadsheets export them: a UTF-8 byte-order mark, LF, CRLF or CR line ends,
  * blanks around cells, quoted cells; blank lines, and lines of nothing but commas, are skipped
- * but counted, so every line number is the one a text editor shows.
+ * but counted, so every line number is the one a text editor shows. A header that ends in empty
+ * cells (columns beside the data that a spreadsheet once saw used or formatted) is read without
+ * them, as long as every row leaves those cells empty too or stops before them; a value under a
+ * column without a name is refused at its line and cell.
  */
 final class WideCsvReader {
     private static final String DATE = "date";
@@ -36,6 +39,8 @@ final class WideCsvReader {
     private final String ratesColumn;
     private final DecimalBytes number = new DecimalBytes();
     private List<String> columns;
+    /** Empty cells that end the header, read past (empty) in every row. */
+    private int unnamed;
     private boolean[] positive;
     private RowStore rows;
     private byte[] b;
@@ -272,8 +277,20 @@ final class WideCsvReader {
             }
             target[base + j] = v;
         }
+        for (int k = 0; k < unnamed && p < limit && b[p] == ','; k++) {
+            p++;
+            while (p < limit && (b[p] == ' ' || b[p] == '\t')) {
+                p++;
+            }
+            if (p == limit && !last) {
+                return MORE;
+            }
+            if (p < limit && b[p] != ',' && b[p] != '\n' && b[p] != '\r') {
+                return valueWithoutColumn(cols + 2 + k);
+            }
+        }
         if (p < limit && b[p] == ',') {
-            return wrongWidth(cols + 1);
+            return wrongWidth(cols + unnamed + 2);
         }
         int next = consumeLineEnd(p);
         if (next == MORE) {
@@ -336,7 +353,31 @@ final class WideCsvReader {
         }
         List<String> cells = CsvLine.split(b, p, end < 0 ? limit : end, file, line);
         throw new InputException(new InputException.Location(file, line, null),
-                "the row has " + Math.max(seen, cells.size()) + " cells but the header has " + (columns.size() + 1));
+                "the row has " + Math.max(seen, cells.size()) + " cells but the header has " + headerCells());
+    }
+
+    /** The header's cell count as the file has it, its empty cells at the end included. */
+    private String headerCells() {
+        int named = columns.size() + 1;
+        return unnamed == 0 ? String.valueOf(named)
+                : (named + unnamed) + " (" + named + " named, then " + unnamed + " empty)";
+    }
+
+    /** A line with a value in cell {@code cell} (counted from 1), past the header's named cells. */
+    private int valueWithoutColumn(int cell) {
+        int end = lineEnd(pos);
+        if (end < 0 && !in.atEnd()) {
+            return MORE;
+        }
+        List<String> cells = CsvLine.split(b, pos, end < 0 ? limit : end, file, line);
+        throw unnamedValue(cells, cell);
+    }
+
+    private InputException unnamedValue(List<String> cells, int cell) {
+        return new InputException(new InputException.Location(file, line, null),
+                "cell " + cell + " holds '" + cells.get(cell - 1) + "' but the header names no column there (it names "
+                        + (columns.size() + 1) + " cells, then " + unnamed + " empty); name the column or delete the"
+                        + " value");
     }
 
     /** A line with a quoted cell, read through text like the header. */
@@ -348,9 +389,14 @@ final class WideCsvReader {
         int stop = end < 0 ? limit : end;
         List<String> cells = CsvLine.split(b, pos, stop, file, line);
         int cols = columns.size();
-        if (cells.size() != cols + 1) {
+        if (cells.size() < cols + 1 || cells.size() > cols + 1 + unnamed) {
             throw new InputException(new InputException.Location(file, line, null),
-                    "the row has " + cells.size() + " cells but the header has " + (cols + 1));
+                    "the row has " + cells.size() + " cells but the header has " + headerCells());
+        }
+        for (int k = cols + 1; k < cells.size(); k++) {
+            if (!cells.get(k).isEmpty()) {
+                throw unnamedValue(cells, k + 1);
+            }
         }
         LocalDate date = Cells.date(cells.get(0), file, line, DATE);
         rows.requireAfterLast(date, file, line, cells.get(0));
@@ -371,6 +417,12 @@ final class WideCsvReader {
     }
 
     private List<String> valueColumns(List<String> header) {
+        int named = header.size();
+        while (named > 2 && header.get(named - 1).isEmpty()) {
+            named--;
+        }
+        unnamed = header.size() - named;
+        header = header.subList(0, named);
         if (!DATE.equals(header.get(0))) {
             throw new InputException(new InputException.Location(file, 1, header.get(0)),
                     "the first column is '" + header.get(0) + "'; expected 'date'"
@@ -385,13 +437,8 @@ final class WideCsvReader {
         for (int j = 1; j < header.size(); j++) {
             String name = header.get(j);
             if (name.isEmpty()) {
-                boolean trailing = header.subList(j, header.size()).stream().allMatch(String::isEmpty);
                 throw new InputException(new InputException.Location(file, 1, null),
-                        "header cell " + (j + 1) + " is empty; every column needs a name"
-                                + (trailing ? "; the header ends in " + (header.size() - j) + " empty cell"
-                                        + (header.size() - j == 1 ? "" : "s") + ", as a spreadsheet writes when empty"
-                                        + " columns beside the data were once used or formatted: delete those columns"
-                                        + " and save again" : ""));
+                        "header cell " + (j + 1) + " is empty; every column needs a name");
             }
             Names.requireInert(name, file, 1, null, "column");
             if (!seen.add(name)) {

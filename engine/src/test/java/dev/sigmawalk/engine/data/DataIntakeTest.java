@@ -159,15 +159,25 @@ class DataIntakeTest {
         assertTrue(e.getMessage().startsWith("assets.csv line 11, column 'A01': 'x' is not a number"), e.getMessage());
     }
 
-    /** Empty columns after the data make empty header cells: refused, with what they are and the fix. */
+    /**
+     * Empty columns after the data make empty header cells, and a spreadsheet writes the same
+     * empty cells on every row (or stops the row before them): the file is read without them, the
+     * same panel as the plain file. A value under such a column is refused at its line and cell.
+     */
     @Test
-    void trailingEmptyHeaderCells_areNamedAsSuch() {
+    void trailingEmptyHeaderCells_areReadPast_unlessARowHasAValueThere() {
+        ReturnPanel plain = new StudyFixture(dir).load().panel();
         String assets = StudyFixture.ASSETS.replace("date,A01,A02,A03", "date,A01,A02,A03,,")
-                .replaceAll("(?m)^(2020-\\d\\d-\\d\\d,[^\\n]*)$", "$1,,");
-        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir).write("assets.csv", assets).load());
-        assertEquals("assets.csv line 1: header cell 5 is empty; every column needs a name; the header ends in 2 empty"
-                + " cells, as a spreadsheet writes when empty columns beside the data were once used or formatted:"
-                + " delete those columns and save again", e.getMessage());
+                .replaceAll("(?m)^(2020-0[1-5]-\\d\\d,[^\\n]*)$", "$1,,")
+                .replaceAll("(?m)^(2020-0[6-9]-\\d\\d,[^\\n]*)$", "$1, ,");
+        ReturnPanel exported = new StudyFixture(dir).write("assets.csv", assets).load().panel();
+        assertEquals(plain.assets(), exported.assets());
+        assertArrayEquals(plain.dates(), exported.dates());
+        assertArrayEquals(plain.rawReturns(), exported.rawReturns());
+        String stray = assets.replaceFirst("(?m)^(2020-03-31,[^\\n]*),,$", "$1,,0.5");
+        InputException e = assertThrows(InputException.class, () -> new StudyFixture(dir).write("assets.csv", stray).load());
+        assertEquals("assets.csv line 4: cell 6 holds '0.5' but the header names no column there (it names 4 cells,"
+                + " then 2 empty); name the column or delete the value", e.getMessage());
     }
 
     /**

@@ -162,6 +162,35 @@ class WideCsvReaderTest {
         assertEquals("w.csv line 2: the row has 4 cells but the header has 3", e.getMessage());
     }
 
+    /**
+     * Empty cells ending the header are read past in rows that leave them empty, quoted or not,
+     * or that stop before them; a row longer than the header with them, or with a value in one,
+     * is refused naming the cell.
+     */
+    @Test
+    void emptyCellsEndingTheHeader_areReadPast() throws IOException {
+        Path file = dir.resolve("t.csv");
+        Files.writeString(file, "date,A,B,,\n2020-01-31,0.1,0.2,,\n2020-02-29,0.3,0.4\n2020-03-31,\"0.5\",0.6,,\"\"\n"
+                + "2020-04-30,0.7,0.8, ,\n");
+        WideTable t = WideCsvReader.read(file, ValueKind.RETURNS, null).table();
+        assertEquals(List.of("A", "B"), t.columns());
+        assertArrayEquals(new int[] {2, 3, 4, 5}, t.lines());
+        assertEquals(0.4, t.value(1, 1), 0.0);
+        assertEquals(0.5, t.value(2, 0), 0.0);
+        assertEquals(0.8, t.value(3, 1), 0.0);
+        Files.writeString(file, "date,A,B,,\n2020-01-31,0.1,0.2,,x\n");
+        InputException e = assertThrows(InputException.class, () -> WideCsvReader.read(file, ValueKind.RETURNS, null));
+        assertEquals("t.csv line 2: cell 5 holds 'x' but the header names no column there (it names 3 cells, then 2"
+                + " empty); name the column or delete the value", e.getMessage());
+        Files.writeString(file, "date,A,B,,\n2020-01-31,\"0.1\",0.2,7,\n");
+        e = assertThrows(InputException.class, () -> WideCsvReader.read(file, ValueKind.RETURNS, null));
+        assertEquals("t.csv line 2: cell 4 holds '7' but the header names no column there (it names 3 cells, then 2"
+                + " empty); name the column or delete the value", e.getMessage());
+        Files.writeString(file, "date,A,B,,\n2020-01-31,0.1,0.2,,,\n");
+        e = assertThrows(InputException.class, () -> WideCsvReader.read(file, ValueKind.RETURNS, null));
+        assertEquals("t.csv line 2: the row has 6 cells but the header has 5 (3 named, then 2 empty)", e.getMessage());
+    }
+
     /** A header and a row longer than the first chunk (1 MiB) make the buffer grow rather than loop. */
     @Test
     void linesLongerThanAChunk_areRead() throws IOException {
